@@ -1,0 +1,69 @@
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import cookieParser from 'cookie-parser';
+import express, { type Express } from 'express';
+import { authRouter, meRouter } from './auth/auth-router';
+import { createAuthenticator } from './auth/authenticate';
+import { apiNotFound, errorHandler } from './core/error-handler';
+import type { Database } from './db/database';
+import { healthRouter } from './health/health-router';
+import type { Mailer } from './mail/mailer';
+import { membersRouter } from './members/members-router';
+
+/** Everything the app needs from outside; tests pass their own. */
+export interface AppDeps {
+  db: Database;
+  mailer: Mailer;
+  jwtSecret: string;
+  appUrl: string;
+  accessTokenSeconds?: number;
+  refreshTokenDays?: number;
+  signInLimit?: number;
+  /** Folder of the built web app to serve with an SPA fallback; omitted in API-only tests. */
+  webDist?: string;
+  version?: string;
+}
+
+/** Builds the Express app: API routes under /api, the web app (when built) everywhere else. */
+export function createApp(deps: AppDeps): Express {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+  app.set('query parser', 'extended');
+
+  const authn = createAuthenticator(deps.db, deps.jwtSecret);
+  const config = {
+    jwtSecret: deps.jwtSecret,
+    accessTokenSeconds: deps.accessTokenSeconds ?? 900,
+    refreshTokenDays: deps.refreshTokenDays ?? 14,
+    appUrl: deps.appUrl,
+    signInLimit: deps.signInLimit ?? 10,
+    secureCookies: deps.appUrl.startsWith('https:'),
+  };
+
+  const api = express.Router();
+  api.use(express.json({ limit: '1mb' }));
+  api.use(cookieParser());
+  api.use((_req, res, next) => {
+    res.set('Cache-Control', 'no-store');
+    next();
+  });
+  api.use('/health', healthRouter(deps.db, deps.version ?? '0.1.0'));
+  api.use('/auth', authRouter({ db: deps.db, mailer: deps.mailer, authn, config }));
+  api.use('/me', meRouter({ db: deps.db, authn }));
+  api.use('/members', membersRouter({ db: deps.db, mailer: deps.mailer, authn, appUrl: deps.appUrl }));
+  api.use(apiNotFound);
+  api.use(errorHandler);
+  app.use('/api', api);
+
+  if (deps.webDist && existsSync(path.join(deps.webDist, 'index.html'))) {
+    const root = path.resolve(deps.webDist);
+    app.use(express.static(root, { index: false, maxAge: '1h' }));
+    app.get('/{*splat}', (_req, res) => {
+      res.set('Cache-Control', 'no-cache');
+      res.sendFile(path.join(root, 'index.html'));
+    });
+  }
+  app.use(errorHandler);
+  return app;
+}

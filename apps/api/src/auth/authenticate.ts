@@ -1,0 +1,72 @@
+import type { RequestHandler } from 'express';
+import passport from 'passport';
+import { ExtractJwt, Strategy as JwtStrategy } from 'passport-jwt';
+import type { Role } from '@batchproof/shared';
+import { AppError, forbidden } from '../core/app-error';
+import type { Database } from '../db/database';
+import { JWT_ALGORITHM, JWT_AUDIENCE, JWT_ISSUER } from './access-tokens';
+import { findUserById } from './auth-repository';
+
+/** The signed-in member, as handlers see it on `req.user`. */
+export interface AuthUser {
+  id: string;
+  workshopId: string;
+  role: Role;
+  name: string;
+  email: string;
+}
+
+declare global {
+  // eslint-disable-next-line @typescript-eslint/no-namespace
+  namespace Express {
+    // eslint-disable-next-line @typescript-eslint/no-empty-object-type
+    interface User extends AuthUser {}
+  }
+}
+
+/**
+ * Builds the bearer-token authenticator. The user is loaded from the database on every request,
+ * so a removed member or a changed role takes effect at once, not when the token expires.
+ */
+export function createAuthenticator(db: Database, secret: string) {
+  const strategy = new JwtStrategy(
+    {
+      jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
+      secretOrKey: secret,
+      algorithms: [JWT_ALGORITHM],
+      issuer: JWT_ISSUER,
+      audience: JWT_AUDIENCE,
+    },
+    (payload: { sub?: string; wid?: string }, done: (e: unknown, u?: AuthUser | false) => void) => {
+      if (!payload.sub || !payload.wid) return done(null, false);
+      findUserById(db, payload.sub).then(
+        (u) => done(null, u && u.workshopId === payload.wid ? u : false),
+        (err) => done(err),
+      );
+    },
+  );
+  const instance = new passport.Passport();
+  instance.use('jwt', strategy);
+
+  const authenticate: RequestHandler = (req, res, next) => {
+    instance.authenticate('jwt', { session: false }, (err: unknown, user: AuthUser | false) => {
+      if (err) return next(err);
+      if (!user) {
+        return next(new AppError(401, 'unauthenticated', 'Sign in to continue.'));
+      }
+      req.user = user;
+      next();
+    })(req, res, next);
+  };
+
+  /** Authenticates, then lets through only the given roles (403 otherwise). */
+  const allow =
+    (roles: readonly Role[]): RequestHandler[] => [
+      authenticate,
+      (req, _res, next) => next(roles.includes(req.user!.role) ? undefined : forbidden()),
+    ];
+
+  return { authenticate, allow };
+}
+
+export type Authenticator = ReturnType<typeof createAuthenticator>;

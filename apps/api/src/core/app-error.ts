@@ -1,0 +1,20 @@
+import type { ErrorCode } from '@batchproof/shared';
+
+/** An error the API turns into the error envelope with the given status. */
+export class AppError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: ErrorCode,
+    message: string,
+    readonly fieldErrors?: Record<string, string[]>,
+  ) {
+    super(message);
+    this.name = 'AppError';
+  }
+}
+
+export const notFound = (what = 'That record') => new AppError(404, 'not_found', `${what} was not found.`);
+export const forbidden = () =>
+  new AppError(403, 'forbidden', 'Your role in this workshop does not allow this.');
+export const conflict = (message: string, fieldErrors?: Record<string, string[]>) =>
+  new AppError(409, 'conflict', message, fieldErrors);

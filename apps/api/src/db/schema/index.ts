@@ -1,0 +1,4 @@
+export * from './workshops';
+export * from './users';
+export * from './tokens';
+export * from './audit';

@@ -1,0 +1,60 @@
+import { index, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { id, timestamps } from './columns';
+import { roleEnum, users } from './users';
+import { workshops } from './workshops';
+
+/** Pending invitations; only the SHA-256 of the token sent by e-mail is kept. */
+export const invitations = pgTable(
+  'invitations',
+  {
+    id: id(),
+    workshopId: uuid()
+      .notNull()
+      .references(() => workshops.id, { onDelete: 'cascade' }),
+    email: text().notNull(),
+    role: roleEnum().notNull(),
+    tokenHash: text().notNull().unique(),
+    invitedBy: uuid().references(() => users.id, { onDelete: 'set null' }),
+    expiresAt: timestamp({ withTimezone: true }).notNull(),
+    acceptedAt: timestamp({ withTimezone: true }),
+    ...timestamps,
+  },
+  (t) => [index('invitations_workshop_idx').on(t.workshopId)],
+);
+
+/** One-time password-reset links; only the token's SHA-256 is kept. */
+export const passwordResets = pgTable('password_resets', {
+  id: id(),
+  workshopId: uuid()
+    .notNull()
+    .references(() => workshops.id, { onDelete: 'cascade' }),
+  userId: uuid()
+    .notNull()
+    .references(() => users.id, { onDelete: 'cascade' }),
+  tokenHash: text().notNull().unique(),
+  expiresAt: timestamp({ withTimezone: true }).notNull(),
+  usedAt: timestamp({ withTimezone: true }),
+  ...timestamps,
+});
+
+/**
+ * Refresh sessions: a long-lived opaque token held in an httpOnly cookie, rotated on every
+ * refresh; only its SHA-256 is kept, and sign-out or reuse revokes it.
+ */
+export const refreshSessions = pgTable(
+  'refresh_sessions',
+  {
+    id: id(),
+    workshopId: uuid()
+      .notNull()
+      .references(() => workshops.id, { onDelete: 'cascade' }),
+    userId: uuid()
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    tokenHash: text().notNull().unique(),
+    expiresAt: timestamp({ withTimezone: true }).notNull(),
+    revokedAt: timestamp({ withTimezone: true }),
+    ...timestamps,
+  },
+  (t) => [index('refresh_sessions_user_idx').on(t.userId)],
+);

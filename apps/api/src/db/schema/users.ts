@@ -1,0 +1,26 @@
+import { index, pgEnum, pgTable, text, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import { ROLES } from '@batchproof/shared';
+import { id, timestamps } from './columns';
+import { workshops } from './workshops';
+
+export const roleEnum = pgEnum('member_role', ROLES);
+
+/**
+ * A person who can sign in, always a member of exactly one workshop with one role.
+ * E-mail is stored lower-cased and is unique across the installation.
+ */
+export const users = pgTable(
+  'users',
+  {
+    id: id(),
+    workshopId: uuid()
+      .notNull()
+      .references(() => workshops.id, { onDelete: 'cascade' }),
+    email: text().notNull(),
+    name: text().notNull(),
+    passwordHash: text().notNull(),
+    role: roleEnum().notNull(),
+    ...timestamps,
+  },
+  (t) => [uniqueIndex('users_email_key').on(t.email), index('users_workshop_idx').on(t.workshopId)],
+);

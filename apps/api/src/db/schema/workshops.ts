@@ -1,0 +1,9 @@
+import { pgTable, text } from 'drizzle-orm/pg-core';
+import { id, timestamps } from './columns';
+
+/** The tenant: one small business and everything it records. */
+export const workshops = pgTable('workshops', {
+  id: id(),
+  name: text().notNull(),
+  ...timestamps,
+});

@@ -1,0 +1,31 @@
+import { z } from 'zod';
+
+const envSchema = z.object({
+  NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
+  PORT: z.coerce.number().int().min(0).max(65535).default(3000),
+  HOST: z.string().default('127.0.0.1'),
+  DATABASE_URL: z.string().url(),
+  JWT_SECRET: z.string().min(32, 'JWT_SECRET must be at least 32 characters'),
+  ACCESS_TOKEN_SECONDS: z.coerce.number().int().positive().default(900),
+  REFRESH_TOKEN_DAYS: z.coerce.number().int().positive().default(14),
+  APP_URL: z.string().url().default('http://127.0.0.1:3000'),
+  SMTP_HOST: z.string().default('127.0.0.1'),
+  SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(2525),
+  MAIL_FROM: z.string().default('Batchproof <no-reply@batchproof.example>'),
+  SIGN_IN_LIMIT: z.coerce.number().int().positive().default(10),
+  WEB_DIST: z.string().optional(),
+  MIGRATIONS_DIR: z.string().default('drizzle'),
+});
+
+/** The validated environment the API runs with. */
+export type Env = z.infer<typeof envSchema>;
+
+/** Validates the process environment once at start-up; throws a readable error when it is wrong. */
+export function loadEnv(source: Record<string, string | undefined> = process.env): Env {
+  const parsed = envSchema.safeParse(source);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`);
+    throw new Error(`The environment is not valid:\n${lines.join('\n')}`);
+  }
+  return parsed.data;
+}

@@ -1,0 +1,45 @@
+import type { Role } from '@batchproof/shared';
+import type { OutgoingMail } from './mailer';
+
+const escapeHtml = (s: string) =>
+  s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
+
+function wrap(paragraphs: string[], link: { href: string; label: string }): string {
+  const body = paragraphs.map((p) => `<p>${escapeHtml(p)}</p>`).join('');
+  return `<!doctype html><html><body style="font-family:sans-serif;line-height:1.5">${body}<p><a href="${escapeHtml(link.href)}">${escapeHtml(link.label)}</a></p></body></html>`;
+}
+
+/** The invitation a workshop owner sends to a new member. */
+export function invitationMail(input: {
+  to: string;
+  workshopName: string;
+  inviterName: string;
+  role: Role;
+  link: string;
+  days: number;
+}): OutgoingMail {
+  const lines = [
+    `${input.inviterName} has invited you to join ${input.workshopName} on Batchproof as ${input.role}.`,
+    `Open the link below to choose your password. It works once and expires in ${input.days} days.`,
+  ];
+  return {
+    to: input.to,
+    subject: `Join ${input.workshopName} on Batchproof`,
+    text: `${lines.join('\n\n')}\n\n${input.link}\n`,
+    html: wrap(lines, { href: input.link, label: 'Accept the invitation' }),
+  };
+}
+
+/** The password-reset link. */
+export function passwordResetMail(input: { to: string; link: string; minutes: number }): OutgoingMail {
+  const lines = [
+    'Someone asked to reset the password of your Batchproof account.',
+    `Open the link below within ${input.minutes} minutes to choose a new one. If it was not you, ignore this e-mail; your password stays as it is.`,
+  ];
+  return {
+    to: input.to,
+    subject: 'Reset your Batchproof password',
+    text: `${lines.join('\n\n')}\n\n${input.link}\n`,
+    html: wrap(lines, { href: input.link, label: 'Choose a new password' }),
+  };
+}

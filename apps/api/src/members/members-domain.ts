@@ -1,0 +1,127 @@
+import type {
+  AcceptInvitation,
+  InvitationCreate,
+  InvitationPreview,
+  MemberListQuery,
+  Role,
+} from '@batchproof/shared';
+import { hashToken, newOpaqueToken } from '../auth/access-tokens';
+import { hashPassword } from '../auth/auth-domain';
+import type { AuthUser } from '../auth/authenticate';
+import { AppError, conflict, notFound } from '../core/app-error';
+import type { Database } from '../db/database';
+import { invitationMail } from '../mail/mail-templates';
+import type { Mailer } from '../mail/mailer';
+import * as repo from './members-repository';
+
+const INVITATION_DAYS = 7;
+const iso = <T extends Record<string, unknown>>(row: T) =>
+  Object.fromEntries(Object.entries(row).map(([k, v]) => [k, v instanceof Date ? v.toISOString() : v]));
+
+export async function listMembers(db: Database, actor: AuthUser, q: MemberListQuery) {
+  return { items: (await repo.listMembers(db, actor.workshopId, q)).map(iso) };
+}
+
+export async function listInvitations(db: Database, actor: AuthUser) {
+  return { items: (await repo.listPendingInvitations(db, actor.workshopId)).map(iso) };
+}
+
+/** Creates an invitation and e-mails its one-time link. */
+export async function invite(
+  db: Database,
+  mailer: Mailer,
+  appUrl: string,
+  actor: AuthUser,
+  input: InvitationCreate,
+) {
+  if (await repo.countUsersWithEmail(db, input.email)) {
+    throw conflict('This e-mail already belongs to a Batchproof account.', {
+      email: ['This e-mail already belongs to a Batchproof account.'],
+    });
+  }
+  const token = newOpaqueToken();
+  const created = await repo.insertInvitation(db, {
+    workshopId: actor.workshopId,
+    email: input.email,
+    role: input.role,
+    tokenHash: hashToken(token),
+    invitedBy: actor.id,
+    expiresAt: new Date(Date.now() + INVITATION_DAYS * 86_400_000),
+  });
+  const workshop = await db.query.workshops.findFirst({
+    where: (w, { eq }) => eq(w.id, actor.workshopId),
+  });
+  await mailer.send(
+    invitationMail({
+      to: input.email,
+      workshopName: workshop!.name,
+      inviterName: actor.name,
+      role: input.role,
+      link: `${appUrl}/accept-invite/${encodeURIComponent(token)}`,
+      days: INVITATION_DAYS,
+    }),
+  );
+  return iso(created);
+}
+
+export async function revokeInvitation(db: Database, actor: AuthUser, id: string) {
+  if (!(await repo.deleteInvitation(db, actor.workshopId, id))) throw notFound('That invitation');
+}
+
+export async function previewInvitation(db: Database, token: string): Promise<InvitationPreview> {
+  const found = await repo.findLiveInvitation(db, hashToken(token));
+  if (!found) throw notFound('That invitation (it may have expired or been used)');
+  return {
+    email: found.email,
+    role: found.role,
+    workshopName: found.workshopName,
+    invitedBy: found.invitedBy ?? 'A workshop owner',
+  };
+}
+
+/** Turns a live invitation into a member with a password, once. */
+export async function acceptInvitation(db: Database, input: AcceptInvitation): Promise<AuthUser> {
+  const passwordHash = await hashPassword(input.password);
+  return db.transaction(async (tx) => {
+    const found = await repo.findLiveInvitation(tx, hashToken(input.token));
+    if (!found) throw notFound('That invitation (it may have expired or been used)');
+    if (!(await repo.markInvitationAccepted(tx, found.id))) throw notFound('That invitation');
+    if (await repo.countUsersWithEmail(tx, found.email)) {
+      throw conflict('This e-mail already belongs to a Batchproof account. Sign in instead.');
+    }
+    return repo.insertMember(tx, {
+      workshopId: found.workshopId,
+      email: found.email,
+      name: input.name,
+      passwordHash,
+      role: found.role,
+    });
+  });
+}
+
+const lastOwner = () =>
+  new AppError(409, 'conflict', 'A workshop needs at least one owner. Make someone else owner first.', {
+    role: ['A workshop needs at least one owner.'],
+  });
+
+/** Changes a member's role; the last owner cannot be demoted. */
+export async function changeRole(db: Database, actor: AuthUser, id: string, role: Role) {
+  return db.transaction(async (tx) => {
+    const owners = await repo.lockOwners(tx, actor.workshopId);
+    const member = await repo.findMember(tx, actor.workshopId, id);
+    if (!member) throw notFound('That member');
+    if (member.role === 'owner' && role !== 'owner' && owners.length <= 1) throw lastOwner();
+    return iso((await repo.setRole(tx, actor.workshopId, id, role))!);
+  });
+}
+
+/** Removes a member; the last owner cannot be removed. */
+export async function removeMember(db: Database, actor: AuthUser, id: string) {
+  await db.transaction(async (tx) => {
+    const owners = await repo.lockOwners(tx, actor.workshopId);
+    const member = await repo.findMember(tx, actor.workshopId, id);
+    if (!member) throw notFound('That member');
+    if (member.role === 'owner' && owners.length <= 1) throw lastOwner();
+    await repo.deleteMember(tx, actor.workshopId, id);
+  });
+}

@@ -1,0 +1,47 @@
+import { z } from 'zod';
+
+/** Machine-readable error codes the API sends inside the error envelope. */
+export const errorCodeSchema = z.enum([
+  'validation_failed',
+  'unauthenticated',
+  'forbidden',
+  'not_found',
+  'conflict',
+  'rate_limited',
+  'payload_too_large',
+  'unsupported_media_type',
+  'internal',
+]);
+export type ErrorCode = z.infer<typeof errorCodeSchema>;
+
+/**
+ * The one error envelope every API error response carries:
+ * `{ error: { code, message, fieldErrors? } }`. `fieldErrors` maps a dotted field path
+ * (`email`, `lines.0.grams`) to its messages.
+ */
+export const errorEnvelopeSchema = z.object({
+  error: z.object({
+    code: errorCodeSchema,
+    message: z.string(),
+    fieldErrors: z.record(z.string(), z.array(z.string())).optional(),
+  }),
+});
+export type ErrorEnvelope = z.infer<typeof errorEnvelopeSchema>;
+
+/**
+ * Turns a zod error into the envelope's `fieldErrors`, keyed by the dotted path of each issue.
+ * Issues without a path are gathered under `_form`.
+ */
+export function fieldErrorsFromZod(error: z.ZodError): Record<string, string[]> {
+  const out: Record<string, string[]> = {};
+  for (const issue of error.issues) {
+    const key = issue.path.length ? issue.path.map(String).join('.') : '_form';
+    (out[key] ??= []).push(issue.message);
+  }
+  return out;
+}
+
+/** Whether a value has the shape of the error envelope. */
+export function isErrorEnvelope(value: unknown): value is ErrorEnvelope {
+  return errorEnvelopeSchema.safeParse(value).success;
+}

@@ -1,0 +1,5 @@
+export * from './errors/error-envelope';
+export * from './auth/roles';
+export * from './auth/auth-schema';
+export * from './members/member-schema';
+export * from './health/health-schema';

@@ -1,0 +1,92 @@
+// `npm start`: everything a fresh machine needs, then the app on one port.
+import { spawn, spawnSync } from 'node:child_process';
+import path from 'node:path';
+import {
+  dataRoot, ensureBuilt, ensureCluster, ensureDatabase, ensureNodeModules, fail, log,
+  persistentSecret, root,
+} from './lib/provision.mjs';
+
+const port = Number(process.env.PORT ?? 3000);
+const dbPort = Number(process.env.DATABASE_PORT ?? 54329);
+const smtpPort = Number(process.env.SMTP_PORT ?? 2525);
+
+ensureNodeModules();
+const cluster = ensureCluster(dbPort);
+const databaseUrl = ensureDatabase(cluster, 'batchproof');
+ensureBuilt();
+
+const demoPassword = process.env.DEMO_PASSWORD || persistentSecret('demo-password', 9);
+const appUrl = process.env.APP_URL ?? `http://127.0.0.1:${port}`;
+const env = {
+  ...process.env,
+  NODE_ENV: 'production',
+  PORT: String(port),
+  DATABASE_URL: databaseUrl,
+  JWT_SECRET: process.env.JWT_SECRET ?? persistentSecret('jwt-secret', 48),
+  APP_URL: appUrl,
+  SMTP_PORT: String(smtpPort),
+  MAILBOX_DIR: path.join(dataRoot, 'mailbox'),
+  WEB_DIST: path.join(root, 'dist', 'web', 'browser'),
+  MIGRATIONS_DIR: path.join(root, 'drizzle'),
+  DEMO_PASSWORD: demoPassword,
+};
+
+const seed = spawnSync('node', ['dist/api/seed.js'], { cwd: root, env, stdio: 'inherit' });
+if (seed.status !== 0) fail('Seeding the demo workshop failed (see above).');
+
+const children = [
+  spawn('node', ['dist/api/mail-server.js'], { cwd: root, env, stdio: 'inherit' }),
+  spawn('node', ['--enable-source-maps', 'dist/api/main.js'], { cwd: root, env, stdio: 'inherit' }),
+];
+
+let stopping = false;
+function stopAll(code = 0) {
+  if (stopping) return;
+  stopping = true;
+  log('stopping…');
+  for (const child of children) if (child.exitCode === null) child.kill('SIGTERM');
+  const waitAll = children.map((c) => (c.exitCode !== null ? Promise.resolve() : new Promise((r) => c.once('exit', r))));
+  Promise.all(waitAll).then(() => {
+    if (cluster.startedHere) cluster.stop();
+    log('stopped.');
+    process.exit(code);
+  });
+}
+process.on('SIGINT', () => stopAll(0));
+process.on('SIGTERM', () => stopAll(0));
+for (const child of children) {
+  child.on('exit', (code) => {
+    if (!stopping) {
+      console.error(`[batchproof] a server process exited (code ${code}); shutting down.`);
+      stopAll(code ?? 1);
+    }
+  });
+}
+
+// Print the sign-in details once the API answers.
+const deadline = Date.now() + 30_000;
+async function announce() {
+  try {
+    const res = await fetch(`http://127.0.0.1:${port}/api/health`);
+    if (res.ok) {
+      console.log(`
+  Batchproof is running at ${appUrl}
+
+  Demo sign-ins (workshop: Hollowmere Bathworks), password: ${demoPassword}
+    owner@hollowmere.example        formulator@hollowmere.example
+    production@hollowmere.example   assessor@hollowmere.example
+    viewer@hollowmere.example
+
+  E-mails the app sends (invitations, password resets) go to the local fake mail
+  server on 127.0.0.1:${smtpPort}; read them with:  npm run mail
+
+  Press Ctrl-C to stop the app, the mail server and the database.
+`);
+      return;
+    }
+  } catch {
+    // Not listening yet; try again shortly.
+  }
+  if (Date.now() < deadline && !stopping) setTimeout(announce, 300);
+}
+announce();

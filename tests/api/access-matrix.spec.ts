@@ -1,0 +1,166 @@
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { ROLES, type Role } from '@batchproof/shared';
+import { addMember, buildWorkshop, uniqueEmail, type BuiltWorkshop } from '../../fixtures/builders/workshop-builder';
+import { invitations } from '../../apps/api/src/db/schema';
+import { startApiHarness, TEST_JWT_SECRET, type ApiHarness } from '../support/api-harness';
+
+type Caller = Role | 'other-workshop' | 'anonymous';
+const CALLERS: Caller[] = [...ROLES, 'other-workshop', 'anonymous'];
+
+interface RouteCase {
+  route: string;
+  /** Builds the request path (and body) afresh for each caller, so destructive calls don't collide. */
+  prepare: () => Promise<{ method: 'get' | 'post' | 'patch' | 'delete'; path: string; body?: object }>;
+  expected: Record<Caller, number>;
+}
+
+let h: ApiHarness;
+let a: BuiltWorkshop;
+let b: BuiltWorkshop;
+
+const only = (allowed: readonly Role[], okStatus: number, otherWorkshop: number): Record<Caller, number> => ({
+  ...(Object.fromEntries(ROLES.map((r) => [r, allowed.includes(r) ? okStatus : 403])) as Record<Role, number>),
+  'other-workshop': otherWorkshop,
+  anonymous: 401,
+});
+
+async function freshInvitation(workshopId: string) {
+  const [row] = await h.handle.db
+    .insert(invitations)
+    .values({
+      workshopId,
+      email: uniqueEmail('invitee'),
+      role: 'viewer',
+      tokenHash: `hash-${Math.random()}`,
+      expiresAt: new Date(Date.now() + 86_400_000),
+    })
+    .returning();
+  return row!.id;
+}
+
+const everyone = (status: number): Record<Caller, number> =>
+  Object.fromEntries(CALLERS.map((c) => [c, status])) as Record<Caller, number>;
+
+const cases: RouteCase[] = [
+  {
+    route: 'GET /api/health (public)',
+    prepare: async () => ({ method: 'get', path: '/api/health' }),
+    expected: everyone(200),
+  },
+  {
+    route: 'POST /api/auth/refresh without a refresh cookie (public)',
+    prepare: async () => ({ method: 'post', path: '/api/auth/refresh' }),
+    expected: everyone(401),
+  },
+  {
+    route: 'POST /api/auth/password-reset/request (public)',
+    prepare: async () => ({ method: 'post', path: '/api/auth/password-reset/request', body: { email: uniqueEmail('x') } }),
+    expected: everyone(202),
+  },
+  {
+    route: 'GET /api/auth/invitations/:token for an unknown token (public)',
+    prepare: async () => ({ method: 'get', path: `/api/auth/invitations/${'u'.repeat(43)}` }),
+    expected: everyone(404),
+  },
+  {
+    route: 'POST /api/auth/sign-up with an empty body (public)',
+    prepare: async () => ({ method: 'post', path: '/api/auth/sign-up', body: {} }),
+    expected: everyone(400),
+  },
+  {
+    route: 'GET /api/me',
+    prepare: async () => ({ method: 'get', path: '/api/me' }),
+    expected: only(ROLES, 200, 200),
+  },
+  {
+    route: 'GET /api/members',
+    prepare: async () => ({ method: 'get', path: '/api/members' }),
+    expected: only(['owner', 'formulator', 'production', 'viewer'], 200, 200),
+  },
+  {
+    route: 'GET /api/members/invitations',
+    prepare: async () => ({ method: 'get', path: '/api/members/invitations' }),
+    expected: only(['owner'], 200, 200),
+  },
+  {
+    route: 'POST /api/members/invitations',
+    prepare: async () => ({
+      method: 'post',
+      path: '/api/members/invitations',
+      body: { email: uniqueEmail('new'), role: 'viewer' },
+    }),
+    expected: only(['owner'], 201, 201),
+  },
+  {
+    route: 'DELETE /api/members/invitations/:id (of workshop A)',
+    prepare: async () => ({ method: 'delete', path: `/api/members/invitations/${await freshInvitation(a.id)}` }),
+    expected: only(['owner'], 204, 404),
+  },
+  {
+    route: 'PATCH /api/members/:id (of workshop A)',
+    prepare: async () => {
+      const m = await addMember(h.handle.db, TEST_JWT_SECRET, a.id, 'viewer');
+      return { method: 'patch', path: `/api/members/${m.id}`, body: { role: 'production' } };
+    },
+    expected: only(['owner'], 200, 404),
+  },
+  {
+    route: 'DELETE /api/members/:id (of workshop A)',
+    prepare: async () => {
+      const m = await addMember(h.handle.db, TEST_JWT_SECRET, a.id, 'viewer');
+      return { method: 'delete', path: `/api/members/${m.id}` };
+    },
+    expected: only(['owner'], 204, 404),
+  },
+];
+
+beforeAll(async () => {
+  h = await startApiHarness();
+  a = await buildWorkshop(h.handle.db, TEST_JWT_SECRET);
+  b = await buildWorkshop(h.handle.db, TEST_JWT_SECRET, { roles: ['owner'] });
+});
+afterAll(() => h.close());
+
+const tokenOf = (caller: Caller) =>
+  caller === 'anonymous' ? undefined : caller === 'other-workshop' ? b.members.owner.token : a.members[caller].token;
+
+describe('access to every signed-in route, by role and workshop', () => {
+  for (const c of cases) {
+    describe(c.route, () => {
+      it.each(CALLERS)('as %s responds with the expected status', async (caller) => {
+        const { method, path, body } = await c.prepare();
+        let req = request(h.app)[method](path);
+        const token = tokenOf(caller);
+        if (token) req = req.set('Authorization', `Bearer ${token}`);
+        const res = await (body ? req.send(body) : req);
+        expect(res.status, `${caller} → ${res.status} ${JSON.stringify(res.body)}`).toBe(c.expected[caller]);
+        if (res.status >= 400) expect(res.body.error.code).toEqual(expect.any(String));
+      });
+    });
+  }
+});
+
+describe('workshop isolation in lists', () => {
+  it('a member of workshop B listing members sees none of workshop A', async () => {
+    const res = await request(h.app).get('/api/members').set('Authorization', `Bearer ${b.members.owner.token}`);
+    expect(res.status).toBe(200);
+    const emails = res.body.items.map((m: { email: string }) => m.email);
+    expect(emails).toEqual([b.members.owner.email]);
+  });
+
+  it('a token whose workshop claim does not match the user is refused with 401', async () => {
+    const { signAccessToken } = await import('../../apps/api/src/auth/access-tokens');
+    const forged = signAccessToken({ sub: a.members.owner.id, wid: b.id, role: 'owner' }, TEST_JWT_SECRET, 60);
+    const res = await request(h.app).get('/api/me').set('Authorization', `Bearer ${forged}`);
+    expect(res.status).toBe(401);
+  });
+
+  it('a token signed with another secret is refused with 401', async () => {
+    const { signAccessToken } = await import('../../apps/api/src/auth/access-tokens');
+    const forged = signAccessToken({ sub: a.members.owner.id, wid: a.id, role: 'owner' }, 'x'.repeat(40), 60);
+    const res = await request(h.app).get('/api/me').set('Authorization', `Bearer ${forged}`);
+    expect(res.status).toBe(401);
+    expect(res.body.error.code).toBe('unauthenticated');
+  });
+});
