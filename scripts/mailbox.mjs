@@ -10,7 +10,10 @@ if (!existsSync(dir) || readdirSync(dir).length === 0) {
   console.log('No e-mail yet. Invite a member or ask for a password reset while `npm start` runs.');
   process.exit(0);
 }
-const files = readdirSync(dir).filter((f) => f.endsWith('.json')).sort().slice(-count);
+const files = readdirSync(dir)
+  .filter((f) => f.endsWith('.json'))
+  .sort()
+  .slice(-count);
 for (const file of files) {
   const mail = JSON.parse(readFileSync(path.join(dir, file), 'utf8'));
   console.log(`\n— ${mail.receivedAt}  to ${mail.to.join(', ')}\n  ${mail.subject}\n`);

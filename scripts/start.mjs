@@ -2,8 +2,15 @@
 import { spawn, spawnSync } from 'node:child_process';
 import path from 'node:path';
 import {
-  dataRoot, ensureBuilt, ensureCluster, ensureDatabase, ensureNodeModules, fail, log,
-  persistentSecret, root,
+  dataRoot,
+  ensureBuilt,
+  ensureCluster,
+  ensureDatabase,
+  ensureNodeModules,
+  fail,
+  log,
+  persistentSecret,
+  root,
 } from './lib/provision.mjs';
 
 const port = Number(process.env.PORT ?? 3000);
@@ -45,7 +52,9 @@ function stopAll(code = 0) {
   stopping = true;
   log('stopping…');
   for (const child of children) if (child.exitCode === null) child.kill('SIGTERM');
-  const waitAll = children.map((c) => (c.exitCode !== null ? Promise.resolve() : new Promise((r) => c.once('exit', r))));
+  const waitAll = children.map((c) =>
+    c.exitCode !== null ? Promise.resolve() : new Promise((r) => c.once('exit', r)),
+  );
   Promise.all(waitAll).then(() => {
     if (cluster.startedHere) cluster.stop();
     log('stopped.');

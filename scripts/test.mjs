@@ -4,7 +4,13 @@ import { spawnSync } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import path from 'node:path';
 import {
-  ensureBuilt, ensureChromium, ensureCluster, ensureDatabase, ensureNodeModules, log, root,
+  ensureBuilt,
+  ensureChromium,
+  ensureCluster,
+  ensureDatabase,
+  ensureNodeModules,
+  log,
+  root,
 } from './lib/provision.mjs';
 
 const dbPort = Number(process.env.DATABASE_PORT ?? 54329);
@@ -18,11 +24,24 @@ ensureBuilt();
 rmSync(outDir, { recursive: true, force: true });
 mkdirSync(outDir, { recursive: true });
 
-const env = { ...process.env, TEST_DATABASE_URL: testDatabaseUrl, CHROMIUM_PATH: chromium, FORCE_COLOR: '0' };
+const env = {
+  ...process.env,
+  TEST_DATABASE_URL: testDatabaseUrl,
+  CHROMIUM_PATH: chromium,
+  FORCE_COLOR: '0',
+};
 const vitest = (config, name) => ({
   name,
   cmd: 'npx',
-  args: ['vitest', 'run', '--config', config, '--reporter=default', '--reporter=json', `--outputFile.json=test-output/${name}.json`],
+  args: [
+    'vitest',
+    'run',
+    '--config',
+    config,
+    '--reporter=default',
+    '--reporter=json',
+    `--outputFile.json=test-output/${name}.json`,
+  ],
   report: `${name}.json`,
 });
 const suites = [
@@ -49,14 +68,18 @@ for (const suite of suites) {
     p = report.numPassedTests ?? 0;
     f = report.numFailedTests ?? 0;
     // A file that fails to load has no tests counted; count it once so it cannot pass silently.
-    const brokenFiles = (report.testResults ?? []).filter((t) => t.status === 'failed' && (t.assertionResults ?? []).length === 0).length;
+    const brokenFiles = (report.testResults ?? []).filter(
+      (t) => t.status === 'failed' && (t.assertionResults ?? []).length === 0,
+    ).length;
     f += brokenFiles;
   }
   if (result.status !== 0 && f === 0) f = 1; // the runner failed without a report
   if (p + f === 0) f = 1; // a suite that ran no test is a failure, not a pass
   passed += p;
   failed += f;
-  lines.push(`  ${suite.name.padEnd(9)} ${String(p).padStart(4)} passed ${String(f).padStart(3)} failed  (${((Date.now() - started) / 1000).toFixed(1)} s)`);
+  lines.push(
+    `  ${suite.name.padEnd(9)} ${String(p).padStart(4)} passed ${String(f).padStart(3)} failed  (${((Date.now() - started) / 1000).toFixed(1)} s)`,
+  );
 }
 
 if (cluster.startedHere) cluster.stop();

@@ -1,0 +1,17 @@
+// `npm run bench`: runs every benchmark one after another and prints what each measured.
+// Targets are reported, never asserted: timing belongs here, not in the test suites.
+import { spawnSync } from 'node:child_process';
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import { ensureNodeModules, root } from './lib/provision.mjs';
+
+ensureNodeModules();
+const benches = ['libs/shared/bench/evaluate-bench.ts'];
+let failed = false;
+for (const bench of benches) {
+  if (!existsSync(path.join(root, bench))) continue;
+  console.log(`\n== ${bench}`);
+  const r = spawnSync(path.join(root, 'node_modules', '.bin', 'tsx'), [bench], { cwd: root, stdio: 'inherit' });
+  failed ||= r.status !== 0;
+}
+process.exit(failed ? 1 : 0);
