@@ -2,3 +2,4 @@ export * from './workshops';
 export * from './users';
 export * from './tokens';
 export * from './audit';
+export * from './reference';
