@@ -9,6 +9,8 @@ import type { Database } from './db/database';
 import { healthRouter } from './health/health-router';
 import type { Mailer } from './mail/mailer';
 import { membersRouter } from './members/members-router';
+import { referenceRouter } from './reference/reference-router';
+import { evaluationsRouter } from './evaluations/evaluations-router';
 
 /** Everything the app needs from outside; tests pass their own. */
 export interface AppDeps {
@@ -51,7 +53,13 @@ export function createApp(deps: AppDeps): Express {
   api.use('/health', healthRouter(deps.db, deps.version ?? '0.1.0'));
   api.use('/auth', authRouter({ db: deps.db, mailer: deps.mailer, authn, config }));
   api.use('/me', meRouter({ db: deps.db, authn }));
-  api.use('/members', membersRouter({ db: deps.db, mailer: deps.mailer, authn, appUrl: deps.appUrl }));
+  api.use(
+    '/members',
+    membersRouter({ db: deps.db, mailer: deps.mailer, authn, appUrl: deps.appUrl }),
+  );
+  api.use('/reference', referenceRouter({ db: deps.db, authn }));
+  api.use('/evaluations', evaluationsRouter({ authn }));
+  // Routers of the formulator's workspace (suppliers, materials, documents, lots, formulas) mount here.
   api.use(apiNotFound);
   api.use(errorHandler);
   app.use('/api', api);

@@ -3,13 +3,20 @@ import { createApp } from './app';
 import { applyMigrations, openDatabase } from './db/database';
 import { loadEnv } from './env';
 import { createSmtpMailer } from './mail/mailer';
+import { syncReferenceData } from './reference/reference-sync';
 
 /** Starts the API (and the built web app) on HOST:PORT after applying migrations. */
 async function main() {
   const env = loadEnv();
   const handle = openDatabase(env.DATABASE_URL);
   await applyMigrations(handle.db, path.resolve(env.MIGRATIONS_DIR));
-  const mailer = createSmtpMailer({ host: env.SMTP_HOST, port: env.SMTP_PORT, from: env.MAIL_FROM });
+  const referenceRowCount = await syncReferenceData(handle.db);
+  console.log(`[api] reference lists synced (${referenceRowCount} rows)`);
+  const mailer = createSmtpMailer({
+    host: env.SMTP_HOST,
+    port: env.SMTP_PORT,
+    from: env.MAIL_FROM,
+  });
   const app = createApp({
     db: handle.db,
     mailer,

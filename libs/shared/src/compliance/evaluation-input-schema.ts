@@ -1,0 +1,161 @@
+import { z } from 'zod';
+import { complianceMarketSchema } from '../reference-data/reference-row';
+import { parseColourIndex } from './ingredient-names';
+
+/** Largest line weight the engine accepts: 1,000 tonnes, far above any small batch, keeps sums finite. */
+const MAX_GRAMS = 1e9;
+/** Blend components must add up to 100 % within this tolerance. */
+export const BLEND_TOLERANCE_PERCENT = 0.01;
+
+const text = (label: string) =>
+  z
+    .string({ error: `${label} is required` })
+    .trim()
+    .min(1, { error: `${label} is required` })
+    .max(200, { error: `${label} is too long (200 characters at most)` });
+
+const percentSchema = z
+  .number({ error: 'Enter a percentage' })
+  .min(0, { error: 'A percentage cannot be negative' })
+  .max(100, { error: 'A percentage cannot exceed 100' });
+
+const colourIndexSchema = z
+  .string()
+  .trim()
+  .refine((value) => parseColourIndex(value) !== null, {
+    error: 'Enter a Colour Index number such as CI 77891 or 15850:1',
+  })
+  .transform((value) => parseColourIndex(value) ?? value);
+
+/** One ingredient inside a blend (a mica blend, a base), as a percent of the blend. */
+export const blendComponentSchema = z.object({
+  inci: text('INCI name'),
+  usName: text('US name').optional(),
+  colourIndex: colourIndexSchema.optional(),
+  functions: z.array(z.string().trim().min(1)).optional(),
+  percent: percentSchema.refine((p) => p > 0, {
+    error: 'A component must be more than 0 % of its blend',
+  }),
+  /** Whether it is an incidental ingredient (21 CFR 701.3(l)) that need not be declared. */
+  incidental: z.boolean().optional(),
+});
+
+/** A fragrance allergen as the supplier declares it: percent of the neat fragrance or essential oil. */
+export const fragranceAllergenInputSchema = z.object({
+  inci: text('Allergen name'),
+  cas: z
+    .string()
+    .trim()
+    .regex(/^\d{2,7}-\d{2}-\d$/, { error: 'Enter a CAS number such as 78-70-6' })
+    .optional(),
+  percent: percentSchema,
+});
+
+/** Fragrance data from the supplier's IFRA certificate and allergen declaration. */
+export const fragranceInputSchema = z
+  .object({
+    maxPercentByIfraCategory: z.record(z.string().trim().min(1), percentSchema),
+    allergens: z.array(fragranceAllergenInputSchema),
+  })
+  .superRefine((fragrance, ctx) => {
+    const sum = fragrance.allergens.reduce((total, a) => total + a.percent, 0);
+    if (sum > 100 + BLEND_TOLERANCE_PERCENT) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['allergens'],
+        message: `Allergens add up to ${round(sum)} % of the fragrance; they cannot exceed 100 %`,
+      });
+    }
+  });
+
+/** A raw material as the engine needs it. */
+export const materialInputSchema = z
+  .object({
+    name: text('Material name'),
+    inci: text('INCI name'),
+    usName: text('US name').optional(),
+    functions: z.array(z.string().trim().min(1)),
+    colourIndex: colourIndexSchema.optional(),
+    components: z
+      .array(blendComponentSchema)
+      .min(1, { error: 'A blend needs at least one component' })
+      .optional(),
+    fragrance: fragranceInputSchema.optional(),
+    /** Whether it is an incidental ingredient (21 CFR 701.3(l)) that need not be declared. */
+    incidental: z.boolean().optional(),
+  })
+  .superRefine((material, ctx) => {
+    if (!material.components) return;
+    const sum = material.components.reduce((total, c) => total + c.percent, 0);
+    if (Math.abs(sum - 100) > BLEND_TOLERANCE_PERCENT) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['components'],
+        message: `Blend components add up to ${round(sum)} %; they must add up to 100 % (± ${BLEND_TOLERANCE_PERCENT})`,
+      });
+    }
+  });
+
+/** One formula line: a weight of one material. */
+export const formulaLineInputSchema = z.object({
+  grams: z
+    .number({ error: 'Enter a weight in grams' })
+    .min(0, { error: 'Grams cannot be negative' })
+    .max(MAX_GRAMS, { error: 'Enter at most 1,000,000,000 g' }),
+  material: materialInputSchema,
+});
+
+/** The product the formula makes: how it is used decides which rules apply. */
+export const productInputSchema = z.object({
+  name: text('Product name'),
+  use: z.enum(['rinse-off', 'leave-on'], { error: 'Choose rinse-off or leave-on' }),
+  contact: z.object({ mucousMembranes: z.boolean(), eyeArea: z.boolean(), lips: z.boolean() }),
+  /** Whether it is used in the bath (bath bomb, salts, bubble bar): treated as mucous-membrane contact. */
+  inBath: z.boolean(),
+  /** Whether the label says it is for adults only (exempts it from the 21 CFR 740.17 caution). */
+  adultsOnly: z.boolean(),
+  ifraCategory: text('IFRA category'),
+  netQuantity: z
+    .object({
+      amount: z.number().gt(0, { error: 'Net quantity must be more than 0' }).max(MAX_GRAMS),
+      unit: z.enum(['g', 'mL']),
+    })
+    .optional(),
+});
+
+/** Input of {@link evaluateFormula}: a formula by weight, the product and the markets to check. */
+export const evaluationInputSchema = z
+  .object({
+    asOf: z.iso.date({ error: 'Enter the date to check against as YYYY-MM-DD' }),
+    markets: z
+      .array(complianceMarketSchema, { error: 'Choose at least one market' })
+      .min(1, { error: 'Choose at least one market' })
+      .transform((markets) => [...new Set(markets)]),
+    product: productInputSchema,
+    lines: z.array(formulaLineInputSchema).min(1, { error: 'Add at least one line' }),
+  })
+  .superRefine((input, ctx) => {
+    const total = input.lines.reduce((sum, line) => sum + line.grams, 0);
+    if (!(total > 0)) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['lines'],
+        message: 'The formula weighs 0 g: enter grams for at least one line',
+      });
+    }
+  });
+
+/** Evaluation input after parsing (CI numbers normalised, markets de-duplicated). */
+export type EvaluationInput = z.output<typeof evaluationInputSchema>;
+/** Evaluation input as a client sends it, before parsing. */
+export type EvaluationInputDraft = z.input<typeof evaluationInputSchema>;
+/** One parsed formula line. */
+export type FormulaLineInput = EvaluationInput['lines'][number];
+/** One parsed material. */
+export type MaterialInput = FormulaLineInput['material'];
+/** The parsed product. */
+export type ProductInput = EvaluationInput['product'];
+
+function round(n: number): number {
+  return Math.round(n * 1000) / 1000;
+}

@@ -1,0 +1,14 @@
+export * from './evaluation-input-schema';
+export * from './evaluation-result-schema';
+export { evaluateFormula } from './evaluate-formula';
+export { normaliseIfraCategory } from './fragrance-maximums';
+export { exceedsThreshold } from './allergen-declarations';
+export { parseColourIndex } from './ingredient-names';
+export * from './us-customary-units';
+export * from './net-quantity-statement';
+export { ATOMIC_WEIGHTS, molarMass } from './molar-mass';
+export * from './fizz-balance';
+export * from './margin-of-safety';
+export * from './gs1-element-string';
+export * from './scale-formula';
+export * from './volume-to-grams';
