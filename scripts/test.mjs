@@ -40,7 +40,7 @@ const vitest = (config, name) => ({
     config,
     '--reporter=default',
     '--reporter=json',
-    `--outputFile.json=test-output/${name}.json`,
+    `--outputFile.json=${path.join(outDir, `${name}.json`)}`,
   ],
   report: `${name}.json`,
 });

@@ -1,0 +1,24 @@
+import type { Routes } from '@angular/router';
+import { authGuard } from './auth/auth-guard';
+import authRoutes from './auth/auth.routes';
+
+/** Top-level routes: the signed-out pages, then everything inside the signed-in shell. */
+export const routes: Routes = [
+  ...authRoutes,
+  {
+    path: '',
+    loadComponent: () => import('./shell/shell'),
+    canActivate: [authGuard],
+    children: [
+      {
+        path: '',
+        pathMatch: 'full',
+        title: 'Home · Batchproof',
+        loadComponent: () => import('./home/home-page/home-page'),
+      },
+      { path: 'workshop', loadChildren: () => import('./members/members.routes') },
+      { path: 'reference', loadChildren: () => import('./reference-lists/reference-lists.routes') },
+    ],
+  },
+  { path: '**', redirectTo: '' },
+];

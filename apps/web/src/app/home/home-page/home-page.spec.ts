@@ -1,0 +1,62 @@
+import { provideHttpClient } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { provideZonelessChangeDetection } from '@angular/core';
+import { TestBed } from '@angular/core/testing';
+import { provideRouter } from '@angular/router';
+import { firstValueFrom } from 'rxjs';
+import type { Role } from '@batchproof/shared';
+import { Session } from '../../auth/session';
+import HomePage from './home-page';
+
+async function openHomeAs(role: Role) {
+  TestBed.configureTestingModule({
+    providers: [
+      provideZonelessChangeDetection(),
+      provideRouter([]),
+      provideHttpClient(),
+      provideHttpClientTesting(),
+    ],
+  });
+  const signingIn = firstValueFrom(
+    TestBed.inject(Session).signIn({ email: 'me@example.com', password: 'x' }),
+  );
+  TestBed.inject(HttpTestingController)
+    .expectOne('/api/auth/sign-in')
+    .flush({
+      accessToken: 't',
+      expiresIn: 900,
+      user: {
+        id: 'u1',
+        name: 'Ada Marsh',
+        email: 'me@example.com',
+        role,
+        workshop: { id: 'w1', name: 'Hollowmere Bathworks' },
+      },
+    });
+  await signingIn;
+  const fixture = TestBed.createComponent(HomePage);
+  await fixture.whenStable();
+  return fixture.nativeElement as HTMLElement;
+}
+
+describe('HomePage', () => {
+  beforeEach(() => localStorage.clear());
+
+  it('shows the workshop and the signed-in role', async () => {
+    const el = await openHomeAs('production');
+
+    expect(el.querySelector('h1')?.textContent).toContain('Hollowmere Bathworks');
+    expect(el.querySelector('[data-testid=signed-in-role]')?.textContent?.trim()).toBe(
+      'production',
+    );
+    expect(el.textContent).toContain('Batch records, weigh sheets, lot picks and label printing.');
+  });
+
+  it('suggests inviting people to owners only', async () => {
+    expect((await openHomeAs('owner')).textContent).toContain('Invite the people you work with');
+    TestBed.resetTestingModule();
+    expect((await openHomeAs('viewer')).textContent).not.toContain(
+      'Invite the people you work with',
+    );
+  });
+});

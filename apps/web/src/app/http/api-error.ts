@@ -1,0 +1,22 @@
+import type { ErrorCode } from '@batchproof/shared';
+
+/** What the client knows about a failed request: the API's envelope, or why there was none. */
+export class ApiError extends Error {
+  constructor(
+    /** HTTP status; 0 when the server could not be reached. */
+    readonly status: number,
+    readonly code: ErrorCode | 'network' | 'unexpected',
+    message: string,
+    /** Messages per field path, as the API's envelope sends them. */
+    readonly fieldErrors: Record<string, string[]> = {},
+  ) {
+    super(message);
+    this.name = 'ApiError';
+  }
+}
+
+/** The message to show for any error a request may end with. */
+export function messageOf(error: unknown): string {
+  if (error instanceof ApiError) return error.message;
+  return 'Something went wrong. Try again in a moment.';
+}

@@ -1,0 +1,238 @@
+import { TestbedHarnessEnvironment } from '@angular/cdk/testing/testbed';
+import { provideHttpClient, withInterceptors } from '@angular/common/http';
+import {
+  HttpTestingController,
+  provideHttpClientTesting,
+  type TestRequest,
+} from '@angular/common/http/testing';
+import { provideZonelessChangeDetection } from '@angular/core';
+import { TestBed } from '@angular/core/testing';
+import { MatButtonHarness } from '@angular/material/button/testing';
+import { MatFormFieldHarness } from '@angular/material/form-field/testing';
+import { MatInputHarness } from '@angular/material/input/testing';
+import { MatSelectHarness } from '@angular/material/select/testing';
+import { MatSortHarness } from '@angular/material/sort/testing';
+import { MatRowHarness, MatTableHarness } from '@angular/material/table/testing';
+import { provideRouter, Router, withComponentInputBinding } from '@angular/router';
+import { RouterTestingHarness } from '@angular/router/testing';
+import { firstValueFrom } from 'rxjs';
+import type { Member, Role } from '@batchproof/shared';
+import { authInterceptor } from '../../auth/auth-interceptor';
+import { Session } from '../../auth/session';
+import { errorInterceptor } from '../../http/error-interceptor';
+import MembersPage from './members-page';
+
+const MEMBERS: Member[] = [
+  {
+    id: 'u1',
+    name: 'Ada Marsh',
+    email: 'ada@example.com',
+    role: 'owner',
+    joinedAt: '2026-01-05T10:00:00.000Z',
+  },
+  {
+    id: 'u2',
+    name: 'Tomas Reed',
+    email: 'tomas@example.com',
+    role: 'formulator',
+    joinedAt: '2026-02-11T10:00:00.000Z',
+  },
+];
+
+const isMembersList = (req: { url: string }) => req.url === '/api/members';
+
+async function openMembersAs(role: Role, url = '/workshop') {
+  TestBed.configureTestingModule({
+    providers: [
+      provideZonelessChangeDetection(),
+      provideRouter([{ path: 'workshop', component: MembersPage }], withComponentInputBinding()),
+      provideHttpClient(withInterceptors([errorInterceptor, authInterceptor])),
+      provideHttpClientTesting(),
+    ],
+  });
+  const backend = TestBed.inject(HttpTestingController);
+  const signingIn = firstValueFrom(
+    TestBed.inject(Session).signIn({ email: 'me@example.com', password: 'x' }),
+  );
+  backend.expectOne('/api/auth/sign-in').flush({
+    accessToken: 'token-1',
+    expiresIn: 900,
+    user: {
+      id: 'u1',
+      name: 'Ada Marsh',
+      email: 'me@example.com',
+      role,
+      workshop: { id: 'w1', name: 'Hollowmere' },
+    },
+  });
+  await signingIn;
+
+  const harness = await RouterTestingHarness.create();
+  await harness.navigateByUrl(url, MembersPage);
+  const loader = TestbedHarnessEnvironment.loader(harness.fixture);
+  return { harness, loader, backend };
+}
+
+type Page = Awaited<ReturnType<typeof openMembersAs>>;
+
+/**
+ * Answers the members read (and, for owners, the invitations read) and waits for the page to
+ * settle; resource reads count as pending work, so all of them are answered before waiting.
+ */
+async function flushReads(page: Page, invitations?: unknown[]): Promise<TestRequest> {
+  const req = page.backend.expectOne(isMembersList);
+  req.flush({ items: MEMBERS });
+  if (invitations) page.backend.expectOne('/api/members/invitations').flush({ items: invitations });
+  await page.harness.fixture.whenStable();
+  return req;
+}
+
+async function cellTexts(rows: MatRowHarness[]) {
+  return Promise.all(rows.map((row) => row.getCellTextByColumnName()));
+}
+
+describe('MembersPage', () => {
+  beforeEach(() => localStorage.clear());
+
+  it('shows a row per member from the API with name, e-mail and role', async () => {
+    const page = await openMembersAs('viewer');
+    await flushReads(page);
+
+    const rows = await (await page.loader.getHarness(MatTableHarness)).getRows();
+    const cells = await cellTexts(rows);
+    expect(cells.map((c) => [c['name'], c['email'], c['role']])).toEqual([
+      ['Ada Marsh', 'ada@example.com', 'owner'],
+      ['Tomas Reed', 'tomas@example.com', 'formulator'],
+    ]);
+  });
+
+  it('asks the server for the sort given in the query parameters', async () => {
+    const page = await openMembersAs('viewer', '/workshop?sort=email&dir=desc');
+
+    const req = await flushReads(page);
+    expect(req.request.params.get('sort')).toBe('email');
+    expect(req.request.params.get('dir')).toBe('desc');
+  });
+
+  it('falls back to sorting by name when the query parameters are not a known sort', async () => {
+    const page = await openMembersAs('viewer', '/workshop?sort=shoeSize&dir=up');
+
+    const req = await flushReads(page);
+    expect(req.request.params.get('sort')).toBe('name');
+    expect(req.request.params.get('dir')).toBe('asc');
+  });
+
+  it('sorts on the server when a column header is clicked, and keeps the sort in the URL', async () => {
+    const page = await openMembersAs('viewer');
+    await flushReads(page);
+
+    const sort = await page.loader.getHarness(MatSortHarness);
+    expect(await (await sort.getActiveHeader())?.getLabel()).toBe('Name');
+    const headers = Array.from(page.harness.routeNativeElement!.querySelectorAll('th'));
+    headers.find((th) => th.textContent?.includes('Joined'))!.click();
+
+    // Clicked natively: a harness waits for the page to settle, which a pending read prevents.
+    const req = await vi.waitFor(() => page.backend.expectOne(isMembersList));
+    expect(req.request.params.get('sort')).toBe('joinedAt');
+    expect(req.request.params.get('dir')).toBe('asc');
+    req.flush({ items: MEMBERS });
+    expect(TestBed.inject(Router).url).toBe('/workshop?sort=joinedAt&dir=asc');
+  });
+
+  it('gives the owner the invite form, a role picker per member and the pending invitations', async () => {
+    const page = await openMembersAs('owner');
+    await flushReads(page, [
+      {
+        id: 'i1',
+        email: 'new@example.com',
+        role: 'production',
+        createdAt: '2026-03-01T10:00:00.000Z',
+        expiresAt: '2026-03-08T10:00:00.000Z',
+      },
+    ]);
+
+    const el = page.harness.routeNativeElement!;
+    expect(el.querySelector('bp-invite-form')).not.toBeNull();
+    expect(
+      await page.loader.getAllHarnesses(MatSelectHarness.with({ selector: '.role-select' })),
+    ).toHaveLength(2);
+    expect(el.querySelector('bp-invitation-list')?.textContent).toContain('new@example.com');
+  });
+
+  it('shows everyone else the table read-only, without the invite form or invitations', async () => {
+    const page = await openMembersAs('formulator');
+    await flushReads(page);
+
+    const el = page.harness.routeNativeElement!;
+    expect(el.querySelector('bp-invite-form')).toBeNull();
+    expect(el.querySelector('bp-invitation-list')).toBeNull();
+    expect(await page.loader.getAllHarnesses(MatSelectHarness)).toHaveLength(0);
+    expect(
+      await page.loader.getAllHarnesses(
+        MatButtonHarness.with({ selector: '[aria-label^="Remove"]' }),
+      ),
+    ).toHaveLength(0);
+    page.backend.expectNone('/api/members/invitations');
+  });
+
+  it("puts the server's message beside the e-mail when an invitation is refused", async () => {
+    const page = await openMembersAs('owner');
+    await flushReads(page, []);
+
+    const email = await page.loader.getHarness(
+      MatFormFieldHarness.with({ floatingLabelText: 'E-mail' }),
+    );
+    await ((await email.getControl()) as MatInputHarness).setValue('tomas@example.com');
+    await (
+      await page.loader.getHarness(MatButtonHarness.with({ text: /Send invitation/ }))
+    ).click();
+
+    const req = page.backend.expectOne({ method: 'POST', url: '/api/members/invitations' });
+    expect(req.request.body).toEqual({ email: 'tomas@example.com', role: 'formulator' });
+    req.flush(
+      {
+        error: {
+          code: 'conflict',
+          message: 'This e-mail already belongs to a Batchproof account.',
+          fieldErrors: { email: ['This e-mail already belongs to a Batchproof account.'] },
+        },
+      },
+      { status: 409, statusText: 'Conflict' },
+    );
+    await page.harness.fixture.whenStable();
+
+    expect(await email.getTextErrors()).toEqual([
+      'This e-mail already belongs to a Batchproof account.',
+    ]);
+  });
+
+  it('puts the role back and says why when the server refuses to demote the last owner', async () => {
+    const page = await openMembersAs('owner');
+    await flushReads(page, []);
+
+    const [ownerRole] = await page.loader.getAllHarnesses(
+      MatSelectHarness.with({ selector: '.role-select' }),
+    );
+    await ownerRole.open();
+    await ownerRole.clickOptions({ text: 'viewer' });
+
+    const req = page.backend.expectOne({ method: 'PATCH', url: '/api/members/u1' });
+    expect(req.request.body).toEqual({ role: 'viewer' });
+    req.flush(
+      {
+        error: {
+          code: 'conflict',
+          message: 'A workshop needs at least one owner. Make someone else owner first.',
+          fieldErrors: { role: ['A workshop needs at least one owner.'] },
+        },
+      },
+      { status: 409, statusText: 'Conflict' },
+    );
+    await page.harness.fixture.whenStable();
+
+    expect(await ownerRole.getValueText()).toBe('owner');
+    expect(document.querySelector('mat-snack-bar-container')?.textContent).toContain(
+      'A workshop needs at least one owner.',
+    );
+  });
+});

@@ -1,0 +1,111 @@
+import { BreakpointObserver } from '@angular/cdk/layout';
+import { ChangeDetectionStrategy, Component, computed, effect, inject } from '@angular/core';
+import { toSignal } from '@angular/core/rxjs-interop';
+import { MatButton, MatIconButton } from '@angular/material/button';
+import { MatIcon } from '@angular/material/icon';
+import { MatListItem, MatListItemIcon, MatListItemTitle, MatNavList } from '@angular/material/list';
+import { MatMenu, MatMenuItem, MatMenuTrigger } from '@angular/material/menu';
+import { MatSidenav, MatSidenavContainer, MatSidenavContent } from '@angular/material/sidenav';
+import { MatSnackBar } from '@angular/material/snack-bar';
+import { MatToolbar } from '@angular/material/toolbar';
+import { Router, RouterLink, RouterLinkActive, RouterOutlet } from '@angular/router';
+import { map } from 'rxjs';
+import { type Role, ROLE_SETS } from '@batchproof/shared';
+import { Session } from '../auth/session';
+
+/** One entry of the side navigation; entries without a link are not built yet. */
+interface NavEntry {
+  label: string;
+  icon: string;
+  link?: string;
+  /** Who sees the entry; everyone when omitted. */
+  roles?: readonly Role[];
+}
+
+/** The side navigation follows the maker's work (design direction). */
+const NAV: readonly NavEntry[] = [
+  { label: 'Home', icon: 'home', link: '/' },
+  { label: 'Formulas', icon: 'science' },
+  { label: 'Materials', icon: 'inventory_2' },
+  { label: 'Lots', icon: 'move_to_inbox' },
+  { label: 'Production', icon: 'scale' },
+  { label: 'Labels', icon: 'label' },
+  { label: 'Trace', icon: 'route' },
+  { label: 'Assessments', icon: 'fact_check' },
+  { label: 'Reference lists', icon: 'menu_book', link: '/reference' },
+  { label: 'Workshop', icon: 'groups', link: '/workshop', roles: ROLE_SETS.members },
+];
+
+/** Below this width the side navigation becomes an overlay opened from the toolbar. */
+const NARROW = '(max-width: 839.98px)';
+
+/** The signed-in frame: toolbar, side navigation and the page. */
+@Component({
+  selector: 'bp-shell',
+  imports: [
+    RouterLink,
+    RouterLinkActive,
+    RouterOutlet,
+    MatButton,
+    MatIcon,
+    MatIconButton,
+    MatListItem,
+    MatListItemIcon,
+    MatListItemTitle,
+    MatMenu,
+    MatMenuItem,
+    MatMenuTrigger,
+    MatNavList,
+    MatSidenav,
+    MatSidenavContainer,
+    MatSidenavContent,
+    MatToolbar,
+  ],
+  templateUrl: './shell.html',
+  styleUrl: './shell.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export default class Shell {
+  private readonly session = inject(Session);
+  private readonly router = inject(Router);
+  private readonly snackBar = inject(MatSnackBar);
+  private readonly breakpoints = inject(BreakpointObserver);
+
+  protected readonly user = this.session.user;
+  /** Whether the window is narrow enough for the overlay navigation. */
+  protected readonly narrow = toSignal(
+    this.breakpoints.observe(NARROW).pipe(map((state) => state.matches)),
+    {
+      initialValue: this.breakpoints.isMatched(NARROW),
+    },
+  );
+  private readonly visible = computed(() =>
+    NAV.filter((entry) => !entry.roles || this.session.hasRole(entry.roles)),
+  );
+  /** Entries with a page to go to. */
+  protected readonly built = computed(() =>
+    this.visible().filter((entry) => entry.link !== undefined),
+  );
+  /** Entries shown so makers see where the product is going, but not yet links. */
+  protected readonly comingSoon = computed(() =>
+    this.visible().filter((entry) => entry.link === undefined),
+  );
+
+  constructor() {
+    // A session can end under the page (a refused refresh): go to sign-in rather than fail.
+    effect(() => {
+      if (!this.session.signedIn()) void this.router.navigate(['/sign-in']);
+    });
+  }
+
+  protected closeIfOverlay(sidenav: MatSidenav): void {
+    if (this.narrow()) void sidenav.close();
+  }
+
+  protected signOut(): void {
+    this.session.signOut().subscribe(() => {
+      this.snackBar.open('You are signed out.', undefined, { duration: 4000 });
+      void this.router.navigate(['/sign-in']);
+    });
+  }
+}

@@ -1,0 +1,120 @@
+import { existsSync, mkdirSync } from 'node:fs';
+import { createServer, type Server } from 'node:http';
+import type { AddressInfo } from 'node:net';
+import path from 'node:path';
+import { type Browser, type BrowserContext, chromium, type Page } from 'playwright-core';
+import { createApp } from '../../apps/api/src/app';
+import type { DatabaseHandle } from '../../apps/api/src/db/database';
+import { startMailCatcher } from '../support/mail-catcher';
+import { openMigratedTestDatabase } from '../support/test-database';
+
+const ROOT = path.resolve(import.meta.dirname, '../..');
+const WEB_DIST = path.join(ROOT, 'dist/web/browser');
+/** Where screenshots go; `test-output/` is ignored by git. */
+export const OUTPUT_DIR = path.join(ROOT, 'test-output/journeys');
+
+/** Something the browser did that a journey must not allow. */
+export interface Problem {
+  kind: 'console error' | 'page error' | 'outside request' | 'failed request';
+  detail: string;
+}
+
+/**
+ * The whole product for one journey: the real test database, a mail catcher, the API serving the
+ * production web build on a free loopback port, and a headless Debian chromium that records
+ * console errors, page errors and any request to a host other than 127.0.0.1.
+ */
+export interface JourneyHarness {
+  /** The app's real URL, also the base of the links the app e-mails. */
+  baseUrl: string;
+  mail: Awaited<ReturnType<typeof startMailCatcher>>;
+  problems: Problem[];
+  /** A fresh browser context (its own cookies and storage) with a watched page. */
+  newPage(options?: { width?: number; height?: number }): Promise<Page>;
+  /** Saves a full-page screenshot as `<name>.png` under the output folder. */
+  screenshot(page: Page, name: string): Promise<string>;
+  close(): Promise<void>;
+}
+
+export async function startJourneyHarness(): Promise<JourneyHarness> {
+  if (!existsSync(path.join(WEB_DIST, 'index.html'))) {
+    throw new Error(`No web build at ${WEB_DIST}: run \`npx ng build\` first.`);
+  }
+  mkdirSync(OUTPUT_DIR, { recursive: true });
+  const handle: DatabaseHandle = await openMigratedTestDatabase();
+  const mail = await startMailCatcher();
+
+  // Listen first, so the app (and the links it e-mails) knows its real URL.
+  const server: Server = createServer();
+  await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
+  const baseUrl = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+  const app = createApp({
+    db: handle.db,
+    mailer: mail.mailer,
+    jwtSecret: 'journey-secret-that-is-at-least-32-characters',
+    appUrl: baseUrl,
+    webDist: WEB_DIST,
+    signInLimit: 1000,
+  });
+  server.on('request', app);
+
+  const browser: Browser = await chromium.launch({
+    executablePath: process.env['CHROMIUM_PATH'] ?? '/usr/bin/chromium',
+    args: [
+      '--headless',
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+      '--disable-dev-shm-usage',
+    ],
+  });
+  const contexts: BrowserContext[] = [];
+  const problems: Problem[] = [];
+
+  return {
+    baseUrl,
+    mail,
+    problems,
+    async newPage({ width = 1280, height = 800 } = {}) {
+      const context = await browser.newContext({ viewport: { width, height }, baseURL: baseUrl });
+      contexts.push(context);
+      const page = await context.newPage();
+      page.on('console', (message) => {
+        if (message.type() === 'error')
+          problems.push({ kind: 'console error', detail: message.text() });
+      });
+      page.on('pageerror', (error) => problems.push({ kind: 'page error', detail: error.message }));
+      page.on('request', (request) => {
+        const url = new URL(request.url());
+        if (url.protocol !== 'data:' && url.protocol !== 'blob:' && url.hostname !== '127.0.0.1') {
+          problems.push({ kind: 'outside request', detail: request.url() });
+        }
+      });
+      page.on('requestfailed', (request) => {
+        const reason = request.failure()?.errorText ?? 'unknown';
+        // A request cut short by the page navigating away is not a failure of the app.
+        if (reason !== 'net::ERR_ABORTED') {
+          problems.push({ kind: 'failed request', detail: `${request.url()}: ${reason}` });
+        }
+      });
+      return page;
+    },
+    async screenshot(page, name) {
+      const file = path.join(OUTPUT_DIR, `${name}.png`);
+      await page.screenshot({ path: file, fullPage: true });
+      return file;
+    },
+    async close() {
+      for (const context of contexts) await context.close();
+      await browser.close();
+      server.closeAllConnections();
+      await new Promise<void>((resolve) => server.close(() => resolve()));
+      await mail.close();
+      await handle.close();
+    },
+  };
+}
