@@ -6,12 +6,15 @@ import path from 'node:path';
 import { ensureNodeModules, root } from './lib/provision.mjs';
 
 ensureNodeModules();
-const benches = ['libs/shared/bench/evaluate-bench.ts'];
+const benches = ['libs/shared/bench/evaluate-bench.ts', 'apps/api/bench/list-bench.ts'];
 let failed = false;
 for (const bench of benches) {
   if (!existsSync(path.join(root, bench))) continue;
   console.log(`\n== ${bench}`);
-  const r = spawnSync(path.join(root, 'node_modules', '.bin', 'tsx'), [bench], { cwd: root, stdio: 'inherit' });
+  const r = spawnSync(path.join(root, 'node_modules', '.bin', 'tsx'), [bench], {
+    cwd: root,
+    stdio: 'inherit',
+  });
   failed ||= r.status !== 0;
 }
 process.exit(failed ? 1 : 0);

@@ -34,7 +34,11 @@ const env = {
 };
 
 const tsx = path.join(root, 'node_modules', '.bin', 'tsx');
-const seed = spawnSync(tsx, ['apps/api/src/seed/seed-main.ts'], { cwd: root, env, stdio: 'inherit' });
+const seed = spawnSync(tsx, ['apps/api/src/seed/seed-main.ts'], {
+  cwd: root,
+  env,
+  stdio: 'inherit',
+});
 if (seed.status !== 0) fail('Seeding the demo workshop failed (see above).');
 
 const children = [
@@ -46,19 +50,21 @@ const children = [
     stdio: 'inherit',
   }),
 ];
-log(`dev servers starting: web http://127.0.0.1:${webPort}, API :${apiPort}; demo password ${demoPassword}`);
+log(
+  `dev servers starting: web http://127.0.0.1:${webPort}, API :${apiPort}; demo password ${demoPassword}`,
+);
 
 let stopping = false;
 function stop() {
   if (stopping) return;
   stopping = true;
   for (const child of children) if (child.exitCode === null) child.kill('SIGTERM');
-  Promise.all(children.map((c) => (c.exitCode !== null ? null : new Promise((r) => c.once('exit', r))))).then(
-    () => {
-      if (cluster.startedHere) cluster.stop();
-      process.exit(0);
-    },
-  );
+  Promise.all(
+    children.map((c) => (c.exitCode !== null ? null : new Promise((r) => c.once('exit', r)))),
+  ).then(() => {
+    if (cluster.startedHere) cluster.stop();
+    process.exit(0);
+  });
 }
 process.on('SIGINT', stop);
 process.on('SIGTERM', stop);

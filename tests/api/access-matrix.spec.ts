@@ -1,9 +1,15 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ROLES, type Role } from '@batchproof/shared';
-import { addMember, buildWorkshop, uniqueEmail, type BuiltWorkshop } from '../../fixtures/builders/workshop-builder';
+import {
+  addMember,
+  buildWorkshop,
+  uniqueEmail,
+  type BuiltWorkshop,
+} from '../../fixtures/builders/workshop-builder';
 import { invitations } from '../../apps/api/src/db/schema';
 import { startApiHarness, TEST_JWT_SECRET, type ApiHarness } from '../support/api-harness';
+import { workspaceAccessCases, type WorkspaceRequest } from './workspace-access-cases';
 
 type Caller = Role | 'other-workshop' | 'anonymous';
 const CALLERS: Caller[] = [...ROLES, 'other-workshop', 'anonymous'];
@@ -11,7 +17,7 @@ const CALLERS: Caller[] = [...ROLES, 'other-workshop', 'anonymous'];
 interface RouteCase {
   route: string;
   /** Builds the request path (and body) afresh for each caller, so destructive calls don't collide. */
-  prepare: () => Promise<{ method: 'get' | 'post' | 'patch' | 'delete'; path: string; body?: object }>;
+  prepare: () => Promise<WorkspaceRequest>;
   expected: Record<Caller, number>;
 }
 
@@ -19,8 +25,15 @@ let h: ApiHarness;
 let a: BuiltWorkshop;
 let b: BuiltWorkshop;
 
-const only = (allowed: readonly Role[], okStatus: number, otherWorkshop: number): Record<Caller, number> => ({
-  ...(Object.fromEntries(ROLES.map((r) => [r, allowed.includes(r) ? okStatus : 403])) as Record<Role, number>),
+const only = (
+  allowed: readonly Role[],
+  okStatus: number,
+  otherWorkshop: number,
+): Record<Caller, number> => ({
+  ...(Object.fromEntries(ROLES.map((r) => [r, allowed.includes(r) ? okStatus : 403])) as Record<
+    Role,
+    number
+  >),
   'other-workshop': otherWorkshop,
   anonymous: 401,
 });
@@ -55,7 +68,11 @@ const cases: RouteCase[] = [
   },
   {
     route: 'POST /api/auth/password-reset/request (public)',
-    prepare: async () => ({ method: 'post', path: '/api/auth/password-reset/request', body: { email: uniqueEmail('x') } }),
+    prepare: async () => ({
+      method: 'post',
+      path: '/api/auth/password-reset/request',
+      body: { email: uniqueEmail('x') },
+    }),
     expected: everyone(202),
   },
   {
@@ -71,6 +88,16 @@ const cases: RouteCase[] = [
   {
     route: 'GET /api/me',
     prepare: async () => ({ method: 'get', path: '/api/me' }),
+    expected: only(ROLES, 200, 200),
+  },
+  {
+    route: 'GET /api/reference',
+    prepare: async () => ({ method: 'get', path: '/api/reference' }),
+    expected: only(ROLES, 200, 200),
+  },
+  {
+    route: 'GET /api/reference/:key',
+    prepare: async () => ({ method: 'get', path: '/api/reference/eu-annex-iii-allergens' }),
     expected: only(ROLES, 200, 200),
   },
   {
@@ -94,7 +121,10 @@ const cases: RouteCase[] = [
   },
   {
     route: 'DELETE /api/members/invitations/:id (of workshop A)',
-    prepare: async () => ({ method: 'delete', path: `/api/members/invitations/${await freshInvitation(a.id)}` }),
+    prepare: async () => ({
+      method: 'delete',
+      path: `/api/members/invitations/${await freshInvitation(a.id)}`,
+    }),
     expected: only(['owner'], 204, 404),
   },
   {
@@ -113,6 +143,8 @@ const cases: RouteCase[] = [
     },
     expected: only(['owner'], 204, 404),
   },
+  // The formulator's workspace: suppliers, materials, documents, lots, formulas.
+  ...workspaceAccessCases(() => ({ h, a })),
 ];
 
 beforeAll(async () => {
@@ -123,18 +155,29 @@ beforeAll(async () => {
 afterAll(() => h.close());
 
 const tokenOf = (caller: Caller) =>
-  caller === 'anonymous' ? undefined : caller === 'other-workshop' ? b.members.owner.token : a.members[caller].token;
+  caller === 'anonymous'
+    ? undefined
+    : caller === 'other-workshop'
+      ? b.members.owner.token
+      : a.members[caller].token;
 
 describe('access to every signed-in route, by role and workshop', () => {
   for (const c of cases) {
     describe(c.route, () => {
       it.each(CALLERS)('as %s responds with the expected status', async (caller) => {
-        const { method, path, body } = await c.prepare();
+        const { method, path, body, type, upload } = await c.prepare();
         let req = request(h.app)[method](path);
         const token = tokenOf(caller);
         if (token) req = req.set('Authorization', `Bearer ${token}`);
+        if (type) req = req.set('Content-Type', type);
+        if (upload) {
+          for (const [k, v] of Object.entries(upload.fields)) req = req.field(k, v);
+          req = req.attach('file', upload.file, upload.filename);
+        }
         const res = await (body ? req.send(body) : req);
-        expect(res.status, `${caller} → ${res.status} ${JSON.stringify(res.body)}`).toBe(c.expected[caller]);
+        expect(res.status, `${caller} → ${res.status} ${JSON.stringify(res.body)}`).toBe(
+          c.expected[caller],
+        );
         if (res.status >= 400) expect(res.body.error.code).toEqual(expect.any(String));
       });
     });
@@ -143,7 +186,9 @@ describe('access to every signed-in route, by role and workshop', () => {
 
 describe('workshop isolation in lists', () => {
   it('a member of workshop B listing members sees none of workshop A', async () => {
-    const res = await request(h.app).get('/api/members').set('Authorization', `Bearer ${b.members.owner.token}`);
+    const res = await request(h.app)
+      .get('/api/members')
+      .set('Authorization', `Bearer ${b.members.owner.token}`);
     expect(res.status).toBe(200);
     const emails = res.body.items.map((m: { email: string }) => m.email);
     expect(emails).toEqual([b.members.owner.email]);
@@ -151,14 +196,22 @@ describe('workshop isolation in lists', () => {
 
   it('a token whose workshop claim does not match the user is refused with 401', async () => {
     const { signAccessToken } = await import('../../apps/api/src/auth/access-tokens');
-    const forged = signAccessToken({ sub: a.members.owner.id, wid: b.id, role: 'owner' }, TEST_JWT_SECRET, 60);
+    const forged = signAccessToken(
+      { sub: a.members.owner.id, wid: b.id, role: 'owner' },
+      TEST_JWT_SECRET,
+      60,
+    );
     const res = await request(h.app).get('/api/me').set('Authorization', `Bearer ${forged}`);
     expect(res.status).toBe(401);
   });
 
   it('a token signed with another secret is refused with 401', async () => {
     const { signAccessToken } = await import('../../apps/api/src/auth/access-tokens');
-    const forged = signAccessToken({ sub: a.members.owner.id, wid: a.id, role: 'owner' }, 'x'.repeat(40), 60);
+    const forged = signAccessToken(
+      { sub: a.members.owner.id, wid: a.id, role: 'owner' },
+      'x'.repeat(40),
+      60,
+    );
     const res = await request(h.app).get('/api/me').set('Authorization', `Bearer ${forged}`);
     expect(res.status).toBe(401);
     expect(res.body.error.code).toBe('unauthenticated');

@@ -1,7 +1,11 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { sessionSchema, userSchema } from '@batchproof/shared';
-import { BUILT_PASSWORD, buildWorkshop, uniqueEmail } from '../../fixtures/builders/workshop-builder';
+import {
+  BUILT_PASSWORD,
+  buildWorkshop,
+  uniqueEmail,
+} from '../../fixtures/builders/workshop-builder';
 import { firstLink } from '../support/mail-catcher';
 import { startApiHarness, TEST_JWT_SECRET, type ApiHarness } from '../support/api-harness';
 
@@ -17,14 +21,23 @@ const refreshCookie = (res: request.Response) =>
 describe('POST /api/auth/sign-up', () => {
   it('creates a workshop and its owner, and answers with a session the contract accepts', async () => {
     const email = uniqueEmail('founder');
-    const res = await request(h.app)
-      .post('/api/auth/sign-up')
-      .send({ workshopName: 'Saltmarsh Soapery', name: 'Pell Anders', email: email.toUpperCase(), password: 'long-enough-pass' });
+    const res = await request(h.app).post('/api/auth/sign-up').send({
+      workshopName: 'Saltmarsh Soapery',
+      name: 'Pell Anders',
+      email: email.toUpperCase(),
+      password: 'long-enough-pass',
+    });
     expect(res.status).toBe(201);
     const session = sessionSchema.parse(res.body);
-    expect(session.user).toMatchObject({ email, role: 'owner', workshop: { name: 'Saltmarsh Soapery' } });
+    expect(session.user).toMatchObject({
+      email,
+      role: 'owner',
+      workshop: { name: 'Saltmarsh Soapery' },
+    });
     expect(refreshCookie(res)).toMatch(/HttpOnly/i);
-    const me = await request(h.app).get('/api/me').set('Authorization', `Bearer ${session.accessToken}`);
+    const me = await request(h.app)
+      .get('/api/me')
+      .set('Authorization', `Bearer ${session.accessToken}`);
     expect(userSchema.parse(me.body).id).toBe(session.user.id);
   });
 
@@ -32,7 +45,12 @@ describe('POST /api/auth/sign-up', () => {
     const res = await request(h.app).post('/api/auth/sign-up').send({});
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe('validation_failed');
-    expect(Object.keys(res.body.error.fieldErrors).sort()).toEqual(['email', 'name', 'password', 'workshopName']);
+    expect(Object.keys(res.body.error.fieldErrors).sort()).toEqual([
+      'email',
+      'name',
+      'password',
+      'workshopName',
+    ]);
   });
 
   it('when the password is short and the e-mail malformed, names both fields', async () => {
@@ -48,16 +66,23 @@ describe('POST /api/auth/sign-up', () => {
     const email = uniqueEmail('dup');
     const body = { workshopName: 'One', name: 'First', email, password: 'long-enough-pass' };
     expect((await request(h.app).post('/api/auth/sign-up').send(body)).status).toBe(201);
-    const res = await request(h.app).post('/api/auth/sign-up').send({ ...body, workshopName: 'Two', password: 'another-password' });
+    const res = await request(h.app)
+      .post('/api/auth/sign-up')
+      .send({ ...body, workshopName: 'Two', password: 'another-password' });
     expect(res.status).toBe(409);
     expect(res.body.error.fieldErrors.email).toBeDefined();
-    const signIn = await request(h.app).post('/api/auth/sign-in').send({ email, password: 'long-enough-pass' });
+    const signIn = await request(h.app)
+      .post('/api/auth/sign-in')
+      .send({ email, password: 'long-enough-pass' });
     expect(signIn.status).toBe(200);
     expect(signIn.body.user.workshop.name).toBe('One');
   });
 
   it('when the body is not JSON, responds 400 in the error envelope', async () => {
-    const res = await request(h.app).post('/api/auth/sign-up').set('Content-Type', 'application/json').send('{oops');
+    const res = await request(h.app)
+      .post('/api/auth/sign-up')
+      .set('Content-Type', 'application/json')
+      .send('{oops');
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe('validation_failed');
   });
@@ -67,7 +92,9 @@ describe('POST /api/auth/sign-in, /refresh and /sign-out', () => {
   it('signs in case-insensitively, rotates the refresh token, and refuses the spent one', async () => {
     const w = await buildWorkshop(h.handle.db, TEST_JWT_SECRET, { roles: ['formulator'] });
     const email = w.members.formulator.email;
-    const signIn = await request(h.app).post('/api/auth/sign-in').send({ email: ` ${email.toUpperCase()} `, password: BUILT_PASSWORD });
+    const signIn = await request(h.app)
+      .post('/api/auth/sign-in')
+      .send({ email: ` ${email.toUpperCase()} `, password: BUILT_PASSWORD });
     expect(signIn.status).toBe(200);
     expect(signIn.body.user.role).toBe('formulator');
     const first = refreshCookie(signIn)!.split(';')[0]!;
@@ -88,7 +115,9 @@ describe('POST /api/auth/sign-in, /refresh and /sign-out', () => {
 
   it('with a wrong password, responds 401 without saying which part was wrong', async () => {
     const w = await buildWorkshop(h.handle.db, TEST_JWT_SECRET, { roles: ['viewer'] });
-    const res = await request(h.app).post('/api/auth/sign-in').send({ email: w.members.viewer.email, password: 'wrong-password' });
+    const res = await request(h.app)
+      .post('/api/auth/sign-in')
+      .send({ email: w.members.viewer.email, password: 'wrong-password' });
     expect(res.status).toBe(401);
     expect(res.body.error.message).toMatch(/do not match/);
   });
@@ -101,7 +130,13 @@ describe('POST /api/auth/sign-in, /refresh and /sign-out', () => {
     const email = uniqueEmail('target');
     const statuses: number[] = [];
     for (let i = 0; i < 6; i++) {
-      statuses.push((await request(h.app).post('/api/auth/sign-in').send({ email, password: 'guess-' + i })).status);
+      statuses.push(
+        (
+          await request(h.app)
+            .post('/api/auth/sign-in')
+            .send({ email, password: 'guess-' + i })
+        ).status,
+      );
     }
     expect(statuses.slice(0, 5)).toEqual([401, 401, 401, 401, 401]);
     const last = await request(h.app).post('/api/auth/sign-in').send({ email, password: 'guess' });
@@ -134,14 +169,20 @@ describe('invitations by e-mail', () => {
     const preview = await request(h.app).get(`/api/auth/invitations/${encodeURIComponent(token)}`);
     expect(preview.body).toMatchObject({ email, role: 'production', workshopName: w.name });
 
-    const accepted = await request(h.app).post('/api/auth/invitations/accept').send({ token, name: 'Wren Halloway', password: 'invited-password' });
+    const accepted = await request(h.app)
+      .post('/api/auth/invitations/accept')
+      .send({ token, name: 'Wren Halloway', password: 'invited-password' });
     expect(accepted.status).toBe(201);
     expect(accepted.body.user).toMatchObject({ email, role: 'production', workshop: { id: w.id } });
 
-    const again = await request(h.app).post('/api/auth/invitations/accept').send({ token, name: 'Again', password: 'invited-password' });
+    const again = await request(h.app)
+      .post('/api/auth/invitations/accept')
+      .send({ token, name: 'Again', password: 'invited-password' });
     expect(again.status).toBe(404);
 
-    const signIn = await request(h.app).post('/api/auth/sign-in').send({ email, password: 'invited-password' });
+    const signIn = await request(h.app)
+      .post('/api/auth/sign-in')
+      .send({ email, password: 'invited-password' });
     expect(signIn.body.user.role).toBe('production');
   });
 
@@ -166,7 +207,9 @@ describe('invitations by e-mail', () => {
   });
 
   it('accepting with a bad body responds 400 with field errors', async () => {
-    const res = await request(h.app).post('/api/auth/invitations/accept').send({ token: 'short', password: 'x' });
+    const res = await request(h.app)
+      .post('/api/auth/invitations/accept')
+      .send({ token: 'short', password: 'x' });
     expect(res.status).toBe(400);
     expect(Object.keys(res.body.error.fieldErrors).sort()).toEqual(['name', 'password', 'token']);
   });
@@ -176,20 +219,36 @@ describe('password reset by e-mail', () => {
   it('sends a one-time link that sets a new password and ends other sessions', async () => {
     const w = await buildWorkshop(h.handle.db, TEST_JWT_SECRET, { roles: ['viewer'] });
     const email = w.members.viewer.email;
-    const signIn = await request(h.app).post('/api/auth/sign-in').send({ email, password: BUILT_PASSWORD });
+    const signIn = await request(h.app)
+      .post('/api/auth/sign-in')
+      .send({ email, password: BUILT_PASSWORD });
     const oldCookie = refreshCookie(signIn)!.split(';')[0]!;
 
     const asked = await request(h.app).post('/api/auth/password-reset/request').send({ email });
     expect(asked.status).toBe(202);
-    const token = decodeURIComponent(firstLink(await h.mail.waitFor(email)).split('/reset-password/')[1]!);
+    const token = decodeURIComponent(
+      firstLink(await h.mail.waitFor(email)).split('/reset-password/')[1]!,
+    );
 
-    const done = await request(h.app).post('/api/auth/password-reset/complete').send({ token, password: 'a-brand-new-pass' });
+    const done = await request(h.app)
+      .post('/api/auth/password-reset/complete')
+      .send({ token, password: 'a-brand-new-pass' });
     expect(done.status).toBe(204);
-    expect((await request(h.app).post('/api/auth/sign-in').send({ email, password: BUILT_PASSWORD })).status).toBe(401);
-    expect((await request(h.app).post('/api/auth/sign-in').send({ email, password: 'a-brand-new-pass' })).status).toBe(200);
-    expect((await request(h.app).post('/api/auth/refresh').set('Cookie', oldCookie)).status).toBe(401);
+    expect(
+      (await request(h.app).post('/api/auth/sign-in').send({ email, password: BUILT_PASSWORD }))
+        .status,
+    ).toBe(401);
+    expect(
+      (await request(h.app).post('/api/auth/sign-in').send({ email, password: 'a-brand-new-pass' }))
+        .status,
+    ).toBe(200);
+    expect((await request(h.app).post('/api/auth/refresh').set('Cookie', oldCookie)).status).toBe(
+      401,
+    );
 
-    const reuse = await request(h.app).post('/api/auth/password-reset/complete').send({ token, password: 'yet-another-pass' });
+    const reuse = await request(h.app)
+      .post('/api/auth/password-reset/complete')
+      .send({ token, password: 'yet-another-pass' });
     expect(reuse.status).toBe(400);
     expect(reuse.body.error.fieldErrors.token).toBeDefined();
   });
@@ -202,7 +261,9 @@ describe('password reset by e-mail', () => {
   });
 
   it('with a malformed e-mail responds 400 with fieldErrors.email', async () => {
-    const res = await request(h.app).post('/api/auth/password-reset/request').send({ email: 'nope' });
+    const res = await request(h.app)
+      .post('/api/auth/password-reset/request')
+      .send({ email: 'nope' });
     expect(res.status).toBe(400);
     expect(res.body.error.fieldErrors.email).toBeDefined();
   });

@@ -25,7 +25,10 @@ const blueFizzer = (): EvaluationInputDraft => ({
     ifraCategory: '9',
   },
   lines: [
-    { grams: 500, material: { name: 'Bicarb', inci: 'Sodium Bicarbonate', functions: ['buffering'] } },
+    {
+      grams: 500,
+      material: { name: 'Bicarb', inci: 'Sodium Bicarbonate', functions: ['buffering'] },
+    },
     { grams: 250, material: { name: 'Citric', inci: 'Citric Acid', functions: ['ph adjuster'] } },
     {
       grams: 5,
@@ -42,8 +45,11 @@ const blueFizzer = (): EvaluationInputDraft => ({
   ],
 });
 
-const post = (body: unknown) =>
-  request(h.app).post('/api/evaluations').set('Authorization', `Bearer ${w.members.production.token}`).send(body);
+const post = (body: object) =>
+  request(h.app)
+    .post('/api/evaluations')
+    .set('Authorization', `Bearer ${w.members.production.token}`)
+    .send(body);
 
 describe('POST /api/evaluations', () => {
   it('blocks ultramarines in a US bath product and names the rule', async () => {

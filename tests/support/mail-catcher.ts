@@ -20,7 +20,11 @@ export async function startMailCatcher() {
       }
     },
   });
-  const mailer = createSmtpMailer({ host: '127.0.0.1', port: server.port, from: 'Batchproof <test@batchproof.example>' });
+  const mailer = createSmtpMailer({
+    host: '127.0.0.1',
+    port: server.port,
+    from: 'Batchproof <test@batchproof.example>',
+  });
   return {
     mailer,
     received,
@@ -30,7 +34,10 @@ export async function startMailCatcher() {
       const found = received.find(match);
       if (found) return Promise.resolve(found);
       return new Promise((resolve, reject) => {
-        const timer = setTimeout(() => reject(new Error(`No e-mail to ${to} within ${timeoutMs} ms`)), timeoutMs);
+        const timer = setTimeout(
+          () => reject(new Error(`No e-mail to ${to} within ${timeoutMs} ms`)),
+          timeoutMs,
+        );
         waiters.push({ match, resolve: (m) => (clearTimeout(timer), resolve(m)) });
       });
     },

@@ -5,7 +5,9 @@ import { applyMigrations, openDatabase, type DatabaseHandle } from '../../apps/a
 export function testDatabaseUrl(): string {
   const url = process.env['TEST_DATABASE_URL'];
   if (!url) {
-    throw new Error('TEST_DATABASE_URL is not set: run the suites through `npm test`, which provisions it.');
+    throw new Error(
+      'TEST_DATABASE_URL is not set: run the suites through `npm test`, which provisions it.',
+    );
   }
   return url;
 }

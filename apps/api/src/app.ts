@@ -10,6 +10,11 @@ import { healthRouter } from './health/health-router';
 import type { Mailer } from './mail/mailer';
 import { membersRouter } from './members/members-router';
 import { referenceRouter } from './reference/reference-router';
+import { documentsRouter } from './documents/documents-router';
+import { formulasRouter } from './formulas/formulas-router';
+import { lotsRouter } from './lots/lots-router';
+import { materialsRouter } from './materials/materials-router';
+import { suppliersRouter } from './suppliers/suppliers-router';
 import { evaluationsRouter } from './evaluations/evaluations-router';
 
 /** Everything the app needs from outside; tests pass their own. */
@@ -60,6 +65,11 @@ export function createApp(deps: AppDeps): Express {
   api.use('/reference', referenceRouter({ db: deps.db, authn }));
   api.use('/evaluations', evaluationsRouter({ authn }));
   // Routers of the formulator's workspace (suppliers, materials, documents, lots, formulas) mount here.
+  api.use('/suppliers', suppliersRouter({ db: deps.db, authn }));
+  api.use('/materials', materialsRouter({ db: deps.db, authn }));
+  api.use('/documents', documentsRouter({ db: deps.db, authn }));
+  api.use('/lots', lotsRouter({ db: deps.db, authn }));
+  api.use('/formulas', formulasRouter({ db: deps.db, authn }));
   api.use(apiNotFound);
   api.use(errorHandler);
   app.use('/api', api);

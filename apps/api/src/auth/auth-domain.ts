@@ -112,8 +112,13 @@ export async function requestPasswordReset(
 export async function completePasswordReset(db: Database, token: string, password: string) {
   const done = await repo.completePasswordReset(db, hashToken(token), await hashPassword(password));
   if (!done) {
-    throw new AppError(400, 'validation_failed', 'This reset link has expired or was already used.', {
-      token: ['This reset link has expired or was already used. Ask for a new one.'],
-    });
+    throw new AppError(
+      400,
+      'validation_failed',
+      'This reset link has expired or was already used.',
+      {
+        token: ['This reset link has expired or was already used. Ask for a new one.'],
+      },
+    );
   }
 }

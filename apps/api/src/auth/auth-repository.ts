@@ -26,7 +26,10 @@ export async function findUserByEmail(db: Database, email: string) {
 }
 
 export async function findWorkshop(db: Database, id: string) {
-  const [row] = await db.select({ id: workshops.id, name: workshops.name }).from(workshops).where(eq(workshops.id, id));
+  const [row] = await db
+    .select({ id: workshops.id, name: workshops.name })
+    .from(workshops)
+    .where(eq(workshops.id, id));
   return row;
 }
 

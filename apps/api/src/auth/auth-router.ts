@@ -36,7 +36,11 @@ export function authRouter({ db, mailer, config }: AuthRouterDeps): Router {
     path: REFRESH_PATH,
     expires,
   });
-  const respondWithSession = async (res: Response, user: Parameters<typeof auth.issueSession>[2], status = 200) => {
+  const respondWithSession = async (
+    res: Response,
+    user: Parameters<typeof auth.issueSession>[2],
+    status = 200,
+  ) => {
     const { session, refreshToken, refreshExpires } = await auth.issueSession(db, config, user);
     res.cookie(REFRESH_COOKIE, refreshToken, cookieOptions(refreshExpires));
     res.status(status).json(session);
@@ -49,9 +53,18 @@ export function authRouter({ db, mailer, config }: AuthRouterDeps): Router {
     limit: config.signInLimit,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
-    keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '')}|${String(req.body?.email ?? '').trim().toLowerCase()}`,
+    keyGenerator: (req) =>
+      `${ipKeyGenerator(req.ip ?? '')}|${String(req.body?.email ?? '')
+        .trim()
+        .toLowerCase()}`,
     handler: (_req, _res, next) =>
-      next(new AppError(429, 'rate_limited', 'Too many sign-in attempts. Wait a few minutes and try again.')),
+      next(
+        new AppError(
+          429,
+          'rate_limited',
+          'Too many sign-in attempts. Wait a few minutes and try again.',
+        ),
+      ),
   });
 
   router.post('/sign-up', async (req, res) => {
@@ -87,7 +100,9 @@ export function authRouter({ db, mailer, config }: AuthRouterDeps): Router {
   router.post('/password-reset/request', async (req, res) => {
     const { email } = parse(passwordResetRequestSchema, req.body);
     await auth.requestPasswordReset(db, mailer, config.appUrl, email);
-    res.status(202).json({ message: 'If an account uses that e-mail, a reset link is on its way.' });
+    res
+      .status(202)
+      .json({ message: 'If an account uses that e-mail, a reset link is on its way.' });
   });
 
   router.post('/password-reset/complete', async (req, res) => {

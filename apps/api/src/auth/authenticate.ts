@@ -60,11 +60,10 @@ export function createAuthenticator(db: Database, secret: string) {
   };
 
   /** Authenticates, then lets through only the given roles (403 otherwise). */
-  const allow =
-    (roles: readonly Role[]): RequestHandler[] => [
-      authenticate,
-      (req, _res, next) => next(roles.includes(req.user!.role) ? undefined : forbidden()),
-    ];
+  const allow = (roles: readonly Role[]): RequestHandler[] => [
+    authenticate,
+    (req, _res, next) => next(roles.includes(req.user!.role) ? undefined : forbidden()),
+  ];
 
   return { authenticate, allow };
 }

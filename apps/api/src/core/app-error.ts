@@ -13,7 +13,8 @@ export class AppError extends Error {
   }
 }
 
-export const notFound = (what = 'That record') => new AppError(404, 'not_found', `${what} was not found.`);
+export const notFound = (what = 'That record') =>
+  new AppError(404, 'not_found', `${what} was not found.`);
 export const forbidden = () =>
   new AppError(403, 'forbidden', 'Your role in this workshop does not allow this.');
 export const conflict = (message: string, fieldErrors?: Record<string, string[]>) =>

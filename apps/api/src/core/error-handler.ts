@@ -36,10 +36,14 @@ function toEnvelope(err: unknown) {
   }
   const e = err as { type?: string; status?: number };
   if (e?.type === 'entity.parse.failed') {
-    return send(400, { error: { code: 'validation_failed', message: 'The request body is not valid JSON.' } });
+    return send(400, {
+      error: { code: 'validation_failed', message: 'The request body is not valid JSON.' },
+    });
   }
   if (e?.type === 'entity.too.large') {
-    return send(413, { error: { code: 'payload_too_large', message: 'The request body is too large.' } });
+    return send(413, {
+      error: { code: 'payload_too_large', message: 'The request body is too large.' },
+    });
   }
   return send(500, { error: { code: 'internal', message: 'Something went wrong on our side.' } });
 }

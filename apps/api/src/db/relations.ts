@@ -1,5 +1,19 @@
 import { relations } from 'drizzle-orm';
-import { auditEvents, invitations, refreshSessions, users, workshops } from './schema';
+import {
+  auditEvents,
+  documents,
+  formulaLines,
+  formulas,
+  formulaVersions,
+  invitations,
+  lotConsumptions,
+  lots,
+  materials,
+  refreshSessions,
+  suppliers,
+  users,
+  workshops,
+} from './schema';
 
 export const workshopRelations = relations(workshops, ({ many }) => ({
   users: many(users),
@@ -22,4 +36,53 @@ export const refreshSessionRelations = relations(refreshSessions, ({ one }) => (
 
 export const auditEventRelations = relations(auditEvents, ({ one }) => ({
   workshop: one(workshops, { fields: [auditEvents.workshopId], references: [workshops.id] }),
+}));
+
+export const supplierRelations = relations(suppliers, ({ one, many }) => ({
+  workshop: one(workshops, { fields: [suppliers.workshopId], references: [workshops.id] }),
+  materials: many(materials),
+}));
+
+export const materialRelations = relations(materials, ({ one, many }) => ({
+  workshop: one(workshops, { fields: [materials.workshopId], references: [workshops.id] }),
+  supplier: one(suppliers, { fields: [materials.supplierId], references: [suppliers.id] }),
+  lots: many(lots),
+  documents: many(documents),
+}));
+
+export const lotRelations = relations(lots, ({ one, many }) => ({
+  workshop: one(workshops, { fields: [lots.workshopId], references: [workshops.id] }),
+  material: one(materials, { fields: [lots.materialId], references: [materials.id] }),
+  consumptions: many(lotConsumptions),
+  documents: many(documents),
+}));
+
+export const lotConsumptionRelations = relations(lotConsumptions, ({ one }) => ({
+  lot: one(lots, { fields: [lotConsumptions.lotId], references: [lots.id] }),
+}));
+
+export const documentRelations = relations(documents, ({ one }) => ({
+  workshop: one(workshops, { fields: [documents.workshopId], references: [workshops.id] }),
+  material: one(materials, { fields: [documents.materialId], references: [materials.id] }),
+  lot: one(lots, { fields: [documents.lotId], references: [lots.id] }),
+  uploader: one(users, { fields: [documents.uploadedBy], references: [users.id] }),
+}));
+
+export const formulaRelations = relations(formulas, ({ one, many }) => ({
+  workshop: one(workshops, { fields: [formulas.workshopId], references: [workshops.id] }),
+  versions: many(formulaVersions),
+}));
+
+export const formulaVersionRelations = relations(formulaVersions, ({ one, many }) => ({
+  formula: one(formulas, { fields: [formulaVersions.formulaId], references: [formulas.id] }),
+  lines: many(formulaLines),
+  releaser: one(users, { fields: [formulaVersions.releasedBy], references: [users.id] }),
+}));
+
+export const formulaLineRelations = relations(formulaLines, ({ one }) => ({
+  version: one(formulaVersions, {
+    fields: [formulaLines.versionId],
+    references: [formulaVersions.id],
+  }),
+  material: one(materials, { fields: [formulaLines.materialId], references: [materials.id] }),
 }));

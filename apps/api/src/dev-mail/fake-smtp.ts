@@ -34,7 +34,9 @@ export async function startFakeSmtp(options: {
           await options.onMessage({
             id: `${Date.now()}-${++seq}`,
             receivedAt: new Date().toISOString(),
-            from: parsed.from?.text ?? String(session.envelope.mailFrom && session.envelope.mailFrom.address),
+            from:
+              parsed.from?.text ??
+              String(session.envelope.mailFrom && session.envelope.mailFrom.address),
             to: session.envelope.rcptTo.map((r) => r.address),
             subject: parsed.subject ?? '',
             text: parsed.text ?? '',

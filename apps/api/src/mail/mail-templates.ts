@@ -2,7 +2,10 @@ import type { Role } from '@batchproof/shared';
 import type { OutgoingMail } from './mailer';
 
 const escapeHtml = (s: string) =>
-  s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
+  s.replace(
+    /[&<>"']/g,
+    (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!,
+  );
 
 function wrap(paragraphs: string[], link: { href: string; label: string }): string {
   const body = paragraphs.map((p) => `<p>${escapeHtml(p)}</p>`).join('');
@@ -31,7 +34,11 @@ export function invitationMail(input: {
 }
 
 /** The password-reset link. */
-export function passwordResetMail(input: { to: string; link: string; minutes: number }): OutgoingMail {
+export function passwordResetMail(input: {
+  to: string;
+  link: string;
+  minutes: number;
+}): OutgoingMail {
   const lines = [
     'Someone asked to reset the password of your Batchproof account.',
     `Open the link below within ${input.minutes} minutes to choose a new one. If it was not you, ignore this e-mail; your password stays as it is.`,

@@ -16,7 +16,9 @@ import * as repo from './members-repository';
 
 const INVITATION_DAYS = 7;
 const iso = <T extends Record<string, unknown>>(row: T) =>
-  Object.fromEntries(Object.entries(row).map(([k, v]) => [k, v instanceof Date ? v.toISOString() : v]));
+  Object.fromEntries(
+    Object.entries(row).map(([k, v]) => [k, v instanceof Date ? v.toISOString() : v]),
+  );
 
 export async function listMembers(db: Database, actor: AuthUser, q: MemberListQuery) {
   return { items: (await repo.listMembers(db, actor.workshopId, q)).map(iso) };
@@ -100,9 +102,14 @@ export async function acceptInvitation(db: Database, input: AcceptInvitation): P
 }
 
 const lastOwner = () =>
-  new AppError(409, 'conflict', 'A workshop needs at least one owner. Make someone else owner first.', {
-    role: ['A workshop needs at least one owner.'],
-  });
+  new AppError(
+    409,
+    'conflict',
+    'A workshop needs at least one owner. Make someone else owner first.',
+    {
+      role: ['A workshop needs at least one owner.'],
+    },
+  );
 
 /** Changes a member's role; the last owner cannot be demoted. */
 export async function changeRole(db: Database, actor: AuthUser, id: string, role: Role) {

@@ -85,7 +85,14 @@ export async function listPendingInvitations(db: Database, workshopId: string) {
 
 export async function insertInvitation(
   db: Database,
-  row: { workshopId: string; email: string; role: Role; tokenHash: string; invitedBy: string; expiresAt: Date },
+  row: {
+    workshopId: string;
+    email: string;
+    role: Role;
+    tokenHash: string;
+    invitedBy: string;
+    expiresAt: Date;
+  },
 ) {
   const [created] = await db.insert(invitations).values(row).returning(invitationColumns);
   return created!;
@@ -94,7 +101,13 @@ export async function insertInvitation(
 export async function deleteInvitation(db: Database, workshopId: string, id: string) {
   const [row] = await db
     .delete(invitations)
-    .where(and(eq(invitations.workshopId, workshopId), eq(invitations.id, id), isNull(invitations.acceptedAt)))
+    .where(
+      and(
+        eq(invitations.workshopId, workshopId),
+        eq(invitations.id, id),
+        isNull(invitations.acceptedAt),
+      ),
+    )
     .returning({ id: invitations.id });
   return row;
 }
@@ -141,9 +154,12 @@ export async function insertMember(
   db: Database,
   row: { workshopId: string; email: string; name: string; passwordHash: string; role: Role },
 ) {
-  const [created] = await db
-    .insert(users)
-    .values(row)
-    .returning({ id: users.id, workshopId: users.workshopId, role: users.role, name: users.name, email: users.email });
+  const [created] = await db.insert(users).values(row).returning({
+    id: users.id,
+    workshopId: users.workshopId,
+    role: users.role,
+    name: users.name,
+    email: users.email,
+  });
   return created!;
 }

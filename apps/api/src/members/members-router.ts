@@ -22,7 +22,12 @@ function recordId(raw: unknown, what: string): string {
   return parsed.data;
 }
 
-export function membersRouter(deps: { db: Database; mailer: Mailer; authn: Authenticator; appUrl: string }) {
+export function membersRouter(deps: {
+  db: Database;
+  mailer: Mailer;
+  authn: Authenticator;
+  appUrl: string;
+}) {
   const { db, mailer, authn, appUrl } = deps;
   const router = Router();
 

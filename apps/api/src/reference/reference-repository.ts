@@ -16,7 +16,10 @@ export function listReferenceLists(db: Database) {
 }
 
 export async function findReferenceList(db: Database, key: string) {
-  const [row] = await db.select(listColumns).from(referenceLists).where(eq(referenceLists.key, key));
+  const [row] = await db
+    .select(listColumns)
+    .from(referenceLists)
+    .where(eq(referenceLists.key, key));
   return row;
 }
 

@@ -23,7 +23,10 @@ export function referenceRouter({ db, authn }: { db: Database; authn: Authentica
     const { items, total } = await repo.pageReferenceRows(db, list.key, q);
     const body: ReferenceRowsPage = {
       list: iso(list),
-      items: items.map((r) => ({ ...r, status: r.status as ReferenceRowsPage['items'][number]['status'] })),
+      items: items.map((r) => ({
+        ...r,
+        status: r.status as ReferenceRowsPage['items'][number]['status'],
+      })),
       total,
       page: q.page,
       pageSize: q.pageSize,

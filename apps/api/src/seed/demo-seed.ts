@@ -4,24 +4,32 @@ import { demoMembers, demoWorkshop } from '../../../../fixtures/demo/hollowmere'
 import { BCRYPT_COST } from '../auth/auth-domain';
 import type { Database } from '../db/database';
 import { users, workshops } from '../db/schema';
+import { seedDemoWorkspace } from './demo-workspace-seed';
 
 /**
  * Seeds the demo workshop once. On later runs it only makes sure the demo users' passwords match
  * `password` (so a changed DEMO_PASSWORD takes effect), and otherwise leaves the data alone.
  */
-export async function seedDemo(db: Database, password: string): Promise<'created' | 'updated' | 'unchanged'> {
+export async function seedDemo(
+  db: Database,
+  password: string,
+): Promise<'created' | 'updated' | 'unchanged'> {
   const emails = demoMembers.map((m) => m.email);
   const existing = await db.select().from(users).where(inArray(users.email, emails));
   const passwordHash = await bcrypt.hash(password, BCRYPT_COST);
   if (existing.length === 0) {
-    await db.transaction(async (tx) => {
+    const workshopId = await db.transaction(async (tx) => {
       const [workshop] = await tx.insert(workshops).values({ name: demoWorkshop.name }).returning();
-      await tx.insert(users).values(
-        demoMembers.map((m) => ({ ...m, workshopId: workshop!.id, passwordHash })),
-      );
+      await tx
+        .insert(users)
+        .values(demoMembers.map((m) => ({ ...m, workshopId: workshop!.id, passwordHash })));
+      return workshop!.id;
     });
+    await seedDemoWorkspace(db, workshopId);
     return 'created';
   }
+  // A demo database created before the workspace existed gets its materials and formulas once.
+  await seedDemoWorkspace(db, existing[0]!.workshopId);
   const owner = existing.find((u) => u.role === 'owner') ?? existing[0]!;
   if (await bcrypt.compare(password, owner.passwordHash)) return 'unchanged';
   await db.update(users).set({ passwordHash }).where(inArray(users.email, emails));

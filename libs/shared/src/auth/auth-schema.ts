@@ -48,7 +48,11 @@ export const userSchema = z.object({
 });
 export type User = z.infer<typeof userSchema>;
 
-export const sessionSchema = z.object({ accessToken: z.string(), expiresIn: z.number(), user: userSchema });
+export const sessionSchema = z.object({
+  accessToken: z.string(),
+  expiresIn: z.number(),
+  user: userSchema,
+});
 export type Session = z.infer<typeof sessionSchema>;
 
 export const invitationPreviewSchema = z.object({
@@ -75,5 +79,8 @@ export type AcceptInvitation = z.infer<typeof acceptInvitationSchema>;
 export const passwordResetRequestSchema = z.object({ email: emailSchema });
 export type PasswordResetRequest = z.infer<typeof passwordResetRequestSchema>;
 
-export const passwordResetCompleteSchema = z.object({ token: tokenSchema, password: newPasswordSchema });
+export const passwordResetCompleteSchema = z.object({
+  token: tokenSchema,
+  password: newPasswordSchema,
+});
 export type PasswordResetComplete = z.infer<typeof passwordResetCompleteSchema>;

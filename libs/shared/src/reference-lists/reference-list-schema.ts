@@ -30,7 +30,11 @@ export const referenceRowsQuerySchema = z.object({
   status: z.enum(['C', 'C2', 'CALC', 'M']).optional(),
   sort: z.enum(['position', 'label', 'source', 'status', 'effectiveFrom']).default('position'),
   dir: z.enum(['asc', 'desc']).default('asc'),
-  page: z.coerce.number().int('Page must be a whole number.').min(1, 'Page starts at 1.').default(1),
+  page: z.coerce
+    .number()
+    .int('Page must be a whole number.')
+    .min(1, 'Page starts at 1.')
+    .default(1),
   pageSize: z.coerce.number().int().min(1).max(200, 'At most 200 rows a page.').default(25),
 });
 export type ReferenceRowsQuery = z.infer<typeof referenceRowsQuerySchema>;

@@ -3,3 +3,8 @@ export * from './users';
 export * from './tokens';
 export * from './audit';
 export * from './reference';
+export * from './suppliers';
+export * from './materials';
+export * from './lots';
+export * from './documents';
+export * from './formulas';

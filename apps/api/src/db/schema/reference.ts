@@ -1,4 +1,13 @@
-import { date, index, integer, jsonb, pgTable, primaryKey, text, timestamp } from 'drizzle-orm/pg-core';
+import {
+  date,
+  index,
+  integer,
+  jsonb,
+  pgTable,
+  primaryKey,
+  text,
+  timestamp,
+} from 'drizzle-orm/pg-core';
 
 /**
  * Reference lists (colourant permissions, labelled allergens, required warnings). They are not
@@ -33,5 +42,8 @@ export const referenceRows = pgTable(
     note: text(),
     data: jsonb().$type<Record<string, unknown>>().notNull(),
   },
-  (t) => [primaryKey({ columns: [t.listKey, t.rowId] }), index('reference_rows_label_idx').on(t.listKey, t.label)],
+  (t) => [
+    primaryKey({ columns: [t.listKey, t.rowId] }),
+    index('reference_rows_label_idx').on(t.listKey, t.label),
+  ],
 );

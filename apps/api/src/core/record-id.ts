@@ -1,0 +1,11 @@
+import { z } from 'zod';
+import { notFound } from './app-error';
+
+const idParam = z.uuid();
+
+/** Parses a record id from the path; a malformed id is simply not found (never a 400 or 500). */
+export function recordId(raw: unknown, what: string): string {
+  const parsed = idParam.safeParse(raw);
+  if (!parsed.success) throw notFound(what);
+  return parsed.data;
+}

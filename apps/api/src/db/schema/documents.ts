@@ -1,0 +1,57 @@
+import { sql } from 'drizzle-orm';
+import {
+  check,
+  customType,
+  date,
+  index,
+  integer,
+  pgEnum,
+  pgTable,
+  text,
+  uuid,
+} from 'drizzle-orm/pg-core';
+import { DOCUMENT_KINDS } from '@batchproof/shared';
+import { id, timestamps } from './columns';
+import { lots } from './lots';
+import { materials } from './materials';
+import { users } from './users';
+import { workshops } from './workshops';
+
+/** PostgreSQL bytea; node-postgres hands it over as a Buffer. */
+const bytea = customType<{ data: Buffer; driverData: Buffer }>({
+  dataType: () => 'bytea',
+});
+
+export const documentKindEnum = pgEnum('document_kind', DOCUMENT_KINDS);
+
+/**
+ * A supplier document with its file. The bytes live in the same row as the metadata, so one
+ * database backup holds everything and a failed insert leaves nothing behind.
+ */
+export const documents = pgTable(
+  'documents',
+  {
+    id: id(),
+    workshopId: uuid()
+      .notNull()
+      .references(() => workshops.id, { onDelete: 'cascade' }),
+    materialId: uuid().references(() => materials.id, { onDelete: 'cascade' }),
+    lotId: uuid().references(() => lots.id, { onDelete: 'cascade' }),
+    kind: documentKindEnum().notNull(),
+    title: text().notNull(),
+    issuedOn: date({ mode: 'string' }).notNull(),
+    version: text(),
+    filename: text().notNull(),
+    mimeType: text().notNull(),
+    sizeBytes: integer().notNull(),
+    sha256: text().notNull(),
+    content: bytea().notNull(),
+    uploadedBy: uuid().references(() => users.id, { onDelete: 'set null' }),
+    ...timestamps,
+  },
+  (t) => [
+    check('documents_one_owner', sql`num_nonnulls(${t.materialId}, ${t.lotId}) = 1`),
+    index('documents_material_idx').on(t.workshopId, t.materialId, t.kind),
+    index('documents_lot_idx').on(t.workshopId, t.lotId),
+  ],
+);

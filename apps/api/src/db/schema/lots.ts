@@ -1,0 +1,83 @@
+import { sql } from 'drizzle-orm';
+import {
+  check,
+  date,
+  index,
+  numeric,
+  pgEnum,
+  pgTable,
+  text,
+  timestamp,
+  uuid,
+} from 'drizzle-orm/pg-core';
+import { LOT_UNITS } from '@batchproof/shared';
+import { id, timestamps } from './columns';
+import { materials } from './materials';
+import { workshops } from './workshops';
+
+export const lotUnitEnum = pgEnum('lot_unit', LOT_UNITS);
+
+/** Goods-in: one supplier lot of a material as received. */
+export const lots = pgTable(
+  'lots',
+  {
+    id: id(),
+    workshopId: uuid()
+      .notNull()
+      .references(() => workshops.id, { onDelete: 'cascade' }),
+    // Restrict: a material with stock history must not vanish from under its lots.
+    materialId: uuid()
+      .notNull()
+      .references(() => materials.id, { onDelete: 'restrict' }),
+    supplierLotNumber: text().notNull(),
+    quantity: numeric({ precision: 16, scale: 4, mode: 'number' }).notNull(),
+    unit: lotUnitEnum().notNull(),
+    receivedOn: date({ mode: 'string' }).notNull(),
+    expiresOn: date({ mode: 'string' }),
+    unitCost: numeric({ precision: 14, scale: 4, mode: 'number' }),
+    notes: text(),
+    ...timestamps,
+  },
+  (t) => [
+    check(
+      'lots_expiry_after_receipt',
+      sql`${t.expiresOn} is null or ${t.expiresOn} >= ${t.receivedOn}`,
+    ),
+    check('lots_quantity_positive', sql`${t.quantity} > 0`),
+    index('lots_workshop_received_idx').on(t.workshopId, t.receivedOn, t.id),
+    index('lots_workshop_expires_idx').on(t.workshopId, t.expiresOn, t.id),
+    index('lots_workshop_lot_number_idx').on(t.workshopId, t.supplierLotNumber, t.id),
+    index('lots_workshop_quantity_idx').on(t.workshopId, t.quantity, t.id),
+    index('lots_workshop_created_idx').on(t.workshopId, t.createdAt, t.id),
+    index('lots_material_idx').on(t.materialId, t.receivedOn),
+    // Trigram index (pg_trgm, migration 0003) so "lot number contains …" avoids a full scan.
+    index('lots_lot_number_trgm_idx').using('gin', sql`${t.supplierLotNumber} gin_trgm_ops`),
+  ],
+);
+
+/**
+ * What batches took out of a lot, in the lot's unit. Empty until batch records exist; stock on
+ * hand is always the lot's quantity minus the sum of these rows, never a stored counter.
+ */
+export const lotConsumptions = pgTable(
+  'lot_consumptions',
+  {
+    id: id(),
+    workshopId: uuid()
+      .notNull()
+      .references(() => workshops.id, { onDelete: 'cascade' }),
+    lotId: uuid()
+      .notNull()
+      .references(() => lots.id, { onDelete: 'restrict' }),
+    quantity: numeric({ precision: 16, scale: 4, mode: 'number' }).notNull(),
+    /** The batch that consumed it; a plain id until batch records land. */
+    batchId: uuid(),
+    consumedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    note: text(),
+    ...timestamps,
+  },
+  (t) => [
+    index('lot_consumptions_lot_idx').on(t.lotId),
+    index('lot_consumptions_workshop_idx').on(t.workshopId),
+  ],
+);

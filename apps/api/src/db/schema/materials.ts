@@ -1,0 +1,60 @@
+import { sql } from 'drizzle-orm';
+import { index, jsonb, pgEnum, pgTable, text, uuid } from 'drizzle-orm/pg-core';
+import {
+  MATERIAL_CATEGORIES,
+  type AllergenDeclaration,
+  type Calibration,
+  type IfraCertificate,
+  type Material,
+  type WeightPerVolume,
+} from '@batchproof/shared';
+import { id, timestamps } from './columns';
+import { suppliers } from './suppliers';
+import { workshops } from './workshops';
+
+export const materialCategoryEnum = pgEnum('material_category', MATERIAL_CATEGORIES);
+
+/**
+ * A raw material. The certificate data the compliance engine reads (blend components, IFRA
+ * maxima, allergen declaration) is stored as JSON documents: it is always read and written whole
+ * with its material, and validated by the shared schema on the way in.
+ */
+export const materials = pgTable(
+  'materials',
+  {
+    id: id(),
+    workshopId: uuid()
+      .notNull()
+      .references(() => workshops.id, { onDelete: 'cascade' }),
+    supplierId: uuid().references(() => suppliers.id, { onDelete: 'set null' }),
+    tradeName: text().notNull(),
+    inci: text().notNull(),
+    usName: text(),
+    cas: text(),
+    ec: text(),
+    functions: text()
+      .array()
+      .notNull()
+      .default(sql`'{}'::text[]`),
+    category: materialCategoryEnum().notNull(),
+    notes: text(),
+    colourIndex: text(),
+    components: jsonb().$type<Material['components']>().notNull().default([]),
+    ifraCertificate: jsonb().$type<IfraCertificate>(),
+    allergenDeclaration: jsonb().$type<AllergenDeclaration>(),
+    weightPerVolume: jsonb().$type<WeightPerVolume>().notNull().default({}),
+    calibrations: jsonb().$type<Calibration[]>().notNull().default([]),
+    ...timestamps,
+  },
+  (t) => [
+    index('materials_workshop_trade_name_idx').on(t.workshopId, t.tradeName, t.id),
+    index('materials_workshop_inci_idx').on(t.workshopId, t.inci, t.id),
+    index('materials_workshop_category_idx').on(t.workshopId, t.category, t.tradeName),
+    index('materials_workshop_updated_idx').on(t.workshopId, t.updatedAt),
+    index('materials_workshop_created_idx').on(t.workshopId, t.createdAt),
+    index('materials_supplier_idx').on(t.supplierId),
+    // Trigram indexes (pg_trgm, migration 0003) for the list's "contains" filter.
+    index('materials_trade_name_trgm_idx').using('gin', sql`${t.tradeName} gin_trgm_ops`),
+    index('materials_inci_trgm_idx').using('gin', sql`${t.inci} gin_trgm_ops`),
+  ],
+);

@@ -1,0 +1,167 @@
+import { createHash } from 'node:crypto';
+import path from 'node:path';
+import { fileTypeFromBuffer } from 'file-type';
+import type { z } from 'zod';
+import {
+  DOCUMENT_MIME_TYPES,
+  DOCUMENT_STALE_DAYS,
+  expectedDocumentKinds,
+  type documentUploadSchema,
+  type DocumentStatus,
+} from '@batchproof/shared';
+import type { AuthUser } from '../auth/authenticate';
+import { AppError, notFound } from '../core/app-error';
+import { withIsoDates } from '../core/list-paging';
+import type { Database } from '../db/database';
+import * as repo from './documents-repository';
+
+/** The uploaded file as multer's memory storage hands it over. */
+export interface UploadedFile {
+  originalname: string;
+  buffer: Buffer;
+  size: number;
+}
+
+const fieldError = (field: string, message: string) =>
+  new AppError(400, 'validation_failed', 'Some fields need attention.', { [field]: [message] });
+
+/** A file name safe for a Content-Disposition header and a download folder. */
+function safeFilename(original: string, ext: string) {
+  const base = [...path.basename(original.replace(/\\/g, '/'))]
+    .filter((c) => c !== '"' && c.charCodeAt(0) >= 0x20 && c.charCodeAt(0) !== 0x7f)
+    .join('');
+  return base.trim() || `document.${ext}`;
+}
+
+/**
+ * Stores an uploaded supplier document. The type is decided from the file's first bytes, never
+ * its name or the browser's claim, so a renamed executable is refused. Metadata and bytes go in
+ * one insert: a request that fails at any point leaves no row.
+ */
+export async function uploadDocument(
+  db: Database,
+  actor: AuthUser,
+  input: z.output<typeof documentUploadSchema>,
+  file: UploadedFile | undefined,
+) {
+  if (!file || file.size === 0)
+    throw fieldError('file', 'Choose a PDF, PNG or JPEG file to upload');
+  const detected = await fileTypeFromBuffer(file.buffer);
+  if (!detected || !(DOCUMENT_MIME_TYPES as readonly string[]).includes(detected.mime)) {
+    throw new AppError(
+      415,
+      'unsupported_media_type',
+      'Upload a PDF, PNG or JPEG file. The file’s contents are not one of these, whatever its name says.',
+      { file: ['Upload a PDF, PNG or JPEG file'] },
+    );
+  }
+  if (
+    input.materialId &&
+    !(await repo.findMaterialCategory(db, actor.workshopId, input.materialId))
+  ) {
+    throw fieldError('materialId', 'Choose one of this workshop’s materials');
+  }
+  if (input.lotId && !(await repo.lotExists(db, actor.workshopId, input.lotId))) {
+    throw fieldError('lotId', 'Choose one of this workshop’s lots');
+  }
+  const created = await repo.insertDocument(db, {
+    workshopId: actor.workshopId,
+    materialId: input.materialId ?? null,
+    lotId: input.lotId ?? null,
+    kind: input.kind,
+    title: input.title,
+    issuedOn: input.issuedOn,
+    version: input.version,
+    filename: safeFilename(file.originalname, detected.ext),
+    mimeType: detected.mime,
+    sizeBytes: file.size,
+    sha256: createHash('sha256').update(file.buffer).digest('hex'),
+    content: file.buffer,
+    uploadedBy: actor.id,
+  });
+  return withIsoDates(created);
+}
+
+/** The documents of one material or one lot of the caller's workshop; 404 for any other. */
+export async function listDocuments(
+  db: Database,
+  actor: AuthUser,
+  owner: { materialId?: string; lotId?: string },
+) {
+  if (
+    owner.materialId &&
+    !(await repo.findMaterialCategory(db, actor.workshopId, owner.materialId))
+  ) {
+    throw notFound('That material');
+  }
+  if (owner.lotId && !(await repo.lotExists(db, actor.workshopId, owner.lotId))) {
+    throw notFound('That lot');
+  }
+  const rows = await repo.listDocuments(db, actor.workshopId, owner);
+  return { items: rows.map(withIsoDates) };
+}
+
+export async function getDocument(db: Database, actor: AuthUser, id: string) {
+  const row = await repo.findDocument(db, actor.workshopId, id);
+  if (!row) throw notFound('That document');
+  return withIsoDates(row);
+}
+
+/** The stored file of a document of the caller's workshop. */
+export async function getDocumentContent(db: Database, actor: AuthUser, id: string) {
+  const row = await repo.findDocumentContent(db, actor.workshopId, id);
+  if (!row) throw notFound('That document');
+  return row;
+}
+
+export async function deleteDocument(db: Database, actor: AuthUser, id: string) {
+  if (!(await repo.deleteDocument(db, actor.workshopId, id))) throw notFound('That document');
+}
+
+const KIND_LABELS: Record<string, string> = {
+  sds: 'safety data sheet',
+  'ifra-certificate': 'IFRA certificate',
+  'allergen-declaration': 'allergen declaration',
+};
+
+/**
+ * Which documents a material should have on file (a safety data sheet always; an IFRA
+ * certificate and allergen declaration for fragrances and essential oils) and whether each is
+ * missing or issued more than a year before `now`.
+ */
+export async function documentStatus(
+  db: Database,
+  actor: AuthUser,
+  materialId: string,
+  now: Date,
+): Promise<DocumentStatus> {
+  const category = await repo.findMaterialCategory(db, actor.workshopId, materialId);
+  if (!category) throw notFound('That material');
+  const kinds = expectedDocumentKinds(category);
+  const docs = await repo.materialDocumentsOfKinds(db, actor.workshopId, materialId, kinds);
+  const cutoff = new Date(now.getTime() - DOCUMENT_STALE_DAYS * 86_400_000)
+    .toISOString()
+    .slice(0, 10);
+  const entries = kinds.map((kind) => {
+    const latest = docs.find((d) => d.kind === kind);
+    const label = KIND_LABELS[kind] ?? kind;
+    if (!latest) {
+      return { kind, state: 'missing' as const, latest: null, message: `No ${label} on file` };
+    }
+    const stale = latest.issuedOn < cutoff;
+    return {
+      kind,
+      state: stale ? ('out-of-date' as const) : ('current' as const),
+      latest: withIsoDates(latest),
+      message: stale
+        ? `The newest ${label} was issued on ${latest.issuedOn}, more than a year ago: ask the supplier for a current one`
+        : `${label[0]!.toUpperCase()}${label.slice(1)} issued on ${latest.issuedOn}`,
+    };
+  });
+  return {
+    materialId,
+    asOf: now.toISOString().slice(0, 10),
+    entries,
+    complete: entries.every((e) => e.state === 'current'),
+  };
+}

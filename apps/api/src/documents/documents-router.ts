@@ -1,0 +1,58 @@
+import { Router } from 'express';
+import multer from 'multer';
+import {
+  DOCUMENT_MAX_BYTES,
+  documentListQuerySchema,
+  documentUploadSchema,
+  ROLE_SETS,
+} from '@batchproof/shared';
+import type { Authenticator } from '../auth/authenticate';
+import { recordId } from '../core/record-id';
+import { parse } from '../core/validate';
+import type { Database } from '../db/database';
+import * as domain from './documents-domain';
+
+// Memory storage: the file goes straight into PostgreSQL, so nothing is left on disk when a
+// request fails. The size limit makes multer stop reading and raise LIMIT_FILE_SIZE (413).
+const upload = multer({
+  storage: multer.memoryStorage(),
+  limits: { fileSize: DOCUMENT_MAX_BYTES, files: 1, fields: 20, fieldSize: 10_000 },
+});
+
+/** `/api/documents`: supplier documents on materials and lots. */
+export function documentsRouter(deps: { db: Database; authn: Authenticator }) {
+  const { db, authn } = deps;
+  const router = Router();
+  const read = authn.allow(ROLE_SETS.members);
+  const write = authn.allow(ROLE_SETS.writers);
+
+  router.get('/', ...read, async (req, res) => {
+    const owner = parse(documentListQuerySchema, req.query);
+    res.json(await domain.listDocuments(db, req.user!, owner));
+  });
+  router.post('/', ...write, upload.single('file'), async (req, res) => {
+    const input = parse(documentUploadSchema, req.body);
+    res.status(201).json(await domain.uploadDocument(db, req.user!, input, req.file));
+  });
+  router.get('/:id', ...read, async (req, res) => {
+    res.json(await domain.getDocument(db, req.user!, recordId(req.params.id, 'That document')));
+  });
+  router.get('/:id/content', ...read, async (req, res) => {
+    const id = recordId(req.params.id, 'That document');
+    const file = await domain.getDocumentContent(db, req.user!, id);
+    res.set({
+      'Content-Type': file.mimeType,
+      'Content-Length': String(file.sizeBytes),
+      // The type was sniffed on upload; stop the browser from second-guessing it.
+      'X-Content-Type-Options': 'nosniff',
+      ETag: `"${file.sha256}"`,
+    });
+    res.attachment(file.filename);
+    res.end(file.content);
+  });
+  router.delete('/:id', ...write, async (req, res) => {
+    await domain.deleteDocument(db, req.user!, recordId(req.params.id, 'That document'));
+    res.status(204).end();
+  });
+  return router;
+}

@@ -1,0 +1,226 @@
+import { and, asc, count, eq, ilike, max, sql, type SQL } from 'drizzle-orm';
+import type { FormulaListQuery, ProductProfile, ProductType } from '@batchproof/shared';
+import { containsPattern, listOrder, pageWindow } from '../core/list-paging';
+import type { Database } from '../db/database';
+import { formulaLines, formulas, formulaVersions, materials } from '../db/schema';
+
+/** A stored version row. */
+export type VersionRow = typeof formulaVersions.$inferSelect;
+/** Fields of a formula the user edits directly. */
+export interface FormulaValues {
+  name: string;
+  productType: ProductType;
+  notes: string | null;
+}
+/** What a stored evaluation consists of. */
+export type EvaluationFields = Pick<
+  VersionRow,
+  'evaluation' | 'blockCount' | 'warnCount' | 'infoCount' | 'evaluationProblems' | 'evaluatedAt'
+>;
+
+// Spelled out in full: in a single-table select Drizzle renders `${formulas.id}` as a bare "id",
+// which inside the subquery would mean the version's own id.
+const outerFormulaId = sql.raw('"formulas"."id"');
+const latestNumber = sql<
+  number | null
+>`(select max(${formulaVersions.number}) from ${formulaVersions} where ${formulaVersions.formulaId} = ${outerFormulaId})`;
+const latestState = sql<
+  string | null
+>`(select ${formulaVersions.state} from ${formulaVersions} where ${formulaVersions.formulaId} = ${outerFormulaId} order by ${formulaVersions.number} desc limit 1)`;
+const releasedNumber = sql<
+  number | null
+>`(select ${formulaVersions.number} from ${formulaVersions} where ${formulaVersions.formulaId} = ${outerFormulaId} and ${formulaVersions.state} = 'released')`;
+const sortColumns = {
+  name: formulas.name,
+  productType: formulas.productType,
+  createdAt: formulas.createdAt,
+  updatedAt: formulas.updatedAt,
+} as const;
+
+/** One page of the workshop's formulas with their latest and released version numbers. */
+export async function pageFormulas(db: Database, workshopId: string, q: FormulaListQuery) {
+  const conditions: (SQL | undefined)[] = [eq(formulas.workshopId, workshopId)];
+  if (q.q) conditions.push(ilike(formulas.name, containsPattern(q.q)));
+  if (q.productType) conditions.push(eq(formulas.productType, q.productType));
+  const where = and(...conditions);
+  const { limit, offset } = pageWindow(q);
+  const [items, [total]] = await Promise.all([
+    db
+      .select({
+        id: formulas.id,
+        name: formulas.name,
+        productType: formulas.productType,
+        updatedAt: formulas.updatedAt,
+        latestVersion: latestNumber,
+        latestState: latestState.mapWith(String),
+        releasedVersion: releasedNumber,
+      })
+      .from(formulas)
+      .where(where)
+      .orderBy(...listOrder(sortColumns[q.sort], q.dir, formulas.id))
+      .limit(limit)
+      .offset(offset),
+    db.select({ n: count() }).from(formulas).where(where),
+  ]);
+  return { items, total: total?.n ?? 0 };
+}
+
+export async function findFormula(db: Database, workshopId: string, id: string, lock = false) {
+  const query = db
+    .select()
+    .from(formulas)
+    .where(and(eq(formulas.workshopId, workshopId), eq(formulas.id, id)));
+  const [row] = lock ? await query.for('update') : await query;
+  return row;
+}
+
+export async function listVersionSummaries(db: Database, workshopId: string, formulaId: string) {
+  return db
+    .select({
+      number: formulaVersions.number,
+      state: formulaVersions.state,
+      blockCount: formulaVersions.blockCount,
+      warnCount: formulaVersions.warnCount,
+      infoCount: formulaVersions.infoCount,
+      releasedAt: formulaVersions.releasedAt,
+      updatedAt: formulaVersions.updatedAt,
+    })
+    .from(formulaVersions)
+    .where(
+      and(eq(formulaVersions.workshopId, workshopId), eq(formulaVersions.formulaId, formulaId)),
+    )
+    .orderBy(asc(formulaVersions.number));
+}
+
+export async function insertFormula(db: Database, workshopId: string, values: FormulaValues) {
+  const [row] = await db
+    .insert(formulas)
+    .values({ ...values, workshopId })
+    .returning({ id: formulas.id });
+  return row!.id;
+}
+
+export async function updateFormula(
+  db: Database,
+  workshopId: string,
+  id: string,
+  values: Partial<FormulaValues>,
+) {
+  const [row] = await db
+    .update(formulas)
+    .set({ ...values, updatedAt: new Date() })
+    .where(and(eq(formulas.workshopId, workshopId), eq(formulas.id, id)))
+    .returning({ id: formulas.id });
+  return row?.id;
+}
+
+/** A version by formula and number; `lock` takes a row lock for the rest of the transaction. */
+export async function findVersion(
+  db: Database,
+  workshopId: string,
+  formulaId: string,
+  number: number,
+  lock = false,
+) {
+  const query = db
+    .select()
+    .from(formulaVersions)
+    .where(
+      and(
+        eq(formulaVersions.workshopId, workshopId),
+        eq(formulaVersions.formulaId, formulaId),
+        eq(formulaVersions.number, number),
+      ),
+    );
+  const [row] = lock ? await query.for('update') : await query;
+  return row;
+}
+
+/** The formula's versions in a state (at most one draft and one released exist). */
+export async function findVersionInState(
+  db: Database,
+  workshopId: string,
+  formulaId: string,
+  state: VersionRow['state'],
+) {
+  const [row] = await db
+    .select()
+    .from(formulaVersions)
+    .where(
+      and(
+        eq(formulaVersions.workshopId, workshopId),
+        eq(formulaVersions.formulaId, formulaId),
+        eq(formulaVersions.state, state),
+      ),
+    );
+  return row;
+}
+
+export async function latestVersionNumber(db: Database, workshopId: string, formulaId: string) {
+  const [row] = await db
+    .select({ n: max(formulaVersions.number) })
+    .from(formulaVersions)
+    .where(
+      and(eq(formulaVersions.workshopId, workshopId), eq(formulaVersions.formulaId, formulaId)),
+    );
+  return row?.n ?? 0;
+}
+
+/** Lines of a version in order, with each material's trade name. */
+export async function findLines(db: Database, workshopId: string, versionId: string) {
+  return db
+    .select({
+      materialId: formulaLines.materialId,
+      materialName: materials.tradeName,
+      grams: formulaLines.grams,
+    })
+    .from(formulaLines)
+    .innerJoin(materials, eq(materials.id, formulaLines.materialId))
+    .where(and(eq(formulaLines.workshopId, workshopId), eq(formulaLines.versionId, versionId)))
+    .orderBy(asc(formulaLines.position));
+}
+
+export async function insertVersion(
+  db: Database,
+  row: {
+    workshopId: string;
+    formulaId: string;
+    number: number;
+    profile: ProductProfile;
+    notes: string | null;
+  } & EvaluationFields,
+) {
+  const [created] = await db
+    .insert(formulaVersions)
+    .values(row)
+    .returning({ id: formulaVersions.id });
+  return created!.id;
+}
+
+/** Replaces a version's lines: one delete and one multi-row insert. */
+export async function replaceLines(
+  db: Database,
+  workshopId: string,
+  versionId: string,
+  lines: { materialId: string; grams: number }[],
+) {
+  await db
+    .delete(formulaLines)
+    .where(and(eq(formulaLines.workshopId, workshopId), eq(formulaLines.versionId, versionId)));
+  if (lines.length === 0) return;
+  await db
+    .insert(formulaLines)
+    .values(lines.map((l, position) => ({ ...l, position, workshopId, versionId })));
+}
+
+export async function updateVersion(
+  db: Database,
+  workshopId: string,
+  versionId: string,
+  values: Partial<Omit<VersionRow, 'id' | 'workshopId' | 'formulaId' | 'number' | 'createdAt'>>,
+) {
+  await db
+    .update(formulaVersions)
+    .set(values)
+    .where(and(eq(formulaVersions.workshopId, workshopId), eq(formulaVersions.id, versionId)));
+}

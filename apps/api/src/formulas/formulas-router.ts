@@ -1,0 +1,88 @@
+import { Router } from 'express';
+import { z } from 'zod';
+import {
+  compareQuerySchema,
+  formulaCreateSchema,
+  formulaListQuerySchema,
+  formulaUpdateSchema,
+  formulaVersionInputSchema,
+  newVersionSchema,
+  releaseSchema,
+  ROLE_SETS,
+  scaleRequestSchema,
+} from '@batchproof/shared';
+import type { Authenticator } from '../auth/authenticate';
+import { notFound } from '../core/app-error';
+import { recordId } from '../core/record-id';
+import { parse } from '../core/validate';
+import type { Database } from '../db/database';
+import * as views from './formula-views';
+import * as domain from './formulas-domain';
+
+const versionNumber = z.coerce.number().int().min(1).max(1_000_000);
+
+/** Parses `:n`; anything but a positive whole number is simply not found. */
+function versionParam(raw: unknown) {
+  const parsed = versionNumber.safeParse(raw);
+  if (!parsed.success) throw notFound('That version');
+  return parsed.data;
+}
+
+/** `/api/formulas`: versioned formulas. Members read, owner and formulator write. */
+export function formulasRouter(deps: { db: Database; authn: Authenticator }) {
+  const { db, authn } = deps;
+  const router = Router();
+  const read = authn.allow(ROLE_SETS.members);
+  const write = authn.allow(ROLE_SETS.writers);
+  const formulaId = (raw: unknown) => recordId(raw, 'That formula');
+
+  router.get('/', ...read, async (req, res) => {
+    res.json(await views.listFormulas(db, req.user!, parse(formulaListQuerySchema, req.query)));
+  });
+  router.post('/', ...write, async (req, res) => {
+    const input = parse(formulaCreateSchema, req.body);
+    res.status(201).json(await domain.createFormula(db, req.user!, input));
+  });
+  router.get('/:id', ...read, async (req, res) => {
+    res.json(await views.getFormula(db, req.user!, formulaId(req.params.id)));
+  });
+  router.patch('/:id', ...write, async (req, res) => {
+    const id = formulaId(req.params.id);
+    res.json(await domain.updateFormula(db, req.user!, id, parse(formulaUpdateSchema, req.body)));
+  });
+  router.get('/:id/compare', ...read, async (req, res) => {
+    const id = formulaId(req.params.id);
+    const { from, to } = parse(compareQuerySchema, req.query);
+    res.json(await views.compare(db, req.user!, id, from, to));
+  });
+  router.post('/:id/versions', ...write, async (req, res) => {
+    const id = formulaId(req.params.id);
+    const { fromVersion } = parse(newVersionSchema, req.body);
+    res.status(201).json(await domain.newDraft(db, req.user!, id, fromVersion));
+  });
+  router.get('/:id/versions/:n', ...read, async (req, res) => {
+    const id = formulaId(req.params.id);
+    res.json(await views.getVersion(db, req.user!, id, versionParam(req.params.n)));
+  });
+  router.put('/:id/versions/:n', ...write, async (req, res) => {
+    const id = formulaId(req.params.id);
+    const n = versionParam(req.params.n);
+    const input = parse(formulaVersionInputSchema, req.body);
+    res.json(await domain.saveDraft(db, req.user!, id, n, input));
+  });
+  router.patch('/:id/versions/:n', ...write, async (req, res) => {
+    const id = formulaId(req.params.id);
+    res.json(await domain.patchDraft(db, req.user!, id, versionParam(req.params.n), req.body));
+  });
+  router.post('/:id/versions/:n/release', ...write, async (req, res) => {
+    const id = formulaId(req.params.id);
+    const n = versionParam(req.params.n);
+    res.json(await domain.release(db, req.user!, id, n, parse(releaseSchema, req.body)));
+  });
+  router.post('/:id/versions/:n/scale', ...read, async (req, res) => {
+    const id = formulaId(req.params.id);
+    const n = versionParam(req.params.n);
+    res.json(await views.scale(db, req.user!, id, n, parse(scaleRequestSchema, req.body)));
+  });
+  return router;
+}

@@ -1,0 +1,58 @@
+import type { LotFields, LotListQuery } from '@batchproof/shared';
+import type { AuthUser } from '../auth/authenticate';
+import { AppError, conflict, notFound } from '../core/app-error';
+import { withIsoDates } from '../core/list-paging';
+import type { Database } from '../db/database';
+import * as repo from './lots-repository';
+
+/** A page of the caller's workshop's lots with stock on hand. */
+export async function listLots(db: Database, actor: AuthUser, q: LotListQuery) {
+  const { items, total } = await repo.pageLots(db, actor.workshopId, q);
+  return { items: items.map(withIsoDates), total, page: q.page, pageSize: q.pageSize };
+}
+
+/** One lot of the caller's workshop; 404 for any other. */
+export async function getLot(db: Database, actor: AuthUser, id: string) {
+  const row = await repo.findLot(db, actor.workshopId, id);
+  if (!row) throw notFound('That lot');
+  return withIsoDates(row);
+}
+
+async function checkMaterial(db: Database, workshopId: string, input: LotFields) {
+  if (!(await repo.materialExists(db, workshopId, input.materialId))) {
+    throw new AppError(400, 'validation_failed', 'Some fields need attention.', {
+      materialId: ['Choose one of this workshop’s materials'],
+    });
+  }
+}
+
+export async function createLot(db: Database, actor: AuthUser, input: LotFields) {
+  await checkMaterial(db, actor.workshopId, input);
+  return getLot(db, actor, await repo.insertLot(db, actor.workshopId, input));
+}
+
+/**
+ * Updates a lot. The received quantity may not drop below what batches already consumed, or
+ * stock on hand would go negative.
+ */
+export async function updateLot(db: Database, actor: AuthUser, id: string, input: LotFields) {
+  if (!(await repo.findLot(db, actor.workshopId, id))) throw notFound('That lot');
+  await checkMaterial(db, actor.workshopId, input);
+  const consumed = await repo.consumedQuantity(db, actor.workshopId, id);
+  if (input.quantity < consumed) {
+    throw conflict(`Batches already used ${consumed} of this lot.`, {
+      quantity: [`The quantity cannot be less than the ${consumed} already used`],
+    });
+  }
+  await repo.updateLot(db, actor.workshopId, id, input);
+  return getLot(db, actor, id);
+}
+
+/** Deletes a lot no batch has drawn from. */
+export async function deleteLot(db: Database, actor: AuthUser, id: string) {
+  if (!(await repo.findLot(db, actor.workshopId, id))) throw notFound('That lot');
+  if ((await repo.consumedQuantity(db, actor.workshopId, id)) > 0) {
+    throw conflict('Batches have used this lot; it cannot be deleted.');
+  }
+  await repo.deleteLot(db, actor.workshopId, id);
+}

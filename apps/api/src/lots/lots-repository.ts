@@ -1,0 +1,122 @@
+import { and, count, eq, lte, sql, type SQL } from 'drizzle-orm';
+import type { LotFields, LotListQuery } from '@batchproof/shared';
+import { containsPattern, listOrder, pageWindow } from '../core/list-paging';
+import type { Database } from '../db/database';
+import { lotConsumptions, lots, materials } from '../db/schema';
+
+// Computed per returned row only: PostgreSQL evaluates select-list subqueries after LIMIT. The
+// outer id is spelled out so the subquery can never bind it to its own table's id.
+const stockOnHand = sql<number>`(${lots.quantity} - coalesce((select sum(${lotConsumptions.quantity}) from ${lotConsumptions} where ${lotConsumptions.lotId} = ${sql.raw('"lots"."id"')}), 0))::float8`;
+
+const columns = {
+  id: lots.id,
+  materialId: lots.materialId,
+  materialName: materials.tradeName,
+  supplierLotNumber: lots.supplierLotNumber,
+  quantity: lots.quantity,
+  unit: lots.unit,
+  receivedOn: lots.receivedOn,
+  expiresOn: lots.expiresOn,
+  unitCost: lots.unitCost,
+  notes: lots.notes,
+  stockOnHand: stockOnHand.mapWith(Number),
+  createdAt: lots.createdAt,
+  updatedAt: lots.updatedAt,
+};
+const sortColumns = {
+  receivedOn: lots.receivedOn,
+  expiresOn: lots.expiresOn,
+  supplierLotNumber: lots.supplierLotNumber,
+  materialName: materials.tradeName,
+  quantity: lots.quantity,
+  createdAt: lots.createdAt,
+} as const;
+
+/** One page of the workshop's lots with stock on hand, filtered, sorted and paged in SQL. */
+export async function pageLots(db: Database, workshopId: string, q: LotListQuery) {
+  const conditions: (SQL | undefined)[] = [eq(lots.workshopId, workshopId)];
+  if (q.q) {
+    const p = containsPattern(q.q);
+    // A UNION of two index-backed lookups (lot number via its trigram index; material name via
+    // materials' trigram index, then lots by material) instead of an OR, which PostgreSQL can only
+    // answer by scanning every lot of the workshop.
+    conditions.push(
+      sql`${sql.raw('"lots"."id"')} in (
+        select l.id from ${lots} l where l.workshop_id = ${workshopId} and l.supplier_lot_number ilike ${p}
+        union
+        select l.id from ${lots} l join ${materials} m on m.id = l.material_id
+        where l.workshop_id = ${workshopId} and m.workshop_id = ${workshopId} and m.trade_name ilike ${p})`,
+    );
+  }
+  if (q.materialId) conditions.push(eq(lots.materialId, q.materialId));
+  if (q.expiresBefore) conditions.push(lte(lots.expiresOn, q.expiresBefore));
+  const where = and(...conditions);
+  const { limit, offset } = pageWindow(q);
+  const [items, [total]] = await Promise.all([
+    db
+      .select(columns)
+      .from(lots)
+      .innerJoin(materials, eq(materials.id, lots.materialId))
+      .where(where)
+      .orderBy(...listOrder(sortColumns[q.sort], q.dir, lots.id))
+      .limit(limit)
+      .offset(offset),
+    // Every lot has its material (FK, not null), so the count needs no join.
+    db.select({ n: count() }).from(lots).where(where),
+  ]);
+  return { items, total: total?.n ?? 0 };
+}
+
+export async function findLot(db: Database, workshopId: string, id: string) {
+  const [row] = await db
+    .select(columns)
+    .from(lots)
+    .innerJoin(materials, eq(materials.id, lots.materialId))
+    .where(and(eq(lots.workshopId, workshopId), eq(lots.id, id)));
+  return row;
+}
+
+export async function insertLot(db: Database, workshopId: string, values: LotFields) {
+  const [row] = await db
+    .insert(lots)
+    .values({ ...values, workshopId })
+    .returning({ id: lots.id });
+  return row!.id;
+}
+
+export async function updateLot(db: Database, workshopId: string, id: string, values: LotFields) {
+  const [row] = await db
+    .update(lots)
+    .set(values)
+    .where(and(eq(lots.workshopId, workshopId), eq(lots.id, id)))
+    .returning({ id: lots.id });
+  return row?.id;
+}
+
+export async function deleteLot(db: Database, workshopId: string, id: string) {
+  const [row] = await db
+    .delete(lots)
+    .where(and(eq(lots.workshopId, workshopId), eq(lots.id, id)))
+    .returning({ id: lots.id });
+  return row?.id;
+}
+
+/** How much of the lot batches have consumed, in the lot's unit. */
+export async function consumedQuantity(db: Database, workshopId: string, lotId: string) {
+  const [row] = await db
+    .select({
+      n: sql<number>`coalesce(sum(${lotConsumptions.quantity}), 0)::float8`.mapWith(Number),
+    })
+    .from(lotConsumptions)
+    .where(and(eq(lotConsumptions.workshopId, workshopId), eq(lotConsumptions.lotId, lotId)));
+  return row?.n ?? 0;
+}
+
+/** Whether the material exists in the workshop. */
+export async function materialExists(db: Database, workshopId: string, materialId: string) {
+  const [row] = await db
+    .select({ id: materials.id })
+    .from(materials)
+    .where(and(eq(materials.workshopId, workshopId), eq(materials.id, materialId)));
+  return row !== undefined;
+}

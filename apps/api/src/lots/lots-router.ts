@@ -1,0 +1,39 @@
+import { Router } from 'express';
+import {
+  lotCreateSchema,
+  lotListQuerySchema,
+  lotUpdateSchema,
+  ROLE_SETS,
+} from '@batchproof/shared';
+import type { Authenticator } from '../auth/authenticate';
+import { recordId } from '../core/record-id';
+import { parse } from '../core/validate';
+import type { Database } from '../db/database';
+import * as domain from './lots-domain';
+
+/** `/api/lots`: goods-in. Members read, owner and formulator write. */
+export function lotsRouter(deps: { db: Database; authn: Authenticator }) {
+  const { db, authn } = deps;
+  const router = Router();
+  const read = authn.allow(ROLE_SETS.members);
+  const write = authn.allow(ROLE_SETS.writers);
+
+  router.get('/', ...read, async (req, res) => {
+    res.json(await domain.listLots(db, req.user!, parse(lotListQuerySchema, req.query)));
+  });
+  router.get('/:id', ...read, async (req, res) => {
+    res.json(await domain.getLot(db, req.user!, recordId(req.params.id, 'That lot')));
+  });
+  router.post('/', ...write, async (req, res) => {
+    res.status(201).json(await domain.createLot(db, req.user!, parse(lotCreateSchema, req.body)));
+  });
+  router.put('/:id', ...write, async (req, res) => {
+    const id = recordId(req.params.id, 'That lot');
+    res.json(await domain.updateLot(db, req.user!, id, parse(lotUpdateSchema, req.body)));
+  });
+  router.delete('/:id', ...write, async (req, res) => {
+    await domain.deleteLot(db, req.user!, recordId(req.params.id, 'That lot'));
+    res.status(204).end();
+  });
+  return router;
+}

@@ -1,0 +1,48 @@
+import express, { Router, type RequestHandler } from 'express';
+import multer from 'multer';
+import type { Database } from '../db/database';
+import { AppError } from '../core/app-error';
+import { checkMaterialsCsv, exportMaterialsCsv, importMaterialsCsv } from './materials-csv';
+
+/** Largest CSV accepted, bytes. */
+const CSV_MAX_BYTES = 5 * 1024 * 1024;
+const csvUpload = multer({
+  storage: multer.memoryStorage(),
+  limits: { fileSize: CSV_MAX_BYTES, files: 1 },
+});
+// A CSV arrives either as a multipart file (a form) or as a text/csv body (a script).
+const csvBody: RequestHandler[] = [
+  express.text({ type: ['text/csv', 'text/plain'], limit: CSV_MAX_BYTES }),
+  csvUpload.single('file'),
+];
+
+function csvText(req: express.Request): string {
+  if (req.file) return req.file.buffer.toString('utf8');
+  if (typeof req.body === 'string' && req.body.trim()) return req.body;
+  throw new AppError(400, 'validation_failed', 'Send a CSV file.', {
+    file: ['Choose a CSV file, or send the CSV as a text/csv body'],
+  });
+}
+
+/** CSV export, import preview and import under `/api/materials`. */
+export function materialsCsvRoutes(deps: {
+  db: Database;
+  read: RequestHandler[];
+  write: RequestHandler[];
+}) {
+  const { db, read, write } = deps;
+  const router = Router();
+  router.get('/export.csv', ...read, async (req, res) => {
+    const text = await exportMaterialsCsv(db, req.user!);
+    res.set('Content-Type', 'text/csv; charset=utf-8');
+    res.attachment('materials.csv');
+    res.send(text);
+  });
+  router.post('/import/preview', ...write, ...csvBody, async (req, res) => {
+    res.json((await checkMaterialsCsv(db, req.user!, csvText(req))).preview);
+  });
+  router.post('/import', ...write, ...csvBody, async (req, res) => {
+    res.status(201).json(await importMaterialsCsv(db, req.user!, csvText(req)));
+  });
+  return router;
+}

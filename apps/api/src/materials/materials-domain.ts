@@ -1,0 +1,71 @@
+import {
+  summariseCalibrations,
+  type Material,
+  type MaterialFields,
+  type MaterialListQuery,
+} from '@batchproof/shared';
+import type { AuthUser } from '../auth/authenticate';
+import { AppError, conflict, notFound } from '../core/app-error';
+import { withIsoDates } from '../core/list-paging';
+import type { Database } from '../db/database';
+import * as repo from './materials-repository';
+
+/** The API shape of a stored material: ISO dates and the calibration summary. */
+export function toMaterial(row: repo.MaterialRow): Material {
+  return {
+    ...withIsoDates(row),
+    calibrationSummary: summariseCalibrations(row.calibrations),
+  };
+}
+
+/** A page of the caller's workshop's materials. */
+export async function listMaterials(db: Database, actor: AuthUser, q: MaterialListQuery) {
+  const { items, total } = await repo.pageMaterials(db, actor.workshopId, q);
+  return { items: items.map(withIsoDates), total, page: q.page, pageSize: q.pageSize };
+}
+
+/** One material of the caller's workshop; 404 for any other. */
+export async function getMaterial(db: Database, actor: AuthUser, id: string) {
+  const row = await repo.findMaterial(db, actor.workshopId, id);
+  if (!row) throw notFound('That material');
+  return toMaterial(row);
+}
+
+/** A supplier id from another workshop is a bad field, not a leak: say only that it's unknown. */
+async function checkSupplier(db: Database, workshopId: string, input: MaterialFields) {
+  if (input.supplierId && !(await repo.supplierExists(db, workshopId, input.supplierId))) {
+    throw new AppError(400, 'validation_failed', 'Some fields need attention.', {
+      supplierId: ['Choose one of this workshop’s suppliers'],
+    });
+  }
+}
+
+export async function createMaterial(db: Database, actor: AuthUser, input: MaterialFields) {
+  await checkSupplier(db, actor.workshopId, input);
+  const [id] = await repo.insertMaterials(db, actor.workshopId, [input]);
+  return getMaterial(db, actor, id!);
+}
+
+export async function updateMaterial(
+  db: Database,
+  actor: AuthUser,
+  id: string,
+  input: MaterialFields,
+) {
+  await checkSupplier(db, actor.workshopId, input);
+  if (!(await repo.updateMaterial(db, actor.workshopId, id, input)))
+    throw notFound('That material');
+  return getMaterial(db, actor, id);
+}
+
+/** Deletes a material that no lot or formula uses (their history must stay readable). */
+export async function deleteMaterial(db: Database, actor: AuthUser, id: string) {
+  if (!(await repo.findMaterial(db, actor.workshopId, id))) throw notFound('That material');
+  const uses = await repo.countMaterialUses(db, actor.workshopId, id);
+  if (uses.lots > 0 || uses.lines > 0) {
+    throw conflict(
+      `This material is used by ${uses.lots} lot(s) and ${uses.lines} formula line(s); it cannot be deleted.`,
+    );
+  }
+  await repo.deleteMaterial(db, actor.workshopId, id);
+}

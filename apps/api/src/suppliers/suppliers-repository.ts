@@ -1,0 +1,101 @@
+import { and, count, eq, ilike, or, sql, type SQL } from 'drizzle-orm';
+import type { SupplierListQuery } from '@batchproof/shared';
+import { containsPattern, listOrder, pageWindow } from '../core/list-paging';
+import type { Database } from '../db/database';
+import { materials, suppliers } from '../db/schema';
+
+/** A supplier row as stored. */
+export type SupplierRow = typeof suppliers.$inferSelect;
+/** The editable fields of a supplier. */
+export type SupplierValues = Pick<SupplierRow, 'name' | 'contact' | 'email' | 'website' | 'notes'>;
+
+// Spelled out in full: in a single-table select Drizzle renders `${suppliers.id}` as a bare "id",
+// which inside the subquery would mean the material's own id.
+const materialCount = sql<number>`(select count(*)::int from ${materials} where ${materials.supplierId} = ${sql.raw('"suppliers"."id"')})`;
+const columns = {
+  id: suppliers.id,
+  name: suppliers.name,
+  contact: suppliers.contact,
+  email: suppliers.email,
+  website: suppliers.website,
+  notes: suppliers.notes,
+  createdAt: suppliers.createdAt,
+  updatedAt: suppliers.updatedAt,
+  materialCount,
+};
+const sortColumns = {
+  name: suppliers.name,
+  createdAt: suppliers.createdAt,
+  updatedAt: suppliers.updatedAt,
+} as const;
+
+/** One page of the workshop's suppliers, filtered and sorted in SQL. */
+export async function pageSuppliers(db: Database, workshopId: string, q: SupplierListQuery) {
+  const conditions: (SQL | undefined)[] = [eq(suppliers.workshopId, workshopId)];
+  if (q.q) {
+    const p = containsPattern(q.q);
+    conditions.push(
+      or(ilike(suppliers.name, p), ilike(suppliers.contact, p), ilike(suppliers.email, p)),
+    );
+  }
+  const where = and(...conditions);
+  const { limit, offset } = pageWindow(q);
+  const [items, [total]] = await Promise.all([
+    db
+      .select(columns)
+      .from(suppliers)
+      .where(where)
+      .orderBy(...listOrder(sortColumns[q.sort], q.dir, suppliers.id))
+      .limit(limit)
+      .offset(offset),
+    db.select({ n: count() }).from(suppliers).where(where),
+  ]);
+  return { items, total: total?.n ?? 0 };
+}
+
+export async function findSupplier(db: Database, workshopId: string, id: string) {
+  const [row] = await db
+    .select(columns)
+    .from(suppliers)
+    .where(and(eq(suppliers.workshopId, workshopId), eq(suppliers.id, id)));
+  return row;
+}
+
+export async function insertSupplier(db: Database, workshopId: string, values: SupplierValues) {
+  const [row] = await db
+    .insert(suppliers)
+    .values({ ...values, workshopId })
+    .returning({ id: suppliers.id });
+  return row!.id;
+}
+
+export async function updateSupplier(
+  db: Database,
+  workshopId: string,
+  id: string,
+  values: SupplierValues,
+) {
+  const [row] = await db
+    .update(suppliers)
+    .set(values)
+    .where(and(eq(suppliers.workshopId, workshopId), eq(suppliers.id, id)))
+    .returning({ id: suppliers.id });
+  return row?.id;
+}
+
+export async function deleteSupplier(db: Database, workshopId: string, id: string) {
+  const [row] = await db
+    .delete(suppliers)
+    .where(and(eq(suppliers.workshopId, workshopId), eq(suppliers.id, id)))
+    .returning({ id: suppliers.id });
+  return row?.id;
+}
+
+/** Suppliers of the workshop by lower-cased name, for the CSV import. */
+export async function suppliersByName(db: Database, workshopId: string) {
+  const rows = await db
+    .select({ id: suppliers.id, name: suppliers.name })
+    .from(suppliers)
+    .where(eq(suppliers.workshopId, workshopId));
+  return new Map(rows.map((r) => [r.name.trim().toLowerCase(), r.id]));
+}

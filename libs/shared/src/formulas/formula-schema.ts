@@ -1,0 +1,246 @@
+import { z } from 'zod';
+import { evaluationResultSchema } from '../compliance/evaluation-result-schema';
+import { listQuerySchema, pageSchema } from '../lists/list-query-schema';
+import { complianceMarketSchema } from '../reference-data/reference-row';
+import {
+  optionalText,
+  recordIdSchema,
+  requiredText,
+  storedRecordFields,
+} from '../records/record-fields';
+
+/** Kinds of product a formula makes. */
+export const PRODUCT_TYPES = [
+  'fizzer',
+  'foaming-fizzer',
+  'bubble-bar',
+  'bath-salts',
+  'shower-steamer',
+  'soap',
+  'lotion',
+  'other',
+] as const;
+export const productTypeSchema = z.enum(PRODUCT_TYPES, {
+  error: `Choose a product type: ${PRODUCT_TYPES.join(', ')}`,
+});
+export type ProductType = z.infer<typeof productTypeSchema>;
+
+/** Life of a version: a draft until released; releasing the next one supersedes it. */
+export const versionStateSchema = z.enum(['draft', 'released', 'superseded']);
+export type VersionState = z.infer<typeof versionStateSchema>;
+
+/** Sum of percent lines must hit 100 within this tolerance. */
+export const PERCENT_TOLERANCE = 0.01;
+
+/** How the product is used: decides which rules the engine applies. */
+export const productProfileSchema = z.object({
+  use: z.enum(['rinse-off', 'leave-on'], { error: 'Choose rinse-off or leave-on' }),
+  contact: z
+    .object({
+      mucousMembranes: z.boolean().default(false),
+      eyeArea: z.boolean().default(false),
+      lips: z.boolean().default(false),
+    })
+    .default({ mucousMembranes: false, eyeArea: false, lips: false }),
+  /** Whether the product is used in the bath (bath water reaches mucous membranes). */
+  inBath: z.boolean({ error: 'Say whether it is used in the bath' }),
+  /** Whether the label says "for adults only". */
+  adultsOnly: z.boolean().default(false),
+  ifraCategory: requiredText('IFRA category', 10),
+  markets: z
+    .array(complianceMarketSchema, { error: 'Choose at least one market' })
+    .min(1, { error: 'Choose at least one market' })
+    .transform((m) => [...new Set(m)]),
+  unitMassGrams: z
+    .number({ error: 'Enter the unit mass in grams' })
+    .gt(0, { error: 'The unit mass must be more than 0 g' })
+    .nullish()
+    .transform((v) => v ?? null),
+  netQuantity: z
+    .object({
+      amount: z.number({ error: 'Enter the net quantity' }).gt(0, {
+        error: 'The net quantity must be more than 0',
+      }),
+      unit: z.enum(['g', 'mL'], { error: 'Net quantity is in g or mL' }),
+    })
+    .nullish()
+    .transform((v) => v ?? null),
+});
+export type ProductProfile = z.output<typeof productProfileSchema>;
+
+/** One line by weight. */
+export const formulaLineSchema = z.object({
+  materialId: recordIdSchema('material'),
+  grams: z
+    .number({ error: 'Enter a weight in grams' })
+    .min(0, { error: 'Grams cannot be negative' })
+    .max(1e9, { error: 'Enter at most 1,000,000,000 g' }),
+});
+/** One line by percent, converted to grams with the batch total. */
+export const percentLineSchema = z.object({
+  materialId: recordIdSchema('material'),
+  percent: z
+    .number({ error: 'Enter a percentage' })
+    .min(0, { error: 'A percentage cannot be negative' })
+    .max(100, { error: 'A percentage cannot exceed 100' }),
+});
+
+/**
+ * A draft version's content. Lines come by weight (`lines`) or by percent with a batch total
+ * (`byPercent`); the server stores grams either way.
+ */
+export const formulaVersionInputSchema = z
+  .object({
+    lines: z.array(formulaLineSchema).max(200, { error: 'At most 200 lines' }).optional(),
+    byPercent: z
+      .object({
+        batchGrams: z
+          .number({ error: 'Enter the batch total in grams' })
+          .gt(0, { error: 'The batch total must be more than 0 g' })
+          .max(1e9),
+        lines: z.array(percentLineSchema).max(200, { error: 'At most 200 lines' }),
+      })
+      .optional(),
+    profile: productProfileSchema,
+    notes: optionalText('Notes', 4000),
+  })
+  .superRefine((v, ctx) => {
+    if (!v.lines === !v.byPercent) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['lines'],
+        message: 'Send the lines either in grams or by percent with a batch total',
+      });
+    }
+    if (v.byPercent && v.byPercent.lines.length > 0) {
+      const sum = v.byPercent.lines.reduce((s, l) => s + l.percent, 0);
+      if (Math.abs(sum - 100) > PERCENT_TOLERANCE) {
+        ctx.addIssue({
+          code: 'custom',
+          path: ['byPercent', 'lines'],
+          message: `The lines add up to ${Math.round(sum * 1000) / 1000} %; they must add up to 100 %`,
+        });
+      }
+    }
+  });
+export type FormulaVersionInput = z.input<typeof formulaVersionInputSchema>;
+export type FormulaVersionFields = z.output<typeof formulaVersionInputSchema>;
+
+/** The lines of a version input in grams, whichever way they were entered. */
+export function linesInGrams(v: FormulaVersionFields): { materialId: string; grams: number }[] {
+  if (v.lines) return v.lines;
+  const { batchGrams, lines } = v.byPercent!;
+  return lines.map((l) => ({ materialId: l.materialId, grams: (l.percent / 100) * batchGrams }));
+}
+
+/** A new formula with its first draft. */
+export const formulaCreateSchema = z.object({
+  name: requiredText('Formula name'),
+  productType: productTypeSchema,
+  notes: optionalText('Notes', 4000),
+  draft: formulaVersionInputSchema,
+});
+export type FormulaCreate = z.input<typeof formulaCreateSchema>;
+
+/** Renaming or re-describing a formula (its versions are changed through their own routes). */
+export const formulaUpdateSchema = z.object({
+  name: requiredText('Formula name'),
+  productType: productTypeSchema,
+  notes: optionalText('Notes', 4000),
+});
+export type FormulaUpdate = z.input<typeof formulaUpdateSchema>;
+
+/** Starts a new draft copied from an existing version (the latest when none is named). */
+export const newVersionSchema = z.object({
+  fromVersion: z.number().int().min(1, { error: 'Versions start at 1' }).optional(),
+});
+
+/** Releases a version; an owner may override blocking findings with a recorded reason. */
+export const releaseSchema = z.object({
+  override: z
+    .object({
+      reason: requiredText('Reason for the override', 2000).min(10, {
+        error: 'Explain the override in at least 10 characters',
+      }),
+    })
+    .optional(),
+});
+export type ReleaseRequest = z.input<typeof releaseSchema>;
+
+/** Counts of the evaluation's findings by severity. */
+export const evaluationCountsSchema = z.object({
+  block: z.number().int(),
+  warn: z.number().int(),
+  info: z.number().int(),
+});
+
+/** A version in a formula's history. */
+export const versionSummarySchema = z.object({
+  number: z.number().int(),
+  state: versionStateSchema,
+  counts: evaluationCountsSchema.nullable(),
+  releasedAt: z.string().nullable(),
+  updatedAt: z.string(),
+});
+
+/** A stored line with its material's name and share of the batch. */
+export const storedLineSchema = z.object({
+  materialId: z.string(),
+  materialName: z.string(),
+  grams: z.number(),
+  percent: z.number(),
+});
+
+/** One version with its lines, profile and stored evaluation. */
+export const formulaVersionSchema = z.object({
+  ...storedRecordFields,
+  formulaId: z.string(),
+  number: z.number().int(),
+  state: versionStateSchema,
+  lines: z.array(storedLineSchema),
+  totalGrams: z.number(),
+  profile: productProfileSchema,
+  notes: z.string().nullable(),
+  /** The server's evaluation at the last save or release; null while the draft can't be checked. */
+  evaluation: evaluationResultSchema.nullable(),
+  counts: evaluationCountsSchema.nullable(),
+  /** Why the draft could not be evaluated (no lines, a weight of 0 g …). */
+  evaluationProblems: z.array(z.string()),
+  evaluatedAt: z.string().nullable(),
+  releasedAt: z.string().nullable(),
+  overrideReason: z.string().nullable(),
+});
+export type FormulaVersion = z.infer<typeof formulaVersionSchema>;
+
+/** A formula with its version history. */
+export const formulaSchema = z.object({
+  ...storedRecordFields,
+  name: z.string(),
+  productType: productTypeSchema,
+  notes: z.string().nullable(),
+  versions: z.array(versionSummarySchema),
+});
+export type Formula = z.infer<typeof formulaSchema>;
+
+/** A formula row in the list. */
+export const formulaListItemSchema = z.object({
+  id: z.string(),
+  name: z.string(),
+  productType: productTypeSchema,
+  updatedAt: z.string(),
+  latestVersion: z.number().int().nullable(),
+  latestState: versionStateSchema.nullable(),
+  releasedVersion: z.number().int().nullable(),
+});
+export const formulaListQuerySchema = listQuerySchema(
+  ['name', 'productType', 'createdAt', 'updatedAt'],
+  'name',
+).extend({ productType: productTypeSchema.optional() });
+export type FormulaListQuery = z.output<typeof formulaListQuerySchema>;
+export const formulaPageSchema = pageSchema(formulaListItemSchema);
+
+/** Query of the compare route. */
+export const compareQuerySchema = z.object({
+  from: z.coerce.number({ error: 'Name the version to compare from' }).int().min(1),
+  to: z.coerce.number({ error: 'Name the version to compare to' }).int().min(1),
+});

@@ -1,0 +1,79 @@
+import { z } from 'zod';
+import { listQuerySchema, pageSchema } from '../lists/list-query-schema';
+import {
+  isoDate,
+  optionalIsoDate,
+  optionalText,
+  recordIdSchema,
+  requiredText,
+  storedRecordFields,
+} from '../records/record-fields';
+
+/** Units a lot's quantity is counted in. */
+export const LOT_UNITS = ['g', 'kg', 'mL', 'L', 'units'] as const;
+export const lotUnitSchema = z.enum(LOT_UNITS, { error: `Choose a unit: ${LOT_UNITS.join(', ')}` });
+export type LotUnit = z.infer<typeof lotUnitSchema>;
+
+/** Goods-in of one supplier lot of a material (create and full update). */
+export const lotCreateSchema = z
+  .object({
+    materialId: recordIdSchema('material'),
+    supplierLotNumber: requiredText('Supplier lot number', 100),
+    quantity: z
+      .number({ error: 'Enter the quantity received' })
+      .gt(0, { error: 'The quantity received must be more than 0' })
+      .max(1e9, { error: 'The quantity is too large' }),
+    unit: lotUnitSchema,
+    receivedOn: isoDate('the day it was received'),
+    expiresOn: optionalIsoDate('the expiry date'),
+    unitCost: z
+      .number({ error: 'Enter the cost per unit as a number' })
+      .min(0, { error: 'The cost cannot be negative' })
+      .max(1e7, { error: 'The cost is too large' })
+      .nullish()
+      .transform((v) => v ?? null),
+    notes: optionalText('Notes', 2000),
+  })
+  .superRefine((lot, ctx) => {
+    if (lot.expiresOn && lot.expiresOn < lot.receivedOn) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['expiresOn'],
+        message: 'The expiry date cannot be before the day it was received',
+      });
+    }
+  });
+export type LotCreate = z.input<typeof lotCreateSchema>;
+export type LotFields = z.output<typeof lotCreateSchema>;
+/** Full replacement of a lot's fields (PUT). */
+export const lotUpdateSchema = lotCreateSchema;
+
+/** A lot as the API returns it, with its stock on hand. */
+export const lotSchema = z.object({
+  ...storedRecordFields,
+  materialId: z.string(),
+  materialName: z.string(),
+  supplierLotNumber: z.string(),
+  quantity: z.number(),
+  unit: lotUnitSchema,
+  receivedOn: z.string(),
+  expiresOn: z.string().nullable(),
+  unitCost: z.number().nullable(),
+  notes: z.string().nullable(),
+  /** Quantity received minus everything batches consumed, in the lot's unit. */
+  stockOnHand: z.number(),
+});
+export type Lot = z.infer<typeof lotSchema>;
+
+/** Query of `GET /api/lots`: `q` matches the supplier lot number and the material's trade name. */
+export const lotListQuerySchema = listQuerySchema(
+  ['receivedOn', 'expiresOn', 'supplierLotNumber', 'materialName', 'quantity', 'createdAt'],
+  'receivedOn',
+).extend({
+  materialId: recordIdSchema('material').optional(),
+  /** Only lots whose expiry falls on or before this day (for "expiring soon"). */
+  expiresBefore: isoDate('the expiry cut-off').optional(),
+});
+export type LotListQuery = z.output<typeof lotListQuerySchema>;
+export const lotPageSchema = pageSchema(lotSchema);
+export type LotPage = z.infer<typeof lotPageSchema>;

@@ -1,0 +1,64 @@
+import { z } from 'zod';
+
+/** Columns of the materials CSV, in export order; import accepts them in any order. */
+export const MATERIAL_CSV_COLUMNS = [
+  'tradeName',
+  'inci',
+  'usName',
+  'cas',
+  'ec',
+  'functions',
+  'category',
+  'supplier',
+  'colourIndex',
+  'notes',
+  'components',
+  'ifraCertificate',
+  'allergenDeclaration',
+  'weightPerVolume',
+  'calibrations',
+] as const;
+/** Columns an import file must have. */
+export const MATERIAL_CSV_REQUIRED = ['tradeName', 'inci', 'category'] as const;
+/** Columns that hold JSON (the structured certificate data) rather than plain text. */
+export const MATERIAL_CSV_JSON_COLUMNS = [
+  'components',
+  'ifraCertificate',
+  'allergenDeclaration',
+  'weightPerVolume',
+  'calibrations',
+] as const;
+/** Separator of the functions column: `humectant; skin conditioning`. */
+export const MATERIAL_CSV_LIST_SEPARATOR = ';';
+/** Most rows one import takes. */
+export const MATERIAL_CSV_MAX_ROWS = 5000;
+
+/** One data row of an import file, checked. */
+export const materialImportRowSchema = z.object({
+  /** Line of the file the row starts on (the header is line 1). */
+  line: z.number().int(),
+  tradeName: z.string(),
+  category: z.string(),
+  /** Whether the row would be imported as it stands. */
+  valid: z.boolean(),
+  /** Messages per field, e.g. `{ components: ['Components add up to 90 % …'] }`. */
+  errors: z.record(z.string(), z.array(z.string())),
+});
+export type MaterialImportRow = z.infer<typeof materialImportRowSchema>;
+
+/** What `POST /api/materials/import/preview` answers: every row with its errors. */
+export const materialImportPreviewSchema = z.object({
+  /** Problems with the file as a whole (missing columns, unreadable CSV). */
+  fileErrors: z.array(z.string()),
+  rows: z.array(materialImportRowSchema),
+  validCount: z.number().int(),
+  errorCount: z.number().int(),
+});
+export type MaterialImportPreview = z.infer<typeof materialImportPreviewSchema>;
+
+/** What a successful `POST /api/materials/import` answers. */
+export const materialImportResultSchema = z.object({
+  imported: z.number().int(),
+  ids: z.array(z.string()),
+});
+export type MaterialImportResult = z.infer<typeof materialImportResultSchema>;

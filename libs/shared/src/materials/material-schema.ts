@@ -1,0 +1,196 @@
+import { z } from 'zod';
+import {
+  BLEND_TOLERANCE_PERCENT,
+  blendComponentSchema,
+  fragranceAllergenInputSchema,
+} from '../compliance/evaluation-input-schema';
+import { parseColourIndex } from '../compliance/ingredient-names';
+import { kitchenMeasureSchema } from '../compliance/volume-to-grams';
+import { listQuerySchema, pageSchema } from '../lists/list-query-schema';
+import {
+  isoDate,
+  optionalText,
+  recordIdSchema,
+  requiredText,
+  storedRecordFields,
+} from '../records/record-fields';
+import { calibrationSummarySchema } from './calibration-summary';
+
+/** Kinds of raw material; decides which extra data a material carries. */
+export const MATERIAL_CATEGORIES = [
+  'base',
+  'acid',
+  'binder',
+  'hardener',
+  'oil',
+  'butter',
+  'emulsifier',
+  'surfactant',
+  'colourant',
+  'fragrance',
+  'essential-oil',
+  'preservative',
+  'additive',
+  'other',
+] as const;
+export const materialCategorySchema = z.enum(MATERIAL_CATEGORIES, {
+  error: `Choose a category: ${MATERIAL_CATEGORIES.join(', ')}`,
+});
+export type MaterialCategory = z.infer<typeof materialCategorySchema>;
+
+/** Whether materials of this category carry an IFRA certificate and an allergen declaration. */
+export const isScentCategory = (category: MaterialCategory) =>
+  category === 'fragrance' || category === 'essential-oil';
+
+const positive = (label: string) =>
+  z
+    .number({ error: `Enter ${label} as a number` })
+    .gt(0, { error: `${label} must be more than 0` });
+
+/** Maximum percent of the finished product per IFRA category, from the supplier's certificate. */
+export const ifraCertificateSchema = z.object({
+  maxPercentByIfraCategory: z.record(
+    z.string().trim().min(1, { error: 'Name the IFRA category, e.g. 9 or 5A' }),
+    z
+      .number({ error: 'Enter the maximum as a percentage' })
+      .min(0, { error: 'A maximum cannot be negative' })
+      .max(100, { error: 'A maximum cannot exceed 100 %' }),
+  ),
+  issuedOn: isoDate('the certificate issue date'),
+  amendment: z
+    .number({ error: 'Enter the IFRA amendment number, e.g. 51' })
+    .int({ error: 'The amendment number is a whole number' })
+    .positive({ error: 'The amendment number is a whole number' }),
+});
+export type IfraCertificate = z.infer<typeof ifraCertificateSchema>;
+
+/** The supplier's allergen declaration: each allergen as a percent of the neat oil. */
+export const allergenDeclarationSchema = z.object({
+  documentDate: isoDate('the declaration date'),
+  allergens: z.array(fragranceAllergenInputSchema).max(200),
+});
+export type AllergenDeclaration = z.infer<typeof allergenDeclarationSchema>;
+
+/** Grams in one of each kitchen or lab measure, from a specification or the maker's own scale. */
+export const weightPerVolumeSchema = z.partialRecord(kitchenMeasureSchema, positive('Grams'));
+export type WeightPerVolume = z.infer<typeof weightPerVolumeSchema>;
+
+/** One calibration: the maker weighed `grams` of `amount` × `unit` scooped or poured. */
+export const calibrationSchema = z.object({
+  unit: kitchenMeasureSchema,
+  amount: positive('The measured amount'),
+  grams: positive('The measured grams'),
+  measuredOn: isoDate('the day it was measured')
+    .nullish()
+    .transform((v) => v ?? null),
+});
+export type Calibration = z.infer<typeof calibrationSchema>;
+
+/** What the owner or formulator enters for a material (create and full update). */
+export const materialCreateSchema = z
+  .object({
+    tradeName: requiredText('Trade name'),
+    inci: requiredText('INCI name', 500),
+    usName: optionalText('US label name', 500),
+    cas: optionalText('CAS number', 100),
+    ec: optionalText('EC number', 100),
+    functions: z
+      .array(z.string().trim().min(1, { error: 'A function cannot be empty' }).max(100))
+      .max(20, { error: 'List at most 20 functions' })
+      .default([]),
+    category: materialCategorySchema,
+    supplierId: recordIdSchema('supplier')
+      .nullish()
+      .transform((v) => v ?? null),
+    notes: optionalText('Notes', 4000),
+    colourIndex: optionalText('Colour Index number', 50).refine(
+      (v) => v === null || parseColourIndex(v) !== null,
+      { error: 'Enter a Colour Index number such as CI 77891 or 15850:1' },
+    ),
+    components: z.array(blendComponentSchema).max(50).default([]),
+    ifraCertificate: ifraCertificateSchema.nullish().transform((v) => v ?? null),
+    allergenDeclaration: allergenDeclarationSchema.nullish().transform((v) => v ?? null),
+    weightPerVolume: weightPerVolumeSchema.default({}),
+    calibrations: z.array(calibrationSchema).max(100).default([]),
+  })
+  .superRefine((m, ctx) => {
+    if (m.components.length > 0) {
+      const sum = m.components.reduce((total, c) => total + c.percent, 0);
+      if (Math.abs(sum - 100) > BLEND_TOLERANCE_PERCENT) {
+        ctx.addIssue({
+          code: 'custom',
+          path: ['components'],
+          message: `Components add up to ${Math.round(sum * 1000) / 1000} %; they must add up to 100 %`,
+        });
+      }
+    }
+    if (!isScentCategory(m.category)) {
+      for (const key of ['ifraCertificate', 'allergenDeclaration'] as const) {
+        if (m[key]) {
+          ctx.addIssue({
+            code: 'custom',
+            path: [key],
+            message: 'Only fragrances and essential oils carry this document',
+          });
+        }
+      }
+    }
+  });
+/** Material input as a form sends it. */
+export type MaterialCreate = z.input<typeof materialCreateSchema>;
+/** Material input after parsing (defaults filled, blanks as null). */
+export type MaterialFields = z.output<typeof materialCreateSchema>;
+/** Full replacement of a material's fields (PUT). */
+export const materialUpdateSchema = materialCreateSchema;
+
+/** A material as the API returns it. */
+export const materialSchema = z.object({
+  ...storedRecordFields,
+  tradeName: z.string(),
+  inci: z.string(),
+  usName: z.string().nullable(),
+  cas: z.string().nullable(),
+  ec: z.string().nullable(),
+  functions: z.array(z.string()),
+  category: materialCategorySchema,
+  supplierId: z.string().nullable(),
+  supplierName: z.string().nullable(),
+  notes: z.string().nullable(),
+  colourIndex: z.string().nullable(),
+  components: z.array(blendComponentSchema),
+  ifraCertificate: ifraCertificateSchema.nullable(),
+  allergenDeclaration: allergenDeclarationSchema.nullable(),
+  weightPerVolume: weightPerVolumeSchema,
+  calibrations: z.array(calibrationSchema),
+  /** Average and spread of the calibrations, per measure. */
+  calibrationSummary: z.array(calibrationSummarySchema),
+});
+export type Material = z.infer<typeof materialSchema>;
+
+/** Query of `GET /api/materials`: `q` matches trade name, INCI, US name and CAS. */
+export const materialListQuerySchema = listQuerySchema(
+  ['tradeName', 'inci', 'category', 'createdAt', 'updatedAt'],
+  'tradeName',
+).extend({
+  category: materialCategorySchema.optional(),
+  supplierId: recordIdSchema('supplier').optional(),
+});
+export type MaterialListQuery = z.output<typeof materialListQuerySchema>;
+
+/** A material row in a list: the identity, without the bulky certificate data. */
+export const materialSummarySchema = materialSchema.pick({
+  id: true,
+  tradeName: true,
+  inci: true,
+  usName: true,
+  cas: true,
+  category: true,
+  supplierId: true,
+  supplierName: true,
+  colourIndex: true,
+  functions: true,
+  updatedAt: true,
+});
+export type MaterialSummary = z.infer<typeof materialSummarySchema>;
+export const materialPageSchema = pageSchema(materialSummarySchema);
+export type MaterialPage = z.infer<typeof materialPageSchema>;

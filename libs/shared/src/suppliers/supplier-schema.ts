@@ -1,0 +1,48 @@
+import { z } from 'zod';
+import { listQuerySchema, pageSchema } from '../lists/list-query-schema';
+import { optionalText, requiredText, storedRecordFields } from '../records/record-fields';
+
+/** What the owner or formulator enters for a supplier (create and full update). */
+export const supplierCreateSchema = z.object({
+  name: requiredText('Supplier name'),
+  contact: optionalText('Contact person'),
+  email: z
+    .union([
+      z.literal(''),
+      z.email({ error: 'Enter an e-mail address such as orders@example.com' }),
+    ])
+    .nullish()
+    .transform((v) => (v ? v.toLowerCase() : null)),
+  website: z
+    .union([
+      z.literal(''),
+      z.url({ protocol: /^https?$/, error: 'Enter a web address starting with https://' }),
+    ])
+    .nullish()
+    .transform((v) => (v ? v : null)),
+  notes: optionalText('Notes', 2000),
+});
+/** Supplier input as a form sends it. */
+export type SupplierCreate = z.input<typeof supplierCreateSchema>;
+/** Full replacement of a supplier's fields (PUT). */
+export const supplierUpdateSchema = supplierCreateSchema;
+export type SupplierUpdate = z.input<typeof supplierUpdateSchema>;
+
+/** A supplier as the API returns it. */
+export const supplierSchema = z.object({
+  ...storedRecordFields,
+  name: z.string(),
+  contact: z.string().nullable(),
+  email: z.string().nullable(),
+  website: z.string().nullable(),
+  notes: z.string().nullable(),
+  /** How many materials name this supplier. */
+  materialCount: z.number().int(),
+});
+export type Supplier = z.infer<typeof supplierSchema>;
+
+/** Query of `GET /api/suppliers`: `q` matches name, contact and e-mail. */
+export const supplierListQuerySchema = listQuerySchema(['name', 'createdAt', 'updatedAt'], 'name');
+export type SupplierListQuery = z.output<typeof supplierListQuerySchema>;
+export const supplierPageSchema = pageSchema(supplierSchema);
+export type SupplierPage = z.infer<typeof supplierPageSchema>;

@@ -1,0 +1,336 @@
+import request from 'supertest';
+import { ROLE_SETS, ROLES, type Role } from '@batchproof/shared';
+import { pdfBytes } from '../../fixtures/builders/document-files';
+import { aFormula, aDraft } from '../../fixtures/builders/formula-builder';
+import { aLot, buildLot } from '../../fixtures/builders/lot-builder';
+import {
+  aMaterial,
+  aSupplier,
+  buildMaterial,
+  buildSupplier,
+} from '../../fixtures/builders/material-builder';
+import type { BuiltWorkshop } from '../../fixtures/builders/workshop-builder';
+import type { ApiHarness } from '../support/api-harness';
+import { bearer } from '../support/auth-header';
+
+type Caller = Role | 'other-workshop' | 'anonymous';
+
+/** One request of the access matrix, as the matrix in access-matrix.spec.ts runs it. */
+export interface WorkspaceRequest {
+  method: 'get' | 'post' | 'put' | 'patch' | 'delete';
+  path: string;
+  body?: object | string;
+  /** Content-Type to send the body with, when not JSON. */
+  type?: string;
+  /** A multipart upload: form fields plus one file. */
+  upload?: { fields: Record<string, string>; file: Buffer; filename: string };
+}
+
+/** Expected statuses: readers (owner, formulator, production, viewer) or writers (owner, formulator). */
+const expect = (
+  allowed: readonly Role[],
+  ok: number,
+  otherWorkshop: number,
+): Record<Caller, number> => ({
+  ...(Object.fromEntries(ROLES.map((r) => [r, allowed.includes(r) ? ok : 403])) as Record<
+    Role,
+    number
+  >),
+  'other-workshop': otherWorkshop,
+  anonymous: 401,
+});
+const read = (ok: number, other: number) => expect(ROLE_SETS.members, ok, other);
+const write = (ok: number, other: number) => expect(ROLE_SETS.writers, ok, other);
+
+/**
+ * The formulator's workspace routes for the access matrix. Records belong to workshop A; each
+ * destructive case builds its own record so callers never collide.
+ */
+export function workspaceAccessCases(ctx: () => { h: ApiHarness; a: BuiltWorkshop }) {
+  const db = () => ctx().h.handle.db;
+  const wid = () => ctx().a.id;
+  const material = async () => (await buildMaterial(db(), wid())).id;
+  const supplier = async () => (await buildSupplier(db(), wid())).id;
+  const lot = async () => (await buildLot(db(), wid(), await material())).id;
+  const document = async () => {
+    const res = await request(ctx().h.app)
+      .post('/api/documents')
+      .set(bearer(ctx().a.members.owner))
+      .field('kind', 'sds')
+      .field('title', 'SDS')
+      .field('issuedOn', '2025-01-01')
+      .field('materialId', await material())
+      .attach('file', pdfBytes(), 'sds.pdf');
+    return res.body.id as string;
+  };
+  const formula = async (released = false) => {
+    const { h, a } = ctx();
+    const res = await request(h.app)
+      .post('/api/formulas')
+      .set(bearer(a.members.owner))
+      .send(aFormula([{ materialId: await material(), grams: 100 }]));
+    if (released) {
+      await request(h.app)
+        .post(`/api/formulas/${res.body.id}/versions/1/release`)
+        .set(bearer(a.members.owner))
+        .send({});
+    }
+    return res.body.id as string;
+  };
+  const csv = () => `tradeName,inci,category\nSea Salt ${Math.random()},Sodium Chloride,base\n`;
+
+  const cases: {
+    route: string;
+    prepare: () => Promise<WorkspaceRequest>;
+    expected: Record<Caller, number>;
+  }[] = [
+    {
+      route: 'GET /api/suppliers',
+      prepare: async () => ({ method: 'get', path: '/api/suppliers' }),
+      expected: read(200, 200),
+    },
+    {
+      route: 'POST /api/suppliers',
+      prepare: async () => ({ method: 'post', path: '/api/suppliers', body: aSupplier() }),
+      expected: write(201, 201),
+    },
+    {
+      route: 'GET /api/suppliers/:id',
+      prepare: async () => ({ method: 'get', path: `/api/suppliers/${await supplier()}` }),
+      expected: read(200, 404),
+    },
+    {
+      route: 'PUT /api/suppliers/:id',
+      prepare: async () => ({
+        method: 'put',
+        path: `/api/suppliers/${await supplier()}`,
+        body: aSupplier(),
+      }),
+      expected: write(200, 404),
+    },
+    {
+      route: 'DELETE /api/suppliers/:id',
+      prepare: async () => ({ method: 'delete', path: `/api/suppliers/${await supplier()}` }),
+      expected: write(204, 404),
+    },
+    {
+      route: 'GET /api/materials',
+      prepare: async () => ({ method: 'get', path: '/api/materials?q=bicarb&sort=tradeName' }),
+      expected: read(200, 200),
+    },
+    {
+      route: 'POST /api/materials',
+      prepare: async () => ({ method: 'post', path: '/api/materials', body: aMaterial() }),
+      expected: write(201, 201),
+    },
+    {
+      route: 'GET /api/materials/:id',
+      prepare: async () => ({ method: 'get', path: `/api/materials/${await material()}` }),
+      expected: read(200, 404),
+    },
+    {
+      route: 'PUT /api/materials/:id',
+      prepare: async () => ({
+        method: 'put',
+        path: `/api/materials/${await material()}`,
+        body: aMaterial(),
+      }),
+      expected: write(200, 404),
+    },
+    {
+      route: 'DELETE /api/materials/:id',
+      prepare: async () => ({ method: 'delete', path: `/api/materials/${await material()}` }),
+      expected: write(204, 404),
+    },
+    {
+      route: 'GET /api/materials/:id/document-status',
+      prepare: async () => ({
+        method: 'get',
+        path: `/api/materials/${await material()}/document-status`,
+      }),
+      expected: read(200, 404),
+    },
+    {
+      route: 'GET /api/materials/export.csv',
+      prepare: async () => ({ method: 'get', path: '/api/materials/export.csv' }),
+      expected: read(200, 200),
+    },
+    {
+      route: 'POST /api/materials/import/preview',
+      prepare: async () => ({
+        method: 'post',
+        path: '/api/materials/import/preview',
+        body: csv(),
+        type: 'text/csv',
+      }),
+      expected: write(200, 200),
+    },
+    {
+      route: 'POST /api/materials/import',
+      prepare: async () => ({
+        method: 'post',
+        path: '/api/materials/import',
+        body: csv(),
+        type: 'text/csv',
+      }),
+      expected: write(201, 201),
+    },
+    {
+      route: 'GET /api/documents?materialId=',
+      prepare: async () => ({
+        method: 'get',
+        path: `/api/documents?materialId=${await material()}`,
+      }),
+      expected: read(200, 404),
+    },
+    {
+      route: 'POST /api/documents (on a material of workshop A)',
+      prepare: async () => ({
+        method: 'post',
+        path: '/api/documents',
+        upload: {
+          fields: {
+            kind: 'sds',
+            title: 'SDS',
+            issuedOn: '2025-01-01',
+            materialId: await material(),
+          },
+          file: pdfBytes(),
+          filename: 'sds.pdf',
+        },
+      }),
+      expected: write(201, 400),
+    },
+    {
+      route: 'GET /api/documents/:id',
+      prepare: async () => ({ method: 'get', path: `/api/documents/${await document()}` }),
+      expected: read(200, 404),
+    },
+    {
+      route: 'GET /api/documents/:id/content',
+      prepare: async () => ({ method: 'get', path: `/api/documents/${await document()}/content` }),
+      expected: read(200, 404),
+    },
+    {
+      route: 'DELETE /api/documents/:id',
+      prepare: async () => ({ method: 'delete', path: `/api/documents/${await document()}` }),
+      expected: write(204, 404),
+    },
+    {
+      route: 'GET /api/lots',
+      prepare: async () => ({ method: 'get', path: '/api/lots?sort=receivedOn&dir=desc' }),
+      expected: read(200, 200),
+    },
+    {
+      route: 'POST /api/lots (of a material of workshop A)',
+      prepare: async () => ({ method: 'post', path: '/api/lots', body: aLot(await material()) }),
+      expected: write(201, 400),
+    },
+    {
+      route: 'GET /api/lots/:id',
+      prepare: async () => ({ method: 'get', path: `/api/lots/${await lot()}` }),
+      expected: read(200, 404),
+    },
+    {
+      route: 'PUT /api/lots/:id',
+      prepare: async () => {
+        const m = await material();
+        const l = await buildLot(db(), wid(), m);
+        return { method: 'put', path: `/api/lots/${l.id}`, body: aLot(m, { quantity: 30 }) };
+      },
+      expected: write(200, 404),
+    },
+    {
+      route: 'DELETE /api/lots/:id',
+      prepare: async () => ({ method: 'delete', path: `/api/lots/${await lot()}` }),
+      expected: write(204, 404),
+    },
+    {
+      route: 'GET /api/formulas',
+      prepare: async () => ({ method: 'get', path: '/api/formulas' }),
+      expected: read(200, 200),
+    },
+    {
+      route: 'POST /api/formulas (with a material of workshop A)',
+      prepare: async () => ({
+        method: 'post',
+        path: '/api/formulas',
+        body: aFormula([{ materialId: await material(), grams: 10 }]),
+      }),
+      expected: write(201, 400),
+    },
+    {
+      route: 'GET /api/formulas/:id',
+      prepare: async () => ({ method: 'get', path: `/api/formulas/${await formula()}` }),
+      expected: read(200, 404),
+    },
+    {
+      route: 'PATCH /api/formulas/:id',
+      prepare: async () => ({
+        method: 'patch',
+        path: `/api/formulas/${await formula()}`,
+        body: { name: 'Renamed', productType: 'fizzer' },
+      }),
+      expected: write(200, 404),
+    },
+    {
+      route: 'GET /api/formulas/:id/compare',
+      prepare: async () => ({
+        method: 'get',
+        path: `/api/formulas/${await formula()}/compare?from=1&to=1`,
+      }),
+      expected: read(200, 404),
+    },
+    {
+      route: 'POST /api/formulas/:id/versions',
+      prepare: async () => ({
+        method: 'post',
+        path: `/api/formulas/${await formula(true)}/versions`,
+        body: {},
+      }),
+      expected: write(201, 404),
+    },
+    {
+      route: 'GET /api/formulas/:id/versions/:n',
+      prepare: async () => ({ method: 'get', path: `/api/formulas/${await formula()}/versions/1` }),
+      expected: read(200, 404),
+    },
+    {
+      route: 'PUT /api/formulas/:id/versions/:n',
+      prepare: async () => ({
+        method: 'put',
+        path: `/api/formulas/${await formula()}/versions/1`,
+        body: aDraft([{ materialId: await material(), grams: 50 }]),
+      }),
+      expected: write(200, 404),
+    },
+    {
+      route: 'PATCH /api/formulas/:id/versions/:n',
+      prepare: async () => ({
+        method: 'patch',
+        path: `/api/formulas/${await formula()}/versions/1`,
+        body: { notes: 'n' },
+      }),
+      expected: write(200, 404),
+    },
+    {
+      route: 'POST /api/formulas/:id/versions/:n/release',
+      prepare: async () => ({
+        method: 'post',
+        path: `/api/formulas/${await formula()}/versions/1/release`,
+        body: {},
+      }),
+      expected: write(200, 404),
+    },
+    {
+      route: 'POST /api/formulas/:id/versions/:n/scale',
+      prepare: async () => ({
+        method: 'post',
+        path: `/api/formulas/${await formula()}/versions/1/scale`,
+        body: { totalGrams: 1000 },
+      }),
+      expected: read(200, 404),
+    },
+  ];
+  return cases;
+}

@@ -1,0 +1,6 @@
+import type { BuiltMember } from '../../fixtures/builders/workshop-builder';
+
+/** The Authorization header of a built member. */
+export const bearer = (member: Pick<BuiltMember, 'token'>) => ({
+  Authorization: `Bearer ${member.token}`,
+});
