@@ -25,9 +25,9 @@ interface NavEntry {
 /** The side navigation follows the maker's work (design direction). */
 const NAV: readonly NavEntry[] = [
   { label: 'Home', icon: 'home', link: '/' },
-  { label: 'Formulas', icon: 'science' },
-  { label: 'Materials', icon: 'inventory_2' },
-  { label: 'Lots', icon: 'move_to_inbox' },
+  { label: 'Formulas', icon: 'science', link: '/formulas', roles: ROLE_SETS.members },
+  { label: 'Materials', icon: 'inventory_2', link: '/materials', roles: ROLE_SETS.members },
+  { label: 'Lots', icon: 'move_to_inbox', link: '/lots', roles: ROLE_SETS.members },
   { label: 'Production', icon: 'scale' },
   { label: 'Labels', icon: 'label' },
   { label: 'Trace', icon: 'route' },
