@@ -31,6 +31,8 @@ export interface JourneyHarness {
   problems: Problem[];
   /** A fresh browser context (its own cookies and storage) with a watched page. */
   newPage(options?: { width?: number; height?: number }): Promise<Page>;
+  /** Signs in over the API (not the browser) and returns an access token, for arranging data. */
+  apiSignIn(email: string, password: string): Promise<string>;
   /** Saves a full-page screenshot as `<name>.png` under the output folder. */
   screenshot(page: Page, name: string): Promise<string>;
   close(): Promise<void>;
@@ -79,6 +81,15 @@ export async function startJourneyHarness(): Promise<JourneyHarness> {
     baseUrl,
     mail,
     problems,
+    async apiSignIn(email, password) {
+      const res = await fetch(`${baseUrl}/api/auth/sign-in`, {
+        method: 'POST',
+        headers: { 'content-type': 'application/json' },
+        body: JSON.stringify({ email, password }),
+      });
+      if (!res.ok) throw new Error(`API sign-in for ${email} answered ${res.status}`);
+      return ((await res.json()) as { accessToken: string }).accessToken;
+    },
     async newPage({ width = 1280, height = 800 } = {}) {
       const context = await browser.newContext({ viewport: { width, height }, baseURL: baseUrl });
       contexts.push(context);

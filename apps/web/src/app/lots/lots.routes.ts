@@ -1,6 +1,32 @@
 import type { Routes } from '@angular/router';
+import { ROLE_SETS } from '@batchproof/shared';
+import { roleGuard } from '../auth/role-guard';
 
-/** The lots area (its pages are being built). */
-const lotsRoutes: Routes = [];
-
-export default lotsRoutes;
+/**
+ * Goods-in: the lots list, a new delivery and one lot. Members read; owners and formulators
+ * write; the assessor has no access.
+ */
+export default [
+  {
+    path: '',
+    canActivate: [roleGuard(ROLE_SETS.members)],
+    children: [
+      {
+        path: '',
+        title: 'Lots · Batchproof',
+        loadComponent: () => import('./lot-list/lot-list'),
+      },
+      {
+        path: 'new',
+        title: 'Record goods-in · Batchproof',
+        canActivate: [roleGuard(ROLE_SETS.writers)],
+        loadComponent: () => import('./lot-page/lot-page'),
+      },
+      {
+        path: ':id',
+        title: 'Lot · Batchproof',
+        loadComponent: () => import('./lot-page/lot-page'),
+      },
+    ],
+  },
+] satisfies Routes;

@@ -1,6 +1,27 @@
 import type { Routes } from '@angular/router';
+import { ROLE_SETS } from '@batchproof/shared';
+import { roleGuard } from '../auth/role-guard';
 
-/** The materials area (its pages are being built). */
-const materialsRoutes: Routes = [];
+/** The materials area: the list, a new material, and one material with its documents. */
+const materialsRoutes: Routes = [
+  {
+    path: '',
+    title: 'Materials · Batchproof',
+    canActivate: [roleGuard(ROLE_SETS.members)],
+    loadComponent: () => import('./material-list/material-list'),
+  },
+  {
+    path: 'new',
+    title: 'New material · Batchproof',
+    canActivate: [roleGuard(ROLE_SETS.writers)],
+    loadComponent: () => import('./material-page/material-page'),
+  },
+  {
+    path: ':id',
+    title: 'Material · Batchproof',
+    canActivate: [roleGuard(ROLE_SETS.members)],
+    loadComponent: () => import('./material-page/material-page'),
+  },
+];
 
 export default materialsRoutes;

@@ -1,0 +1,288 @@
+import { MatButtonHarness } from '@angular/material/button/testing';
+import { MatButtonToggleHarness } from '@angular/material/button-toggle/testing';
+import { MatFormFieldHarness } from '@angular/material/form-field/testing';
+import { MatInputHarness } from '@angular/material/input/testing';
+import type { Material, Role } from '@batchproof/shared';
+import {
+  aFormula,
+  aVersion,
+  BICARB,
+  BLUE_BLEND,
+  CITRIC,
+  FORMULA_ID,
+  nextRequest,
+  openAs,
+  summaryOf,
+} from '../formulas-testing';
+import FormulaPage from './formula-page';
+
+const ROUTES = [{ path: 'formulas/:id/versions/:n', component: FormulaPage }];
+const URL = `/formulas/${FORMULA_ID}/versions/1`;
+const DRAFT = aVersion([
+  { material: BICARB, grams: 200 },
+  { material: CITRIC, grams: 100 },
+]);
+
+type Page = Awaited<ReturnType<typeof openAs>>;
+
+/** Opens version 1 and answers its reads: formula, version, then each line's material. */
+async function openDraft(role: Role = 'formulator', version = DRAFT): Promise<Page> {
+  const page = await openAs(role, ROUTES, URL, FormulaPage);
+  page.backend.expectOne(`/api/formulas/${FORMULA_ID}`).flush(aFormula([version]));
+  page.backend.expectOne(`/api/formulas/${FORMULA_ID}/versions/1`).flush(version);
+  await flushMaterials(page, [BICARB, CITRIC]);
+  await page.harness.fixture.whenStable();
+  return page;
+}
+
+async function flushMaterials(page: Page, materials: Material[]) {
+  for (const m of materials) {
+    (await nextRequest(page.backend, (r) => r.url === `/api/materials/${m.id}`)).flush(m);
+  }
+}
+
+const text = (page: Page, selector: string) =>
+  (page.el.querySelector(selector)?.textContent ?? '').replace(/\s+/g, ' ').trim();
+
+function releaseButton(page: Page) {
+  return page.loader.getHarness(MatButtonHarness.with({ text: /^\S*\s*Release$/ }));
+}
+
+/** The input inside the form field labelled `label`. */
+async function field(page: Page, label: string) {
+  const el = Array.from(page.el.querySelectorAll('mat-form-field')).find(
+    (f) => f.querySelector('mat-label')?.textContent?.trim() === label,
+  );
+  if (!el) throw new Error(`No field labelled ${label}`);
+  const id = el.querySelector('input')!.id;
+  return page.loader.getHarness(MatInputHarness.with({ selector: `#${id}` }));
+}
+
+describe('FormulaPage', () => {
+  beforeEach(() => localStorage.clear());
+
+  it('updates totals and percentages as grams are typed, and converts to percent entry and back', async () => {
+    const page = await openDraft();
+    expect(text(page, '[data-testid="total-grams"]')).toBe('300 g');
+    expect(text(page, '[data-testid="line-percent-0"]')).toBe('66.67 %');
+
+    await (await field(page, 'Grams, line 2')).setValue('200');
+    expect(text(page, '[data-testid="total-grams"]')).toBe('400 g');
+    expect(text(page, '[data-testid="line-percent-0"]')).toBe('50.00 %');
+
+    await (await page.loader.getHarness(MatButtonToggleHarness.with({ text: 'Percent' }))).check();
+    expect(await (await field(page, 'Batch total')).getValue()).toBe('400');
+    expect(await (await field(page, 'Percent, line 1')).getValue()).toBe('50');
+    expect(await (await field(page, 'Percent, line 2')).getValue()).toBe('50');
+
+    // A bigger batch keeps the percentages and gives each line its new grams.
+    await (await field(page, 'Batch total')).setValue('1000');
+    expect(text(page, '[data-testid="line-grams-0"]')).toBe('500 g');
+    expect(text(page, '[data-testid="total-percent"]')).toBe('100.00 %');
+
+    await (await page.loader.getHarness(MatButtonToggleHarness.with({ text: 'Grams' }))).check();
+    expect(await (await field(page, 'Grams, line 1')).getValue()).toBe('500');
+    expect(text(page, '[data-testid="total-grams"]')).toBe('1,000 g');
+  });
+
+  it('says how far percent lines are from 100 % while they are typed', async () => {
+    const page = await openDraft();
+    await (await page.loader.getHarness(MatButtonToggleHarness.with({ text: 'Percent' }))).check();
+    await (await field(page, 'Percent, line 2')).setValue('20');
+    expect(text(page, '.totals')).toContain('13.333 % still to place');
+  });
+
+  it('saves lines entered by percent as percent lines with the batch total', async () => {
+    const page = await openDraft();
+    await (await page.loader.getHarness(MatButtonToggleHarness.with({ text: 'Percent' }))).check();
+    await (await field(page, 'Batch total')).setValue('600');
+    const saved = (
+      await page.loader.getHarness(MatButtonHarness.with({ text: /Save draft/ }))
+    ).click();
+    const put = await nextRequest(page.backend, (r) => r.method === 'PUT');
+    expect(put.request.body.lines).toBeUndefined();
+    expect(put.request.body.byPercent.batchGrams).toBe(600);
+    expect(put.request.body.byPercent.lines).toEqual([
+      { materialId: BICARB.id, percent: 66.6667 },
+      { materialId: CITRIC.id, percent: 33.3333 },
+    ]);
+    put.flush(DRAFT);
+    await saved;
+  });
+
+  it('moves and removes lines with labelled buttons, keeping the focus on the moved line', async () => {
+    const page = await openDraft();
+    await (
+      await page.loader.getHarness(
+        MatButtonHarness.with({ selector: '[aria-label="Move line 2 up"]' }),
+      )
+    ).click();
+    const materials = () =>
+      Array.from(page.el.querySelectorAll<HTMLInputElement>('bp-material-picker input')).map(
+        (i) => i.value,
+      );
+    expect(materials()).toEqual(['Citric acid', 'Bicarb, fine']);
+    // Line 1 cannot move further up, so the focus stays on it by its other move button.
+    expect(document.activeElement?.getAttribute('aria-label')).toBe('Move line 1 down');
+
+    await (
+      await page.loader.getHarness(
+        MatButtonHarness.with({ selector: '[aria-label="Remove line 1"]' }),
+      )
+    ).click();
+    expect(materials()).toEqual(['Bicarb, fine']);
+    expect(text(page, '[data-testid="total-grams"]')).toBe('200 g');
+  });
+
+  it('shows a live US block when a blend with ultramarines (CI 77007) is added to a bath product', async () => {
+    const page = await openDraft();
+    const us = () => text(page, '[aria-label="US · United States findings"]');
+    expect(us()).not.toContain('Blocks');
+
+    await (await page.loader.getHarness(MatButtonHarness.with({ text: /Add line/ }))).click();
+    const picker = page.el.querySelectorAll<HTMLInputElement>('bp-material-picker input')[2]!;
+    picker.value = 'lagoon';
+    picker.dispatchEvent(new Event('input'));
+    const search = await nextRequest(
+      page.backend,
+      (r) => r.url === '/api/materials' && r.method === 'GET',
+    );
+    expect(search.request.params.get('q')).toBe('lagoon');
+    search.flush({ items: [summaryOf(BLUE_BLEND)], total: 1, page: 1, pageSize: 10 });
+    await page.harness.fixture.whenStable();
+
+    const option = document.querySelector<HTMLElement>('mat-option');
+    expect(option?.textContent).toContain('Lagoon blue mica');
+    option!.click();
+    await flushMaterials(page, [BLUE_BLEND]);
+    await (await field(page, 'Grams, line 3')).setValue('1');
+
+    expect(us()).toContain('Blocks');
+    expect(us()).toContain('Ultramarines');
+    expect(us()).toContain('21 CFR 73.2725');
+    expect(text(page, 'bp-live-checks h3')).toMatch(/Blocks\s*1/);
+  });
+
+  it('on a 400 puts the server messages beside their fields and keeps everything typed', async () => {
+    const page = await openDraft();
+    await (await field(page, 'Grams, line 2')).setValue('120');
+    const saved = (
+      await page.loader.getHarness(MatButtonHarness.with({ text: /Save draft/ }))
+    ).click();
+    const put = await nextRequest(page.backend, (r) => r.method === 'PUT');
+    expect(put.request.body.lines).toEqual([
+      { materialId: BICARB.id, grams: 200 },
+      { materialId: CITRIC.id, grams: 120 },
+    ]);
+    put.flush(
+      {
+        error: {
+          code: 'validation_failed',
+          message: 'Some lines name an unknown material.',
+          fieldErrors: { 'lines.1.materialId': ['Choose one of this workshop’s materials'] },
+        },
+      },
+      { status: 400, statusText: 'Bad Request' },
+    );
+    await saved;
+    await page.harness.fixture.whenStable();
+
+    const material = await page.loader.getHarness(
+      MatFormFieldHarness.with({ floatingLabelText: 'Material, line 2' }),
+    );
+    expect(await material.getTextErrors()).toEqual(['Choose one of this workshop’s materials']);
+    expect(await (await field(page, 'Grams, line 2')).getValue()).toBe('120');
+    expect(text(page, '.bp-form-error')).toContain('Some lines name an unknown material.');
+  });
+
+  it('on a refused release, offers the owner an override with a recorded reason', async () => {
+    const page = await openDraft('owner', { ...DRAFT, counts: { block: 1, warn: 0, info: 0 } });
+    const clicked = (await releaseButton(page)).click();
+    const refused = await nextRequest(page.backend, (r) => r.url.endsWith('/versions/1/release'));
+    expect(refused.request.body).toEqual({});
+    refused.flush(
+      {
+        error: {
+          code: 'conflict',
+          message: 'Version 1 has 1 blocking finding(s) (US: Ultramarines (CI 77007)).',
+        },
+      },
+      { status: 409, statusText: 'Conflict' },
+    );
+    await clicked;
+    await page.harness.fixture.whenStable();
+    expect(text(page, '.refusal')).toContain('Not released.');
+
+    await (
+      await page.loader.getHarness(MatButtonHarness.with({ text: /recorded reason/ }))
+    ).click();
+    const reason = await page.root.getHarness(
+      MatInputHarness.with({ selector: 'bp-release-dialog textarea' }),
+    );
+    await reason.setValue('Assessor confirmed the EU-only listing on 2 Dec.');
+    const confirmed = (
+      await page.root.getHarness(MatButtonHarness.with({ text: 'Release with this reason' }))
+    ).click();
+
+    const override = await nextRequest(page.backend, (r) => r.url.endsWith('/versions/1/release'));
+    expect(override.request.body).toEqual({
+      override: { reason: 'Assessor confirmed the EU-only listing on 2 Dec.' },
+    });
+    override.flush({
+      ...DRAFT,
+      state: 'released',
+      releasedAt: '2026-12-02T10:00:00.000Z',
+      overrideReason: 'Assessor confirmed the EU-only listing on 2 Dec.',
+    });
+    (await nextRequest(page.backend, (r) => r.url === `/api/formulas/${FORMULA_ID}`)).flush(
+      aFormula([{ ...DRAFT, state: 'released' }]),
+    );
+    await confirmed;
+    await page.harness.fixture.whenStable();
+    expect(text(page, '[data-testid="version-state"]')).toContain('released');
+    expect(text(page, '.released-note')).toContain('Reason recorded');
+  });
+
+  it('on a refused release, tells a formulator only the owner may override, with no override button', async () => {
+    const page = await openDraft('formulator', {
+      ...DRAFT,
+      counts: { block: 1, warn: 0, info: 0 },
+    });
+    const clicked = (await releaseButton(page)).click();
+    (await nextRequest(page.backend, (r) => r.url.endsWith('/release'))).flush(
+      { error: { code: 'conflict', message: 'Version 1 has 1 blocking finding(s).' } },
+      { status: 409, statusText: 'Conflict' },
+    );
+    await clicked;
+    await page.harness.fixture.whenStable();
+
+    expect(text(page, '.refusal')).toContain("Only the workshop's owner may release");
+    expect(
+      await page.loader.getAllHarnesses(MatButtonHarness.with({ text: /recorded reason/ })),
+    ).toHaveLength(0);
+  });
+
+  it('shows a released version read-only to its writers, with a new draft action instead', async () => {
+    const page = await openDraft('owner', {
+      ...DRAFT,
+      state: 'released',
+      releasedAt: '2026-11-02T10:00:00.000Z',
+    });
+    expect(await (await field(page, 'Grams, line 1')).isDisabled()).toBe(true);
+    const labels = await Promise.all(
+      (await page.loader.getAllHarnesses(MatButtonHarness)).map((b) => b.getText()),
+    );
+    expect(labels.join('|')).toContain('New draft from this version');
+    expect(labels.join('|')).not.toContain('Save draft');
+  });
+
+  it('gives production and viewers no write actions on a draft', async () => {
+    const page = await openDraft('production');
+    expect(await (await field(page, 'Grams, line 1')).isDisabled()).toBe(true);
+    const labels = await Promise.all(
+      (await page.loader.getAllHarnesses(MatButtonHarness)).map((b) => b.getText()),
+    );
+    expect(labels.join('|')).not.toMatch(/Save draft|Release|New draft|Add line/);
+    expect(labels.join('|')).toContain('Scale version 1');
+  });
+});

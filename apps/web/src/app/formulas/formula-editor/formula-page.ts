@@ -1,0 +1,181 @@
+import { DatePipe } from '@angular/common';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  computed,
+  effect,
+  inject,
+  input,
+  linkedSignal,
+} from '@angular/core';
+import { toObservable, toSignal } from '@angular/core/rxjs-interop';
+import { NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
+import { MatButton } from '@angular/material/button';
+import { MatError, MatFormField, MatLabel } from '@angular/material/form-field';
+import { MatIcon } from '@angular/material/icon';
+import { MatInput } from '@angular/material/input';
+import { MatProgressBar } from '@angular/material/progress-bar';
+import { RouterLink } from '@angular/router';
+import { map, of, startWith, switchMap } from 'rxjs';
+import { type Material, ROLE_SETS } from '@batchproof/shared';
+import { Session } from '../../auth/session';
+import { errorMessage } from '../../forms/form-errors';
+import { messageOf } from '../../http/api-error';
+import { FormulasApi } from '../formulas-api';
+import { LiveChecks } from '../live-checks/live-checks';
+import { evaluateDraft, today } from '../live-checks/live-evaluation';
+import { ScalePanel } from '../scaling/scale-panel';
+import { SEVERITIES, SeverityLabel } from '../severity/severity-label';
+import { FormulaActions } from './formula-actions';
+import { createFormulaForm } from './formula-form';
+import { FormulaLines } from './formula-lines';
+import { ProfileFields } from './profile-fields';
+import { VersionHistory } from './version-history';
+
+const sameIds = (a: readonly string[], b: readonly string[]) => a.join() === b.join();
+
+/**
+ * A formula version in the editor: the version on the left (profile, lines, notes), its live
+ * consequences on the right, computed in the browser by the shared engine as you type. Drafts are
+ * saved and released here; released versions are read-only and start new drafts.
+ */
+@Component({
+  selector: 'bp-formula-page',
+  imports: [
+    DatePipe,
+    ReactiveFormsModule,
+    MatButton,
+    MatError,
+    MatFormField,
+    MatIcon,
+    MatInput,
+    MatLabel,
+    MatProgressBar,
+    RouterLink,
+    FormulaLines,
+    LiveChecks,
+    ProfileFields,
+    ScalePanel,
+    SeverityLabel,
+    VersionHistory,
+  ],
+  templateUrl: './formula-page.html',
+  styleUrl: './formula-page.scss',
+  host: { '(keydown.control.s)': 'saveShortcut($event)' },
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export default class FormulaPage {
+  /** The formula's id, from the path. */
+  readonly id = input.required<string>();
+  /** The version number from the path; the latest version when absent. */
+  readonly n = input<string>();
+
+  private readonly api = inject(FormulasApi);
+  private readonly session = inject(Session);
+  private readonly fb = inject(NonNullableFormBuilder);
+  protected readonly errorMessage = errorMessage;
+  protected readonly severities = SEVERITIES;
+  private readonly asOf = today();
+
+  /** Whether the signed-in member may change formulas. */
+  protected readonly canWrite = computed(() => this.session.hasRole(ROLE_SETS.writers));
+  protected readonly isOwner = computed(() => this.session.hasRole(ROLE_SETS.ownerOnly));
+
+  protected readonly formula = this.api.formula(() => this.id());
+  /** The version on screen: the one in the path, else the latest. */
+  protected readonly number = computed(() => {
+    const n = Number(this.n());
+    if (Number.isInteger(n) && n > 0) return n;
+    const f = this.formula.hasValue() ? this.formula.value() : undefined;
+    return f?.versions.length ? Math.max(...f.versions.map((v) => v.number)) : undefined;
+  });
+  protected readonly version = this.api.version(() => {
+    const n = this.number();
+    return n ? { id: this.id(), n } : undefined;
+  });
+  protected readonly loadError = computed(() => {
+    const error = this.formula.error() ?? this.version.error();
+    return error ? messageOf(error) : '';
+  });
+
+  /** The formula and version the form was built from; a save of the same version keeps it. */
+  private readonly loaded = computed(
+    () =>
+      this.formula.hasValue() && this.version.hasValue()
+        ? { formula: this.formula.value(), version: this.version.value() }
+        : undefined,
+    { equal: (a, b) => a?.version.id === b?.version.id },
+  );
+  /** The editor's form, built once per version shown. */
+  protected readonly form = computed(() => {
+    const l = this.loaded();
+    return l ? createFormulaForm(this.fb, l.formula, l.version) : undefined;
+  });
+  /** Whether the version on screen can change: a draft, and a member who writes. */
+  protected readonly readOnly = computed(
+    () => !this.canWrite() || !this.version.hasValue() || this.version.value().state !== 'draft',
+  );
+  /** Everything typed, with a revision that moves on every value, status or touch change. */
+  protected readonly state = toSignal(
+    toObservable(this.form).pipe(
+      switchMap((f) =>
+        f
+          ? f.events.pipe(
+              startWith(null),
+              map((_, revision) => ({ value: f.getRawValue(), revision, dirty: f.dirty })),
+            )
+          : of(undefined),
+      ),
+    ),
+  );
+
+  private readonly materialIds = computed(
+    () =>
+      [...new Set((this.state()?.value.lines ?? []).map((l) => l.materialId))]
+        .filter(Boolean)
+        .sort(),
+    { equal: sameIds },
+  );
+  private readonly materials = this.api.materials(this.materialIds);
+  /** The lines' full materials; the last set stays while another line's material loads. */
+  private readonly materialMap = linkedSignal<
+    ReadonlyMap<string, Material> | undefined,
+    ReadonlyMap<string, Material>
+  >({
+    source: () => (this.materials.hasValue() ? this.materials.value() : undefined),
+    computation: (value, previous) => value ?? previous?.value ?? new Map(),
+  });
+  protected readonly materialsError = computed(() => {
+    const error = this.materials.error();
+    return error ? `Some materials could not be loaded: ${messageOf(error)}` : '';
+  });
+  /** The live check of what is typed now. */
+  protected readonly live = computed(() => {
+    const s = this.state();
+    if (!s) return undefined;
+    const live = evaluateDraft(s.value, this.materialMap(), this.asOf);
+    return this.materials.isLoading() ? { ...live, pending: true } : live;
+  });
+  protected readonly actions = new FormulaActions({
+    formulaId: this.id,
+    form: this.form,
+    formula: this.formula,
+    version: this.version,
+    isOwner: this.isOwner,
+  });
+
+  constructor() {
+    // Released versions, and members who only read, see the form without being able to change it.
+    effect(() => {
+      const f = this.form();
+      if (!f) return;
+      if (this.readOnly()) f.disable();
+      else f.enable();
+    });
+  }
+
+  protected saveShortcut(event: Event): void {
+    event.preventDefault();
+    if (!this.readOnly()) this.actions.save();
+  }
+}

@@ -1,0 +1,188 @@
+import { HttpClient, httpResource } from '@angular/common/http';
+import { inject, Injectable, type Signal } from '@angular/core';
+import { rxResource } from '@angular/core/rxjs-interop';
+import type { z } from 'zod';
+import { forkJoin, map, type Observable, of, shareReplay } from 'rxjs';
+import {
+  evaluationCountsSchema,
+  type Formula,
+  type FormulaCreate,
+  formulaListItemSchema,
+  type FormulaListQuery,
+  formulaSchema,
+  type FormulaUpdate,
+  type FormulaVersion,
+  type FormulaVersionInput,
+  formulaVersionSchema,
+  type Material,
+  materialPageSchema,
+  materialSchema,
+  pageSchema,
+  type ReleaseRequest,
+  type ScaleRequest,
+  scaledVersionSchema,
+  type ScaledVersion,
+  versionComparisonSchema,
+} from '@batchproof/shared';
+
+/**
+ * A formula row as the list shows it. `latestCounts` (the latest version's findings by severity)
+ * is not in the shared list contract yet; it is read when the API sends it and left out otherwise.
+ */
+export const formulaRowSchema = formulaListItemSchema.extend({
+  latestCounts: evaluationCountsSchema.nullish(),
+});
+const formulaRowPageSchema = pageSchema(formulaRowSchema);
+/** One page of formula rows. */
+export type FormulaRowPage = z.infer<typeof formulaRowPageSchema>;
+
+const enc = encodeURIComponent;
+const formulaUrl = (id: string) => `/api/formulas/${enc(id)}`;
+const versionUrl = (id: string, n: number) => `${formulaUrl(id)}/versions/${n}`;
+
+/** The workshop's formulas and their versions. Reads are resources; call them in a field. */
+@Injectable({ providedIn: 'root' })
+export class FormulasApi {
+  private readonly http = inject(HttpClient);
+  /** Full material records already asked for, shared by every line naming them. */
+  private readonly materialCache = new Map<string, Observable<Material>>();
+
+  /** One page of formulas, filtered, sorted and paged on the server. */
+  list(query: () => FormulaListQuery) {
+    return httpResource(
+      () => {
+        const q = query();
+        const params: Record<string, string | number> = {
+          sort: q.sort,
+          dir: q.dir,
+          page: q.page,
+          pageSize: q.pageSize,
+        };
+        if (q.q) params['q'] = q.q;
+        if (q.productType) params['productType'] = q.productType;
+        return { url: '/api/formulas', params };
+      },
+      { parse: (body) => formulaRowPageSchema.parse(body) },
+    );
+  }
+
+  /** A formula with its version history. */
+  formula(id: () => string | undefined) {
+    return httpResource(
+      () => {
+        const i = id();
+        return i ? formulaUrl(i) : undefined;
+      },
+      { parse: (body) => formulaSchema.parse(body) },
+    );
+  }
+
+  /** One version with its lines, profile and the server's stored evaluation. */
+  version(key: () => { id: string; n: number } | undefined) {
+    return httpResource(
+      () => {
+        const k = key();
+        return k ? versionUrl(k.id, k.n) : undefined;
+      },
+      { parse: (body) => formulaVersionSchema.parse(body) },
+    );
+  }
+
+  /** What changed between two versions: lines, and per market declarations and findings. */
+  compare(key: () => { id: string; from: number; to: number } | undefined) {
+    return httpResource(
+      () => {
+        const k = key();
+        return k
+          ? { url: `${formulaUrl(k.id)}/compare`, params: { from: k.from, to: k.to } }
+          : undefined;
+      },
+      { parse: (body) => versionComparisonSchema.parse(body) },
+    );
+  }
+
+  /** Materials whose name, INCI or CAS contains `q`, for the line picker (no request while null). */
+  searchMaterials(q: () => string | null) {
+    return httpResource(
+      () => {
+        const text = q();
+        if (text === null) return undefined;
+        const params: Record<string, string | number> = { pageSize: 10, sort: 'tradeName' };
+        if (text.trim()) params['q'] = text.trim();
+        return { url: '/api/materials', params };
+      },
+      { parse: (body) => materialPageSchema.parse(body).items },
+    );
+  }
+
+  /**
+   * The full records (blend components, certificates, weights per volume) of the materials in
+   * `ids`, keyed by id: what the live check needs. Each id is asked for once per page load.
+   */
+  materials(ids: Signal<readonly string[]>) {
+    return rxResource({
+      params: () => ids(),
+      stream: ({ params }) =>
+        params.length === 0
+          ? of(new Map<string, Material>())
+          : forkJoin(params.map((id) => this.material(id))).pipe(
+              map((list) => new Map(list.map((m) => [m.id, m]))),
+            ),
+    });
+  }
+
+  /** One material's full record, cached for the life of the app. */
+  material(id: string): Observable<Material> {
+    let cached = this.materialCache.get(id);
+    if (!cached) {
+      cached = this.http.get<unknown>(`/api/materials/${enc(id)}`).pipe(
+        map((body) => materialSchema.parse(body)),
+        shareReplay({ bufferSize: 1, refCount: false }),
+      );
+      this.materialCache.set(id, cached);
+      // A failed read is not cached, so the next look tries again.
+      cached.subscribe({ error: () => this.materialCache.delete(id) });
+    }
+    return cached;
+  }
+
+  create(input: FormulaCreate): Observable<Formula> {
+    return this.http
+      .post<unknown>('/api/formulas', input)
+      .pipe(map((body) => formulaSchema.parse(body)));
+  }
+
+  update(id: string, input: FormulaUpdate): Observable<Formula> {
+    return this.http
+      .patch<unknown>(formulaUrl(id), input)
+      .pipe(map((body) => formulaSchema.parse(body)));
+  }
+
+  /** Replaces a draft's lines, profile and notes; the server re-evaluates it. */
+  saveDraft(id: string, n: number, input: FormulaVersionInput): Observable<FormulaVersion> {
+    return this.http
+      .put<unknown>(versionUrl(id, n), input)
+      .pipe(map((body) => formulaVersionSchema.parse(body)));
+  }
+
+  /** Releases a draft; 409 when it has blocking findings and no owner's override. */
+  release(id: string, n: number, request: ReleaseRequest = {}): Observable<FormulaVersion> {
+    return this.http
+      .post<unknown>(`${versionUrl(id, n)}/release`, request)
+      .pipe(map((body) => formulaVersionSchema.parse(body)));
+  }
+
+  /** Starts a new draft copied from version `fromVersion`. */
+  newDraft(id: string, fromVersion: number): Observable<FormulaVersion> {
+    return this.http
+      .post<unknown>(`${formulaUrl(id)}/versions`, { fromVersion })
+      .pipe(map((body) => formulaVersionSchema.parse(body)));
+  }
+
+  /** Grams per line for a batch of units × unit mass (or a total), plus a loss allowance. */
+  scale(id: string, n: number, request: ScaleRequest): Observable<ScaledVersion> {
+    return this.http
+      .post<unknown>(`${versionUrl(id, n)}/scale`, request)
+      .pipe(map((body) => scaledVersionSchema.parse(body)));
+  }
+}

@@ -1,0 +1,219 @@
+import { TestbedHarnessEnvironment } from '@angular/cdk/testing/testbed';
+import { provideHttpClient, withInterceptors } from '@angular/common/http';
+import {
+  HttpTestingController,
+  provideHttpClientTesting,
+  type TestRequest,
+} from '@angular/common/http/testing';
+import { provideZonelessChangeDetection, type Type } from '@angular/core';
+import { TestBed } from '@angular/core/testing';
+import { provideRouter, type Routes, withComponentInputBinding } from '@angular/router';
+import { RouterTestingHarness } from '@angular/router/testing';
+import { firstValueFrom } from 'rxjs';
+import type {
+  Formula,
+  FormulaVersion,
+  Material,
+  MaterialSummary,
+  ProductProfile,
+  Role,
+} from '@batchproof/shared';
+import { authInterceptor } from '../auth/auth-interceptor';
+import { Session } from '../auth/session';
+import { errorInterceptor } from '../http/error-interceptor';
+
+/** Test data and page set-up for the formulas specs (imported by specs only). */
+
+const STAMP = '2026-11-01T10:00:00.000Z';
+export const FORMULA_ID = '7d3c1f1e-1c1a-4c8e-9a59-0c7a4f2b9e01';
+
+/** A full material record as `GET /api/materials/:id` returns it. */
+export function aMaterial(id: string, fields: Partial<Material>): Material {
+  return {
+    id,
+    createdAt: STAMP,
+    updatedAt: STAMP,
+    tradeName: 'Material',
+    inci: 'Aqua',
+    usName: null,
+    cas: null,
+    ec: null,
+    functions: [],
+    category: 'other',
+    supplierId: null,
+    supplierName: null,
+    notes: null,
+    colourIndex: null,
+    components: [],
+    ifraCertificate: null,
+    allergenDeclaration: null,
+    weightPerVolume: {},
+    calibrations: [],
+    calibrationSummary: [],
+    ...fields,
+  };
+}
+
+export const BICARB = aMaterial('1b7f0c52-5a43-4d7e-8a51-6f0d2f4a0001', {
+  tradeName: 'Bicarb, fine',
+  inci: 'Sodium Bicarbonate',
+  category: 'base',
+});
+export const CITRIC = aMaterial('1b7f0c52-5a43-4d7e-8a51-6f0d2f4a0002', {
+  tradeName: 'Citric acid',
+  inci: 'Citric Acid',
+  category: 'acid',
+});
+/** A mica blend with ultramarines (CI 77007): not for US products used in the bath. */
+export const BLUE_BLEND = aMaterial('1b7f0c52-5a43-4d7e-8a51-6f0d2f4a0003', {
+  tradeName: 'Lagoon blue mica',
+  inci: 'Mica (and) Titanium Dioxide (and) Ultramarines',
+  category: 'colourant',
+  functions: ['colorant'],
+  components: [
+    { inci: 'Mica', percent: 60, colourIndex: 'CI 77019', functions: ['colorant'] },
+    { inci: 'Titanium Dioxide', percent: 25, colourIndex: 'CI 77891', functions: ['colorant'] },
+    { inci: 'Ultramarines', percent: 15, colourIndex: 'CI 77007', functions: ['colorant'] },
+  ],
+});
+
+/** The list row of a material. */
+export function summaryOf(m: Material): MaterialSummary {
+  const { id, tradeName, inci, usName, cas, category, supplierId, supplierName } = m;
+  return {
+    id,
+    tradeName,
+    inci,
+    usName,
+    cas,
+    category,
+    supplierId,
+    supplierName,
+    colourIndex: m.colourIndex,
+    functions: m.functions,
+    updatedAt: m.updatedAt,
+  };
+}
+
+/** A bath product sold in the US and the EU. */
+export const BATH_PROFILE: ProductProfile = {
+  use: 'rinse-off',
+  contact: { mucousMembranes: true, eyeArea: false, lips: false },
+  inBath: true,
+  adultsOnly: false,
+  ifraCategory: '9',
+  markets: ['US', 'EU'],
+  unitMassGrams: 150,
+  netQuantity: { amount: 150, unit: 'g' },
+};
+
+/** A stored version with the given lines (percentages worked out here). */
+export function aVersion(
+  lines: { material: Material; grams: number }[],
+  fields: Partial<FormulaVersion> = {},
+): FormulaVersion {
+  const total = lines.reduce((s, l) => s + l.grams, 0);
+  return {
+    id: `9e0c1d2a-0000-4000-8000-00000000000${fields.number ?? 1}`,
+    createdAt: STAMP,
+    updatedAt: STAMP,
+    formulaId: FORMULA_ID,
+    number: 1,
+    state: 'draft',
+    lines: lines.map((l) => ({
+      materialId: l.material.id,
+      materialName: l.material.tradeName,
+      grams: l.grams,
+      percent: total > 0 ? (l.grams / total) * 100 : 0,
+    })),
+    totalGrams: total,
+    profile: BATH_PROFILE,
+    notes: null,
+    evaluation: null,
+    counts: { block: 0, warn: 0, info: 0 },
+    evaluationProblems: [],
+    evaluatedAt: STAMP,
+    releasedAt: null,
+    overrideReason: null,
+    ...fields,
+  };
+}
+
+/** A formula whose history holds the given versions. */
+export function aFormula(versions: FormulaVersion[]): Formula {
+  return {
+    id: FORMULA_ID,
+    createdAt: STAMP,
+    updatedAt: STAMP,
+    name: 'Lagoon fizzer',
+    productType: 'fizzer',
+    notes: null,
+    versions: versions.map((v) => ({
+      number: v.number,
+      state: v.state,
+      counts: v.counts,
+      releasedAt: v.releasedAt,
+      updatedAt: v.updatedAt,
+    })),
+  };
+}
+
+/**
+ * Signs in as `role` (the session answers from the testing backend), then opens `url` on the given
+ * routes with the app's interceptors, as the real app would.
+ */
+export async function openAs(role: Role, routes: Routes, url: string, page: Type<unknown>) {
+  TestBed.configureTestingModule({
+    providers: [
+      provideZonelessChangeDetection(),
+      provideRouter(routes, withComponentInputBinding()),
+      provideHttpClient(withInterceptors([errorInterceptor, authInterceptor])),
+      provideHttpClientTesting(),
+    ],
+  });
+  const backend = TestBed.inject(HttpTestingController);
+  const signingIn = firstValueFrom(
+    TestBed.inject(Session).signIn({ email: 'me@example.com', password: 'x' }),
+  );
+  backend.expectOne('/api/auth/sign-in').flush({
+    accessToken: 'token-1',
+    expiresIn: 900,
+    user: {
+      id: 'u1',
+      name: 'Ada Marsh',
+      email: 'me@example.com',
+      role,
+      workshop: { id: 'w1', name: 'Hollowmere' },
+    },
+  });
+  await signingIn;
+  const harness = await RouterTestingHarness.create();
+  await harness.navigateByUrl(url, page);
+  return {
+    harness,
+    backend,
+    loader: TestbedHarnessEnvironment.loader(harness.fixture),
+    root: TestbedHarnessEnvironment.documentRootLoader(harness.fixture),
+    el: harness.routeNativeElement!,
+  };
+}
+
+/**
+ * Waits for the page to send a request matching `match` and returns it. Resource reads start
+ * after signals settle (and the picker's search after a short pause in typing), so they are
+ * awaited rather than expected at once; a harness cannot wait for them, as a pending read keeps
+ * the page from settling.
+ */
+export async function nextRequest(
+  backend: HttpTestingController,
+  match: (req: { url: string; method: string }) => boolean,
+  timeoutMs = 2000,
+): Promise<TestRequest> {
+  const deadline = Date.now() + timeoutMs;
+  for (;;) {
+    const found = backend.match(match);
+    if (found.length > 0) return found[0]!;
+    if (Date.now() > deadline) throw new Error('The page sent no matching request in time.');
+    await new Promise((resolve) => setTimeout(resolve, 10));
+  }
+}

@@ -1,0 +1,151 @@
+import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
+import { MatIcon } from '@angular/material/icon';
+import {
+  type ComplianceFinding,
+  type ComplianceMarket,
+  DEFER_TO_ASSESSOR,
+} from '@batchproof/shared';
+import { MARKETS } from '../product-types';
+import { SeverityLabel } from '../severity/severity-label';
+
+/** A group of findings under one market (or every market), most serious first. */
+interface MarketGroup {
+  key: string;
+  title: string;
+  findings: { finding: ComplianceFinding; text: string; harm: boolean }[];
+}
+
+const MARKET_NAMES = new Map(MARKETS.map((m) => [m.code, m.name]));
+
+/**
+ * Findings grouped by market, each with its severity as icon + word, what it is about, the
+ * message and the rule it rests on. The assessor sentence the engine appends to findings that
+ * could hurt someone is set apart, so it is read rather than skimmed.
+ */
+@Component({
+  selector: 'bp-finding-list',
+  imports: [MatIcon, SeverityLabel],
+  template: `
+    @for (group of groups(); track group.key) {
+      <section class="group" [attr.aria-label]="group.title + ' findings'">
+        <h4>{{ group.title }}</h4>
+        <ul>
+          @for (f of group.findings; track $index) {
+            <li [class]="f.finding.severity">
+              <div class="head">
+                <bp-severity-label [severity]="f.finding.severity" />
+                <span class="subject">{{ f.finding.subject }}</span>
+              </div>
+              <p class="message">{{ f.text }}</p>
+              @if (f.harm) {
+                <p class="harm">
+                  <mat-icon aria-hidden="true">health_and_safety</mat-icon>{{ assessorNote }}
+                </p>
+              }
+              <p class="source">
+                Source: {{ f.finding.source }}
+                @if (f.finding.status === 'M') {
+                  <span class="weak">(from memory, not yet confirmed)</span>
+                }
+              </p>
+            </li>
+          }
+        </ul>
+      </section>
+    } @empty {
+      <p class="none">
+        <mat-icon aria-hidden="true">check_circle</mat-icon>
+        No findings for these markets.
+      </p>
+    }
+  `,
+  styles: `
+    :host {
+      display: block;
+    }
+    h4 {
+      margin: 12px 0 4px;
+      font: var(--mat-sys-title-small);
+    }
+    ul {
+      list-style: none;
+      margin: 0;
+      padding: 0;
+      display: grid;
+      gap: 8px;
+    }
+    li {
+      padding: 8px 12px;
+      border-left: 4px solid var(--mat-sys-outline-variant);
+      border-radius: var(--mat-sys-corner-extra-small);
+      background: var(--mat-sys-surface-container-low);
+    }
+    li.block {
+      border-left-color: var(--mat-sys-error);
+    }
+    li.warn {
+      border-left-color: var(--mat-sys-tertiary);
+    }
+    .head {
+      display: flex;
+      flex-wrap: wrap;
+      align-items: center;
+      gap: 8px;
+    }
+    .subject {
+      font-weight: 600;
+      overflow-wrap: anywhere;
+    }
+    p {
+      margin: 4px 0 0;
+      font: var(--mat-sys-body-medium);
+    }
+    .harm {
+      display: flex;
+      gap: 6px;
+      align-items: flex-start;
+      font-weight: 600;
+    }
+    .harm mat-icon {
+      flex: none;
+      font-size: 18px;
+      width: 18px;
+      height: 18px;
+    }
+    .source,
+    .weak {
+      color: var(--mat-sys-on-surface-variant);
+      font: var(--mat-sys-body-small);
+    }
+    .none {
+      display: flex;
+      align-items: center;
+      gap: 6px;
+      color: var(--mat-sys-primary);
+    }
+  `,
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class FindingList {
+  readonly findings = input.required<readonly ComplianceFinding[]>();
+  /** Markets to group by, in order; findings for every market come first. */
+  readonly markets = input.required<readonly ComplianceMarket[]>();
+
+  protected readonly assessorNote = DEFER_TO_ASSESSOR;
+  protected readonly groups = computed<MarketGroup[]>(() => {
+    const keys: (ComplianceMarket | null)[] = [null, ...this.markets()];
+    return keys
+      .map((market) => ({
+        key: market ?? 'all',
+        title: market ? `${market} · ${MARKET_NAMES.get(market)}` : 'Every market',
+        findings: this.findings()
+          .filter((f) => f.market === market)
+          .map((finding) => ({
+            finding,
+            text: finding.message.replace(DEFER_TO_ASSESSOR, '').trim(),
+            harm: finding.message.includes(DEFER_TO_ASSESSOR),
+          })),
+      }))
+      .filter((g) => g.findings.length > 0);
+  });
+}

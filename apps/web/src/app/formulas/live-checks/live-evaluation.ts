@@ -1,0 +1,108 @@
+import {
+  evaluateFormula,
+  evaluationInputSchema,
+  type EvaluationResult,
+  type FizzBalance,
+  fizzBalance,
+  fizzReactants,
+  type Material,
+  materialToEngineInput,
+  type ProductType,
+} from '@batchproof/shared';
+import { type FormulaFormValue, lineGrams } from '../formula-editor/formula-form';
+import { isEffervescent } from '../product-types';
+
+/** One line of the composition, as typed. */
+export interface CompositionLine {
+  name: string;
+  grams: number;
+  percent: number;
+}
+
+/** The editor's live check of what is typed right now. */
+export interface LiveEvaluation {
+  /** The engine's result, or null while the draft cannot be checked. */
+  result: EvaluationResult | null;
+  /** Why the draft cannot be checked yet, in plain words. */
+  problems: string[];
+  /** Whether some lines' materials are still loading. */
+  pending: boolean;
+  /** Acid/base balance when the product fizzes, else null. */
+  fizz: FizzBalance | null;
+  composition: CompositionLine[];
+  totalGrams: number;
+}
+
+/** Today as YYYY-MM-DD, the date the server also checks against when saving. */
+export const today = (now = new Date()) => now.toISOString().slice(0, 10);
+
+/**
+ * Runs the shared compliance engine on the editor's current value, with each line's material
+ * mapped exactly as the server maps it on save. Lines without a chosen material are left out
+ * (and said so); nothing here throws on half-typed input.
+ */
+export function evaluateDraft(
+  value: FormulaFormValue,
+  materials: ReadonlyMap<string, Material>,
+  asOf: string,
+): LiveEvaluation {
+  const grams = lineGrams(value);
+  const problems: string[] = [];
+  let pending = false;
+  const lines: { grams: number; material: Material }[] = [];
+  value.lines.forEach((line, i) => {
+    if (!line.materialId) {
+      problems.push(`Line ${i + 1} has no material yet: choose one from the list.`);
+      return;
+    }
+    const material = materials.get(line.materialId);
+    if (!material) {
+      pending = true;
+      return;
+    }
+    lines.push({ grams: grams[i]!, material });
+  });
+
+  const totalGrams = lines.reduce((s, l) => s + l.grams, 0);
+  const composition = lines.map((l) => ({
+    name: l.material.tradeName,
+    grams: l.grams,
+    percent: totalGrams > 0 ? (l.grams / totalGrams) * 100 : 0,
+  }));
+  const fizz = fizzFor(value.productType, lines);
+
+  const parsed = evaluationInputSchema.safeParse({
+    asOf,
+    markets: value.profile.markets,
+    product: {
+      name: value.name.trim() || 'Untitled formula',
+      use: value.profile.use,
+      contact: value.profile.contact,
+      inBath: value.profile.inBath,
+      adultsOnly: value.profile.adultsOnly,
+      ifraCategory: value.profile.ifraCategory,
+      ...(value.profile.netQuantity.amount
+        ? { netQuantity: value.profile.netQuantity as { amount: number; unit: 'g' | 'mL' } }
+        : {}),
+    },
+    lines: lines.map((l) => ({ grams: l.grams, material: materialToEngineInput(l.material) })),
+  });
+  if (!parsed.success) {
+    problems.push(...new Set(parsed.error.issues.map((issue) => issue.message)));
+    return { result: null, problems, pending, fizz, composition, totalGrams };
+  }
+  return { result: evaluateFormula(parsed.data), problems, pending, fizz, composition, totalGrams };
+}
+
+function fizzFor(
+  type: ProductType,
+  lines: readonly { grams: number; material: Material }[],
+): FizzBalance | null {
+  const balance = fizzBalance(
+    lines.map((l) => ({ inci: l.material.inci, name: l.material.tradeName, grams: l.grams })),
+  );
+  const hasAcid = balance.reactants.some(
+    (r) => fizzReactants.find((f) => f.id === r.reactant)?.role === 'acid',
+  );
+  return isEffervescent(type, hasAcid) ? balance : null;
+}

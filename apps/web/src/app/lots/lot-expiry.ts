@@ -1,0 +1,56 @@
+/**
+ * How close to its expiry date a lot counts as expiring soon.
+ * // common practice, no published source: a month is the usual reorder and use-up window.
+ */
+export const EXPIRING_SOON_DAYS = 30;
+
+/** Where a lot stands against its expiry date. */
+export type ExpiryState = 'none' | 'ok' | 'soon' | 'expired';
+
+/** The word and icon for each state, so it never rests on colour alone. */
+export const EXPIRY_FLAGS: Record<'soon' | 'expired', { word: string; icon: string }> = {
+  soon: { word: 'Expires soon', icon: 'schedule' },
+  expired: { word: 'Expired', icon: 'event_busy' },
+};
+
+/** The "expiry" filter of the lots list, as it appears in the URL. */
+export const EXPIRY_FILTERS = [
+  { value: 'expired', label: 'Already expired' },
+  { value: '30', label: 'Expired or expiring within 30 days' },
+  { value: '90', label: 'Expired or expiring within 90 days' },
+] as const;
+
+/** A local calendar day as YYYY-MM-DD (the form the API and date inputs use). */
+export function isoDay(date: Date): string {
+  const y = date.getFullYear();
+  const m = String(date.getMonth() + 1).padStart(2, '0');
+  const d = String(date.getDate()).padStart(2, '0');
+  return `${y}-${m}-${d}`;
+}
+
+/** The day `days` after `today` (negative for before), as YYYY-MM-DD. */
+export function addDays(today: Date, days: number): string {
+  const next = new Date(today.getFullYear(), today.getMonth(), today.getDate() + days);
+  return isoDay(next);
+}
+
+/** Where a lot expiring on `expiresOn` stands on `today`. */
+export function expiryState(expiresOn: string | null, today: Date): ExpiryState {
+  if (!expiresOn) return 'none';
+  if (expiresOn < isoDay(today)) return 'expired';
+  if (expiresOn <= addDays(today, EXPIRING_SOON_DAYS)) return 'soon';
+  return 'ok';
+}
+
+/**
+ * The API's `expiresBefore` cut-off for an expiry filter from the URL, or undefined for none
+ * (or one we do not know). The API keeps lots expiring on or before the cut-off.
+ */
+export function expiresBeforeFor(filter: string | undefined, today: Date): string | undefined {
+  if (filter === 'expired') return addDays(today, -1);
+  const days = Number(filter);
+  if (EXPIRY_FILTERS.some((f) => f.value === filter) && Number.isInteger(days)) {
+    return addDays(today, days);
+  }
+  return undefined;
+}

@@ -1,0 +1,201 @@
+import { TestbedHarnessEnvironment } from '@angular/cdk/testing/testbed';
+import { provideHttpClient, withInterceptors } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { provideZonelessChangeDetection } from '@angular/core';
+import { TestBed } from '@angular/core/testing';
+import { MatSortHarness } from '@angular/material/sort/testing';
+import { MatTableHarness } from '@angular/material/table/testing';
+import { provideRouter, Router, withComponentInputBinding } from '@angular/router';
+import { RouterTestingHarness } from '@angular/router/testing';
+import { firstValueFrom } from 'rxjs';
+import type { Lot, LotPage, MaterialSummary, Role } from '@batchproof/shared';
+import { authInterceptor } from '../../auth/auth-interceptor';
+import { Session } from '../../auth/session';
+import { errorInterceptor } from '../../http/error-interceptor';
+import { addDays } from '../lot-expiry';
+import LotList from './lot-list';
+
+const SHEA = '0b4c7a52-2c1e-4a55-9d5e-6f1f3b2a9c01';
+const SHEA_MATERIAL: MaterialSummary = {
+  id: SHEA,
+  tradeName: 'Shea butter, refined',
+  inci: 'Butyrospermum Parkii Butter',
+  usName: null,
+  cas: null,
+  category: 'butter',
+  supplierId: null,
+  supplierName: null,
+  colourIndex: null,
+  functions: [],
+  updatedAt: '2026-01-01T00:00:00.000Z',
+};
+
+function lot(overrides: Partial<Lot>): Lot {
+  return {
+    id: 'l1',
+    createdAt: '2026-03-01T10:00:00.000Z',
+    updatedAt: '2026-03-01T10:00:00.000Z',
+    materialId: SHEA,
+    materialName: 'Shea butter, refined',
+    supplierLotNumber: 'SB-2231',
+    quantity: 5000,
+    unit: 'g',
+    receivedOn: '2026-03-01',
+    expiresOn: '2099-03-01',
+    unitCost: 0.012,
+    notes: null,
+    stockOnHand: 3250.5,
+    ...overrides,
+  };
+}
+
+const PAGE: LotPage = {
+  items: [
+    lot({}),
+    lot({
+      id: 'l2',
+      materialName: 'Citric acid, fine',
+      supplierLotNumber: 'CA-77',
+      quantity: 2,
+      unit: 'kg',
+      stockOnHand: 2,
+      expiresOn: '2020-01-31',
+      unitCost: null,
+    }),
+  ],
+  total: 2,
+  page: 1,
+  pageSize: 25,
+};
+
+const isLots = (r: { url: string }) => r.url === '/api/lots';
+
+async function openAs(role: Role, url = '/lots') {
+  TestBed.configureTestingModule({
+    providers: [
+      provideZonelessChangeDetection(),
+      provideRouter(
+        [
+          { path: 'lots', component: LotList },
+          { path: 'lots/:id', children: [] },
+        ],
+        withComponentInputBinding(),
+      ),
+      provideHttpClient(withInterceptors([errorInterceptor, authInterceptor])),
+      provideHttpClientTesting(),
+    ],
+  });
+  const backend = TestBed.inject(HttpTestingController);
+  const signingIn = firstValueFrom(
+    TestBed.inject(Session).signIn({ email: 'me@example.com', password: 'x' }),
+  );
+  backend.expectOne('/api/auth/sign-in').flush({
+    accessToken: 'token-1',
+    expiresIn: 900,
+    user: {
+      id: 'u1',
+      name: 'Ada Marsh',
+      email: 'me@example.com',
+      role,
+      workshop: { id: 'w1', name: 'Hollowmere' },
+    },
+  });
+  await signingIn;
+  const harness = await RouterTestingHarness.create();
+  await harness.navigateByUrl(url, LotList);
+  return { harness, backend, loader: TestbedHarnessEnvironment.loader(harness.fixture) };
+}
+
+/** Answers the next lots read, after it is sent, and returns it. */
+async function answerLots(backend: HttpTestingController, page: LotPage = PAGE) {
+  let reqs = backend.match(isLots);
+  for (let i = 0; i < 50 && reqs.length === 0; i++) {
+    await new Promise((resolve) => setTimeout(resolve, 10));
+    reqs = backend.match(isLots);
+  }
+  expect(reqs).toHaveLength(1);
+  reqs[0]!.flush(page);
+  return reqs[0]!;
+}
+
+describe('LotList', () => {
+  beforeEach(() => localStorage.clear());
+
+  it('sends the filter, sort and page from the URL to the server', async () => {
+    const { harness, backend } = await openAs(
+      'formulator',
+      `/lots?q=SB-&materialId=${SHEA}&expiry=30&sort=expiresOn&dir=desc&page=2&pageSize=50`,
+    );
+    const req = backend.expectOne(isLots);
+    // The material filter shows the chosen material's name, read by its id.
+    backend.expectOne(`/api/materials/${SHEA}`).flush(SHEA_MATERIAL);
+    req.flush({ ...PAGE, page: 2, pageSize: 50, total: 52 });
+    await harness.fixture.whenStable();
+
+    const params = req.request.params;
+    expect(params.get('q')).toBe('SB-');
+    expect(params.get('materialId')).toBe(SHEA);
+    expect(params.get('expiresBefore')).toBe(addDays(new Date(), 30));
+    expect(params.get('sort')).toBe('expiresOn');
+    expect(params.get('dir')).toBe('desc');
+    expect(params.get('page')).toBe('2');
+    expect(params.get('pageSize')).toBe('50');
+    const el = harness.routeNativeElement as HTMLElement;
+    const inputs = Array.from(el.querySelectorAll('input')).map((i) => i.value);
+    expect(inputs).toEqual(['SB-', 'Shea butter, refined']);
+    expect(el.querySelector('mat-paginator')!.textContent).toContain('51 – 52 of 52');
+  });
+
+  it('shows received quantity and stock on hand with their units, and flags an expired lot in words', async () => {
+    const { harness, backend, loader } = await openAs('viewer');
+    await answerLots(backend);
+    await harness.fixture.whenStable();
+
+    const table = await loader.getHarness(MatTableHarness);
+    const cells = await table.getCellTextByColumnName();
+    expect(cells['materialName']!.text).toEqual(['Shea butter, refined', 'Citric acid, fine']);
+    expect(cells['quantity']!.text).toEqual(['5,000 g', '2 kg']);
+    expect(cells['stockOnHand']!.text).toEqual(['3,250.5 g', '2 kg']);
+    expect(cells['unitCost']!.text).toEqual(['0.012 / g', '—']);
+    expect(cells['expiresOn']!.text[0]).not.toMatch(/Expire/);
+    expect(cells['expiresOn']!.text[1]).toContain('Expired');
+  });
+
+  it('sorting by a column puts the sort in the URL, which asks the server again', async () => {
+    const { harness, backend, loader } = await openAs('viewer');
+    await answerLots(backend);
+    await harness.fixture.whenStable();
+
+    const sort = await loader.getHarness(MatSortHarness);
+    const [header] = await sort.getSortHeaders({ label: 'Supplier lot' });
+    const clicked = header!.click();
+    const again = await answerLots(backend);
+    expect(again.request.params.get('sort')).toBe('supplierLotNumber');
+    expect(again.request.params.get('dir')).toBe('asc');
+    expect(TestBed.inject(Router).url).toContain('sort=supplierLotNumber');
+    await clicked;
+  });
+
+  it('offers "Record goods-in" to a formulator, and says what to do when there are no lots', async () => {
+    const { harness, backend } = await openAs('formulator');
+    await answerLots(backend, { items: [], total: 0, page: 1, pageSize: 25 });
+    await harness.fixture.whenStable();
+
+    const el = harness.routeNativeElement as HTMLElement;
+    const links = Array.from(el.querySelectorAll('a')).map((a) => a.textContent!.trim());
+    expect(links).toContain('add Record goods-in');
+    expect(el.textContent).toContain('No goods-in recorded yet. When a delivery arrives');
+  });
+
+  it('shows production no write actions', async () => {
+    const { harness, backend } = await openAs('production');
+    await answerLots(backend);
+    await harness.fixture.whenStable();
+
+    const el = harness.routeNativeElement as HTMLElement;
+    expect(el.textContent).not.toContain('Record goods-in');
+    expect(el.querySelector('a[href="/lots/new"]')).toBeNull();
+    // Each lot still opens, read-only.
+    expect(el.querySelector('a[href="/lots/l1"]')).not.toBeNull();
+  });
+});

@@ -1,0 +1,106 @@
+import { DatePipe, DecimalPipe } from '@angular/common';
+import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
+import { MatButton } from '@angular/material/button';
+import { MatDialog } from '@angular/material/dialog';
+import { MatIcon } from '@angular/material/icon';
+import { MatProgressBar } from '@angular/material/progress-bar';
+import { MatSnackBar } from '@angular/material/snack-bar';
+import { Router, RouterLink } from '@angular/router';
+import { type Lot, ROLE_SETS } from '@batchproof/shared';
+import { Session } from '../../auth/session';
+import { DocumentPanel } from '../../documents/document-panel/document-panel';
+import { messageOf } from '../../http/api-error';
+import { LotForm } from '../lot-form/lot-form';
+import { EXPIRY_FLAGS, expiryState } from '../lot-expiry';
+import { LotsApi } from '../lots-api';
+import { DeleteLotDialog, type DeleteLotData } from './delete-lot-dialog';
+
+/**
+ * One lot (`/lots/:id`) or a new delivery (`/lots/new`, optionally `?materialId=…`): the form for
+ * owners and formulators, the recorded details for everyone else, with its stock on hand.
+ */
+@Component({
+  selector: 'bp-lot-page',
+  imports: [
+    DatePipe,
+    DecimalPipe,
+    DocumentPanel,
+    LotForm,
+    MatButton,
+    MatIcon,
+    MatProgressBar,
+    RouterLink,
+  ],
+  templateUrl: './lot-page.html',
+  styleUrl: './lot-page.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export default class LotPage {
+  /** The lot's id from the path; absent on `/lots/new`. */
+  readonly id = input<string>();
+  /** The material a new lot starts with, from the query. */
+  readonly materialId = input<string>();
+
+  private readonly api = inject(LotsApi);
+  private readonly session = inject(Session);
+  private readonly router = inject(Router);
+  private readonly dialog = inject(MatDialog);
+  private readonly snackBar = inject(MatSnackBar);
+
+  /** Whether the signed-in member may record, change and delete lots. */
+  protected readonly canWrite = computed(() => this.session.hasRole(ROLE_SETS.writers));
+  protected readonly lotResource = this.api.lot(this.id);
+  protected readonly lot = computed<Lot | null>(() =>
+    this.lotResource.hasValue() ? this.lotResource.value() : null,
+  );
+  protected readonly loadError = computed(() => {
+    const error = this.lotResource.error();
+    return error ? messageOf(error) : '';
+  });
+  protected readonly expiry = computed(() => {
+    const lot = this.lot();
+    const state = lot ? expiryState(lot.expiresOn, new Date()) : 'none';
+    return state === 'soon' || state === 'expired' ? { state, ...EXPIRY_FLAGS[state] } : null;
+  });
+  /** Whether a delete is on its way to the server. */
+  protected readonly deleting = signal(false);
+  /** Why the last delete failed, shown plainly above the lot. */
+  protected readonly notice = signal('');
+
+  protected onSaved(lot: Lot): void {
+    if (this.id()) {
+      this.lotResource.set(lot);
+    } else {
+      // The lot page is where its documents are attached, so a new lot opens there.
+      void this.router.navigate(['/lots', lot.id], { replaceUrl: true });
+    }
+  }
+
+  protected confirmDelete(lot: Lot): void {
+    this.notice.set('');
+    this.dialog
+      .open<DeleteLotDialog, DeleteLotData, boolean>(DeleteLotDialog, {
+        data: { supplierLotNumber: lot.supplierLotNumber, materialName: lot.materialName },
+        autoFocus: 'dialog',
+      })
+      .afterClosed()
+      .subscribe((confirmed) => {
+        if (confirmed) this.delete(lot);
+      });
+  }
+
+  private delete(lot: Lot): void {
+    this.deleting.set(true);
+    this.api.remove(lot.id).subscribe({
+      next: () => {
+        this.deleting.set(false);
+        this.snackBar.open(`Lot ${lot.supplierLotNumber} is deleted.`, 'OK', { duration: 5000 });
+        void this.router.navigateByUrl('/lots');
+      },
+      error: (err: unknown) => {
+        this.deleting.set(false);
+        this.notice.set(messageOf(err));
+      },
+    });
+  }
+}

@@ -1,0 +1,89 @@
+import { HttpClient, httpResource } from '@angular/common/http';
+import { inject, Injectable } from '@angular/core';
+import { map, type Observable } from 'rxjs';
+import {
+  type Lot,
+  type LotFields,
+  type LotListQuery,
+  lotPageSchema,
+  lotSchema,
+  materialPageSchema,
+  materialSummarySchema,
+} from '@batchproof/shared';
+
+/** How many materials the picker offers at once; typing narrows them. */
+const MATERIAL_OPTIONS = 20;
+
+/** Goods-in: the workshop's lots, and the materials a lot can be of. Reads are resources. */
+@Injectable({ providedIn: 'root' })
+export class LotsApi {
+  private readonly http = inject(HttpClient);
+
+  /** One page of lots with stock on hand, filtered, sorted and paged on the server. */
+  lots(query: () => LotListQuery) {
+    return httpResource(
+      () => {
+        const q = query();
+        const params: Record<string, string | number> = {
+          sort: q.sort,
+          dir: q.dir,
+          page: q.page,
+          pageSize: q.pageSize,
+        };
+        if (q.q) params['q'] = q.q;
+        if (q.materialId) params['materialId'] = q.materialId;
+        if (q.expiresBefore) params['expiresBefore'] = q.expiresBefore;
+        return { url: '/api/lots', params };
+      },
+      { parse: (body) => lotPageSchema.parse(body) },
+    );
+  }
+
+  /** One lot, read while `id` gives one. */
+  lot(id: () => string | undefined) {
+    return httpResource(() => (id() ? `/api/lots/${encodeURIComponent(id()!)}` : undefined), {
+      parse: (body) => lotSchema.parse(body),
+    });
+  }
+
+  /** Materials whose names match `q`, for a picker; nothing is read while `q` is undefined. */
+  materialOptions(q: () => string | undefined) {
+    return httpResource(
+      () => {
+        const text = q();
+        if (text === undefined) return undefined;
+        const params: Record<string, string | number> = {
+          sort: 'tradeName',
+          pageSize: MATERIAL_OPTIONS,
+        };
+        if (text.trim()) params['q'] = text.trim();
+        return { url: '/api/materials', params };
+      },
+      { parse: (body) => materialPageSchema.parse(body).items },
+    );
+  }
+
+  /** One material's identity (name, INCI), read while `id` gives one. */
+  material(id: () => string | undefined) {
+    return httpResource(() => (id() ? `/api/materials/${encodeURIComponent(id()!)}` : undefined), {
+      parse: (body) => materialSummarySchema.parse(body),
+    });
+  }
+
+  /** Records a delivery; answers with the new lot and its stock on hand. */
+  create(input: LotFields): Observable<Lot> {
+    return this.http.post<unknown>('/api/lots', input).pipe(map((body) => lotSchema.parse(body)));
+  }
+
+  /** Replaces a lot's fields. */
+  update(id: string, input: LotFields): Observable<Lot> {
+    return this.http
+      .put<unknown>(`/api/lots/${encodeURIComponent(id)}`, input)
+      .pipe(map((body) => lotSchema.parse(body)));
+  }
+
+  /** Deletes a lot; the API refuses (409) once a batch has drawn from it. */
+  remove(id: string): Observable<void> {
+    return this.http.delete(`/api/lots/${encodeURIComponent(id)}`).pipe(map(() => undefined));
+  }
+}
