@@ -1,66 +1,29 @@
 import { and, eq } from 'drizzle-orm';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { formulaSchema, formulaVersionSchema, versionComparisonSchema } from '@batchproof/shared';
+import { formulaSchema, versionComparisonSchema } from '@batchproof/shared';
 import { auditEvents } from '../../apps/api/src/db/schema';
-import { aDraft, aFormula } from '../../fixtures/builders/formula-builder';
-import {
-  aFragrance,
-  aMaterial,
-  anUltramarineBlend,
-  buildMaterial,
-} from '../../fixtures/builders/material-builder';
-import { buildWorkshop, type BuiltWorkshop } from '../../fixtures/builders/workshop-builder';
-import { startApiHarness, TEST_JWT_SECRET, type ApiHarness } from '../support/api-harness';
+import { aDraft } from '../../fixtures/builders/formula-builder';
+import type { BuiltWorkshop } from '../../fixtures/builders/workshop-builder';
+import type { ApiHarness } from '../support/api-harness';
+import { startFormulaWorkspace, type FormulaMaterials } from '../support/formula-workspace';
 import { bearer } from '../support/auth-header';
 
 let h: ApiHarness;
 let w: BuiltWorkshop;
-const m: Record<'bicarb' | 'citric' | 'blue' | 'scent', string> = {} as never;
+let m: FormulaMaterials;
+let f$: Awaited<ReturnType<typeof startFormulaWorkspace>>;
 beforeAll(async () => {
-  h = await startApiHarness();
-  w = await buildWorkshop(h.handle.db, TEST_JWT_SECRET);
-  const db = h.handle.db;
-  m.bicarb = (await buildMaterial(db, w.id)).id;
-  m.citric = (
-    await buildMaterial(
-      db,
-      w.id,
-      aMaterial({
-        tradeName: 'Citric',
-        inci: 'Citric Acid',
-        category: 'acid',
-        functions: ['pH adjuster'],
-      }),
-    )
-  ).id;
-  m.blue = (await buildMaterial(db, w.id, anUltramarineBlend())).id;
-  m.scent = (await buildMaterial(db, w.id, aFragrance())).id;
+  f$ = await startFormulaWorkspace();
+  ({ h, w, m } = f$);
 });
 afterAll(() => h.close());
 
-const base = () => [
-  { materialId: m.bicarb, grams: 200 },
-  { materialId: m.citric, grams: 100 },
-];
-async function createFormula(lines = base()) {
-  const res = await request(h.app)
-    .post('/api/formulas')
-    .set(bearer(w.members.formulator))
-    .send(aFormula(lines));
-  expect(res.status).toBe(201);
-  return formulaSchema.parse(res.body);
-}
-const versionUrl = (id: string, n: number) => `/api/formulas/${id}/versions/${n}`;
-const getVersion = async (id: string, n: number) =>
-  formulaVersionSchema.parse(
-    (await request(h.app).get(versionUrl(id, n)).set(bearer(w.members.viewer))).body,
-  );
-const release = (id: string, n: number, who = w.members.formulator, body: object = {}) =>
-  request(h.app)
-    .post(`${versionUrl(id, n)}/release`)
-    .set(bearer(who))
-    .send(body);
+const base = () => f$.base();
+const createFormula = (lines = base()) => f$.createFormula(lines);
+const versionUrl = (id: string, n: number) => f$.versionUrl(id, n);
+const getVersion = (id: string, n: number) => f$.getVersion(id, n);
+const release = (...args: Parameters<typeof f$.release>) => f$.release(...args);
 
 describe('the release rule', () => {
   it('releases a version without blocking findings', async () => {

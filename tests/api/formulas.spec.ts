@@ -1,69 +1,28 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import {
-  formulaPageSchema,
-  formulaSchema,
-  formulaVersionSchema,
-  scaledVersionSchema,
-} from '@batchproof/shared';
+import { formulaPageSchema, formulaVersionSchema, scaledVersionSchema } from '@batchproof/shared';
 import { aDraft, aFormula } from '../../fixtures/builders/formula-builder';
-import {
-  aFragrance,
-  aMaterial,
-  anUltramarineBlend,
-  buildMaterial,
-} from '../../fixtures/builders/material-builder';
+import { buildMaterial } from '../../fixtures/builders/material-builder';
 import { buildWorkshop, type BuiltWorkshop } from '../../fixtures/builders/workshop-builder';
-import { startApiHarness, TEST_JWT_SECRET, type ApiHarness } from '../support/api-harness';
+import { TEST_JWT_SECRET, type ApiHarness } from '../support/api-harness';
+import { startFormulaWorkspace, type FormulaMaterials } from '../support/formula-workspace';
 import { bearer } from '../support/auth-header';
 
 let h: ApiHarness;
 let w: BuiltWorkshop;
-const m: Record<'bicarb' | 'citric' | 'blue' | 'scent', string> = {} as never;
+let m: FormulaMaterials;
+let f$: Awaited<ReturnType<typeof startFormulaWorkspace>>;
 beforeAll(async () => {
-  h = await startApiHarness();
-  w = await buildWorkshop(h.handle.db, TEST_JWT_SECRET);
-  const db = h.handle.db;
-  m.bicarb = (await buildMaterial(db, w.id)).id;
-  m.citric = (
-    await buildMaterial(
-      db,
-      w.id,
-      aMaterial({
-        tradeName: 'Citric',
-        inci: 'Citric Acid',
-        category: 'acid',
-        functions: ['pH adjuster'],
-      }),
-    )
-  ).id;
-  m.blue = (await buildMaterial(db, w.id, anUltramarineBlend())).id;
-  m.scent = (await buildMaterial(db, w.id, aFragrance())).id;
+  f$ = await startFormulaWorkspace();
+  ({ h, w, m } = f$);
 });
 afterAll(() => h.close());
 
-const base = () => [
-  { materialId: m.bicarb, grams: 200 },
-  { materialId: m.citric, grams: 100 },
-];
-async function createFormula(lines = base()) {
-  const res = await request(h.app)
-    .post('/api/formulas')
-    .set(bearer(w.members.formulator))
-    .send(aFormula(lines));
-  expect(res.status).toBe(201);
-  return formulaSchema.parse(res.body);
-}
-const versionUrl = (id: string, n: number) => `/api/formulas/${id}/versions/${n}`;
-const getVersion = async (id: string, n: number) =>
-  formulaVersionSchema.parse(
-    (await request(h.app).get(versionUrl(id, n)).set(bearer(w.members.viewer))).body,
-  );
-const release = (id: string, n: number, who = w.members.formulator, body: object = {}) =>
-  request(h.app)
-    .post(`${versionUrl(id, n)}/release`)
-    .set(bearer(who))
-    .send(body);
+const base = () => f$.base();
+const createFormula = (lines = base()) => f$.createFormula(lines);
+const versionUrl = (id: string, n: number) => f$.versionUrl(id, n);
+const getVersion = (id: string, n: number) => f$.getVersion(id, n);
+const release = (...args: Parameters<typeof f$.release>) => f$.release(...args);
 
 describe('POST /api/formulas', () => {
   it('creates the formula with draft version 1, evaluated on the server', async () => {
@@ -251,6 +210,23 @@ describe('GET and PATCH /api/formulas', () => {
       ['Lime Fizzer', 1, 'draft', null],
       ['Rose Fizzer', 1, 'draft', null],
     ]);
+  });
+
+  it("lists each formula with its latest version's findings by severity, as the version reports them", async () => {
+    const ws = await buildWorkshop(h.handle.db, TEST_JWT_SECRET, { roles: ['owner'] });
+    const bicarb = await buildMaterial(h.handle.db, ws.id);
+    const created = await request(h.app)
+      .post('/api/formulas')
+      .set(bearer(ws.members.owner))
+      .send(aFormula([{ materialId: bicarb.id, grams: 100 }], { name: 'Counted Fizzer' }));
+    const version = await request(h.app)
+      .get(versionUrl(created.body.id, 1))
+      .set(bearer(ws.members.owner));
+    const page = formulaPageSchema.parse(
+      (await request(h.app).get('/api/formulas').set(bearer(ws.members.owner))).body,
+    );
+    expect(version.body.counts).not.toBeNull();
+    expect(page.items[0]!.latestCounts).toEqual(version.body.counts);
   });
 
   it('renames a formula; a malformed version number is 404', async () => {

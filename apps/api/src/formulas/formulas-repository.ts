@@ -30,6 +30,11 @@ const latestState = sql<
 const releasedNumber = sql<
   number | null
 >`(select ${formulaVersions.number} from ${formulaVersions} where ${formulaVersions.formulaId} = ${outerFormulaId} and ${formulaVersions.state} = 'released')`;
+const latestCounts = sql<{
+  block: number;
+  warn: number;
+  info: number;
+} | null>`(select case when ${formulaVersions.blockCount} is null then null else json_build_object('block', ${formulaVersions.blockCount}, 'warn', coalesce(${formulaVersions.warnCount}, 0), 'info', coalesce(${formulaVersions.infoCount}, 0)) end from ${formulaVersions} where ${formulaVersions.formulaId} = ${outerFormulaId} order by ${formulaVersions.number} desc limit 1)`;
 const sortColumns = {
   name: formulas.name,
   productType: formulas.productType,
@@ -54,6 +59,7 @@ export async function pageFormulas(db: Database, workshopId: string, q: FormulaL
         latestVersion: latestNumber,
         latestState: latestState.mapWith(String),
         releasedVersion: releasedNumber,
+        latestCounts,
       })
       .from(formulas)
       .where(where)

@@ -231,6 +231,8 @@ export const formulaListItemSchema = z.object({
   latestVersion: z.number().int().nullable(),
   latestState: versionStateSchema.nullable(),
   releasedVersion: z.number().int().nullable(),
+  /** The latest version's findings by severity; null before its first evaluation. */
+  latestCounts: evaluationCountsSchema.nullable(),
 });
 export const formulaListQuerySchema = listQuerySchema(
   ['name', 'productType', 'createdAt', 'updatedAt'],
