@@ -59,4 +59,15 @@ describe('HomePage', () => {
       'Invite the people you work with',
     );
   });
+
+  it('links writers to materials, lots and formulas, and everyone else to reading formulas', async () => {
+    const formulator = await openHomeAs('formulator');
+    const links = (el: HTMLElement) =>
+      Array.from(el.querySelectorAll('.next a')).map((a) => a.getAttribute('href'));
+    expect(links(formulator)).toEqual(['/materials', '/lots', '/formulas', '/reference']);
+    TestBed.resetTestingModule();
+    expect(links(await openHomeAs('production'))).toEqual(['/formulas', '/reference']);
+    TestBed.resetTestingModule();
+    expect(links(await openHomeAs('assessor'))).toEqual(['/reference']);
+  });
 });

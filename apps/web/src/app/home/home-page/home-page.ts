@@ -4,12 +4,12 @@ import { RouterLink } from '@angular/router';
 import { ROLE_DESCRIPTIONS, ROLE_SETS } from '@batchproof/shared';
 import { Session } from '../../auth/session';
 
-/** A first step on the home page; steps without a link are not built yet. */
+/** A first step on the home page. */
 interface NextStep {
   icon: string;
   title: string;
   detail: string;
-  link?: string;
+  link: string;
 }
 
 /** The home view: which workshop, which role, and what to do next. */
@@ -39,18 +39,42 @@ export default class HomePage {
         link: '/workshop',
       });
     }
-    steps.push(
-      {
-        icon: 'inventory_2',
-        title: 'Add your materials and their supplier papers',
-        detail: 'Coming soon: INCI names, lots and certificates kept together.',
-      },
-      {
+    if (this.session.hasRole(ROLE_SETS.writers)) {
+      steps.push(
+        {
+          icon: 'inventory_2',
+          title: 'Add your materials and their supplier papers',
+          detail:
+            'INCI names, blends, certificate maximums and allergen declarations, kept together.',
+          link: '/materials',
+        },
+        {
+          icon: 'move_to_inbox',
+          title: 'Record what arrives',
+          detail: 'Each supplier lot with its dates, quantity and certificate of analysis.',
+          link: '/lots',
+        },
+        {
+          icon: 'science',
+          title: 'Write your first formula',
+          detail: 'By weight or percent, checked live for each market you sell in.',
+          link: '/formulas',
+        },
+      );
+    } else if (this.session.hasRole(ROLE_SETS.members)) {
+      steps.push({
         icon: 'science',
-        title: 'Write your first formula',
-        detail: 'Coming soon: formulas by weight, checked for each market you sell in.',
-      },
-    );
+        title: 'Look through the formulas',
+        detail: 'Released versions with their declarations and the findings of each check.',
+        link: '/formulas',
+      });
+    }
+    steps.push({
+      icon: 'menu_book',
+      title: 'See what the checks rest on',
+      detail: 'The colourant, allergen and warning lists, each row with its published source.',
+      link: '/reference',
+    });
     return steps;
   });
 }
