@@ -20,9 +20,11 @@ export async function createMaterial(
 
 /** Adds a line in the editor: picks the material by typing part of its name, then its grams. */
 export async function addLine(page: Page, search: string, option: string, grams: string) {
+  // Count the lines before adding one: counting after the click can run before the new line
+  // renders, and then the previous line would be overwritten.
+  const lines = page.getByRole('list', { name: 'Formula lines' }).locator(':scope > li.line');
+  const n = (await lines.count()) + 1;
   await page.getByRole('button', { name: 'Add line', exact: true }).click();
-  const lines = page.getByRole('list', { name: 'Formula lines' }).locator(':scope > li');
-  const n = await lines.count();
   const material = page.getByRole('combobox', { name: `Material, line ${n}`, exact: true });
   await material.fill(search);
   await page.getByRole('option', { name: new RegExp(option) }).click();

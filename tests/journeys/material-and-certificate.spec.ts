@@ -34,7 +34,7 @@ describe('journey: a formulator records a fragrance oil and files its certificat
     await signUpWorkshop(page, h.baseUrl, owner);
 
     // The materials list starts empty and says what to do.
-    await page.getByRole('link', { name: 'Materials' }).click();
+    await page.getByRole('link', { name: 'Materials', exact: true }).click();
     await page.waitForURL('**/materials');
     await page.getByText('No materials yet.').waitFor();
     await h.screenshot(page, 'material-01-materials-empty');

@@ -240,6 +240,8 @@ export const formulaListQuerySchema = listQuerySchema(
 ).extend({ productType: productTypeSchema.optional() });
 export type FormulaListQuery = z.output<typeof formulaListQuerySchema>;
 export const formulaPageSchema = pageSchema(formulaListItemSchema);
+/** One page of the formulas list. */
+export type FormulaPage = z.infer<typeof formulaPageSchema>;
 
 /** Query of the compare route. */
 export const compareQuerySchema = z.object({

@@ -1,13 +1,11 @@
 import { HttpClient, httpResource } from '@angular/common/http';
 import { inject, Injectable, type Signal } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
-import type { z } from 'zod';
 import { forkJoin, map, type Observable, of, shareReplay } from 'rxjs';
 import {
-  evaluationCountsSchema,
+  formulaPageSchema,
   type Formula,
   type FormulaCreate,
-  formulaListItemSchema,
   type FormulaListQuery,
   formulaSchema,
   type FormulaUpdate,
@@ -17,24 +15,12 @@ import {
   type Material,
   materialPageSchema,
   materialSchema,
-  pageSchema,
   type ReleaseRequest,
   type ScaleRequest,
   scaledVersionSchema,
   type ScaledVersion,
   versionComparisonSchema,
 } from '@batchproof/shared';
-
-/**
- * A formula row as the list shows it. `latestCounts` (the latest version's findings by severity)
- * is not in the shared list contract yet; it is read when the API sends it and left out otherwise.
- */
-export const formulaRowSchema = formulaListItemSchema.extend({
-  latestCounts: evaluationCountsSchema.nullish(),
-});
-const formulaRowPageSchema = pageSchema(formulaRowSchema);
-/** One page of formula rows. */
-export type FormulaRowPage = z.infer<typeof formulaRowPageSchema>;
 
 const enc = encodeURIComponent;
 const formulaUrl = (id: string) => `/api/formulas/${enc(id)}`;
@@ -62,7 +48,7 @@ export class FormulasApi {
         if (q.productType) params['productType'] = q.productType;
         return { url: '/api/formulas', params };
       },
-      { parse: (body) => formulaRowPageSchema.parse(body) },
+      { parse: (body) => formulaPageSchema.parse(body) },
     );
   }
 

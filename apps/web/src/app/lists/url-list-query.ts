@@ -18,6 +18,19 @@ interface ListQueryShape {
 
 type ParamValue = string | number | null;
 
+/** The URL's query parameters as text, a missing or empty one as undefined. */
+export type UrlParams = Record<string, string | undefined>;
+
+/** How a list reads its URL when the parameters are not the query's fields one to one. */
+export interface UrlListQueryOptions {
+  /**
+   * Turns the URL's parameters into the object the schema parses: for a parameter the URL names
+   * differently from the query (a filter word the page turns into a date), or a default that
+   * depends on another parameter. When the result does not parse, the schema's defaults apply.
+   */
+  fromUrl?: (params: UrlParams) => Record<string, unknown>;
+}
+
 /**
  * The state of a table that sorts, filters and pages on the server, kept in the URL's query
  * parameters so it survives reloads and can be shared. Call in a component's field initialiser.
@@ -26,15 +39,21 @@ type ParamValue = string | number | null;
  * missing or wrong); `filterText` is what the filter box shows, and the URL follows it after a
  * short pause in typing.
  */
-export function injectUrlListQuery<T extends ListQueryShape>(schema: z.ZodType<T>) {
+export function injectUrlListQuery<T extends ListQueryShape>(
+  schema: z.ZodType<T>,
+  options: UrlListQueryOptions = {},
+) {
   const route = inject(ActivatedRoute);
   const router = inject(Router);
-  const params = toSignal(route.queryParamMap, { requireSync: true });
+  const paramMap = toSignal(route.queryParamMap, { requireSync: true });
 
+  const params = computed<UrlParams>(() => {
+    const map = paramMap();
+    return Object.fromEntries(map.keys.map((k) => [k, map.get(k) || undefined]));
+  });
   const query = computed(() => {
-    const map = params();
-    const raw = Object.fromEntries(map.keys.map((k) => [k, map.get(k) || undefined]));
-    const parsed = schema.safeParse(raw);
+    const raw = params();
+    const parsed = schema.safeParse(options.fromUrl ? options.fromUrl(raw) : raw);
     return parsed.success ? parsed.data : schema.parse({});
   });
 
@@ -58,11 +77,21 @@ export function injectUrlListQuery<T extends ListQueryShape>(schema: z.ZodType<T
 
   return {
     query,
+    /** The URL's query parameters as they stand, before parsing. */
+    params,
     filterText,
     navigate,
     /** Sets one filter (or clears it with an empty value) and goes back to the first page. */
     filterBy(key: string, value: ParamValue | undefined) {
       navigate({ [key]: value === '' || value === undefined ? null : value, page: null });
+    },
+    /**
+     * Clears the named filters and goes back to the first page. Clearing `q` empties the filter
+     * box at once, so text still waiting for the pause in typing cannot bring it back.
+     */
+    clearFilters(keys: readonly string[]) {
+      if (keys.includes('q')) filterText.set('');
+      navigate({ ...Object.fromEntries(keys.map((k) => [k, null])), page: null });
     },
     /** Follows a `matSortChange`; no direction means the list's default order. */
     sortBy(sort: Sort) {

@@ -5,7 +5,7 @@ import { MatInputHarness } from '@angular/material/input/testing';
 import { MatTableHarness } from '@angular/material/table/testing';
 import { Router } from '@angular/router';
 import type { Role } from '@batchproof/shared';
-import type { FormulaRowPage } from '../formulas-api';
+import type { FormulaPage } from '@batchproof/shared';
 import { aFormula, aVersion, FORMULA_ID, nextRequest, openAs } from '../formulas-testing';
 import FormulaListPage from './formula-list-page';
 
@@ -17,7 +17,7 @@ const ROUTES = [
   { path: 'formulas/:id', component: EditorStub },
 ];
 
-const PAGE: FormulaRowPage = {
+const PAGE: FormulaPage = {
   items: [
     {
       id: FORMULA_ID,
@@ -34,7 +34,7 @@ const PAGE: FormulaRowPage = {
   page: 1,
   pageSize: 25,
 };
-const EMPTY: FormulaRowPage = { items: [], total: 0, page: 1, pageSize: 25 };
+const EMPTY: FormulaPage = { items: [], total: 0, page: 1, pageSize: 25 };
 
 async function openList(role: Role, url = '/formulas', answer = PAGE) {
   const page = await openAs(role, ROUTES, url, FormulaListPage);

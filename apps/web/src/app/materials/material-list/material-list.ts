@@ -1,29 +1,16 @@
-import {
-  ChangeDetectionStrategy,
-  Component,
-  computed,
-  DestroyRef,
-  inject,
-  input,
-  linkedSignal,
-  signal,
-} from '@angular/core';
-import { takeUntilDestroyed, toObservable } from '@angular/core/rxjs-interop';
+import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { MatAnchor, MatButton } from '@angular/material/button';
 import { MatFormField, MatLabel, MatPrefix } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
-import { MatPaginator, type PageEvent } from '@angular/material/paginator';
-import { MatProgressBar } from '@angular/material/progress-bar';
+import { MatPaginator } from '@angular/material/paginator';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { MatSnackBar } from '@angular/material/snack-bar';
-import { MatSort, MatSortHeader, type Sort } from '@angular/material/sort';
+import { MatSort, MatSortHeader } from '@angular/material/sort';
 import { MatTableModule } from '@angular/material/table';
-import { ActivatedRoute, Router, RouterLink } from '@angular/router';
-import { debounceTime, distinctUntilChanged, skip } from 'rxjs';
+import { RouterLink } from '@angular/router';
 import {
   materialListQuerySchema,
-  type MaterialPage,
   type MaterialImportResult,
   type MaterialSummary,
   ROLE_SETS,
@@ -31,6 +18,8 @@ import {
 import { Session } from '../../auth/session';
 import { saveFile } from '../../documents/save-file';
 import { messageOf } from '../../http/api-error';
+import { ListCard } from '../../lists/list-card';
+import { injectUrlListQuery, keepLastValue } from '../../lists/url-list-query';
 import { MaterialImport } from '../material-import/material-import';
 import { CATEGORY_LABELS, CATEGORY_OPTIONS } from '../material-labels';
 import { MaterialsApi } from '../materials-api';
@@ -51,12 +40,12 @@ import { MaterialsApi } from '../materials-api';
     MatOption,
     MatPaginator,
     MatPrefix,
-    MatProgressBar,
     MatSelect,
     MatSort,
     MatSortHeader,
     MatTableModule,
     RouterLink,
+    ListCard,
     MaterialImport,
   ],
   templateUrl: './material-list.html',
@@ -64,18 +53,7 @@ import { MaterialsApi } from '../materials-api';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export default class MaterialList {
-  readonly q = input<string>();
-  readonly category = input<string>();
-  /** Only the materials of this supplier (from a supplier's page). */
-  readonly supplierId = input<string>();
-  readonly sort = input<string>();
-  readonly dir = input<string>();
-  readonly page = input<string>();
-  readonly pageSize = input<string>();
-
   private readonly api = inject(MaterialsApi);
-  private readonly router = inject(Router);
-  private readonly route = inject(ActivatedRoute);
   private readonly snackBar = inject(MatSnackBar);
   private readonly session = inject(Session);
 
@@ -91,75 +69,20 @@ export default class MaterialList {
     'updatedAt',
   ];
 
-  protected readonly query = computed(() => {
-    const parsed = materialListQuerySchema.safeParse({
-      q: this.q(),
-      category: this.category() || undefined,
-      supplierId: this.supplierId() || undefined,
-      sort: this.sort(),
-      dir: this.dir(),
-      page: this.page(),
-      pageSize: this.pageSize(),
-    });
-    return parsed.success ? parsed.data : materialListQuerySchema.parse({});
-  });
+  /** The URL's filter, sort and page; `supplierId` comes from a supplier's page. */
+  protected readonly list = injectUrlListQuery(materialListQuerySchema);
+  protected readonly query = this.list.query;
   protected readonly result = this.api.page(this.query);
-  /** The last page loaded, kept while the next loads so the table does not flicker. */
-  protected readonly pageData = linkedSignal<MaterialPage | undefined, MaterialPage | undefined>({
-    source: () => (this.result.hasValue() ? this.result.value() : undefined),
-    computation: (value, previous) => value ?? previous?.value,
-  });
+  protected readonly pageData = keepLastValue(this.result);
   /** Whether the list is filtered, so an empty table can say why. */
   protected readonly filtered = computed(
     () => !!this.query().q || !!this.query().category || !!this.query().supplierId,
   );
-  protected readonly loadError = computed(() => {
-    const error = this.result.error();
-    return error ? messageOf(error) : '';
-  });
-  /** What the filter box shows; the URL follows it after a short pause in typing. */
-  protected readonly filterText = linkedSignal(() => this.query().q);
   protected readonly importing = signal(false);
   protected readonly exporting = signal(false);
 
-  constructor() {
-    toObservable(this.filterText)
-      .pipe(
-        skip(1),
-        debounceTime(300),
-        distinctUntilChanged(),
-        takeUntilDestroyed(inject(DestroyRef)),
-      )
-      .subscribe((q) => this.navigate({ q: q || null, page: null }));
-  }
-
   protected categoryLabel(m: MaterialSummary): string {
     return CATEGORY_LABELS[m.category];
-  }
-
-  protected sortBy(sort: Sort): void {
-    this.navigate({
-      sort: sort.direction ? sort.active : null,
-      dir: sort.direction || null,
-      page: null,
-    });
-  }
-
-  protected filterCategory(category: string): void {
-    this.navigate({ category: category || null, page: null });
-  }
-
-  protected clearFilters(): void {
-    this.filterText.set('');
-    this.navigate({ q: null, category: null, supplierId: null, page: null });
-  }
-
-  protected clearSupplier(): void {
-    this.navigate({ supplierId: null, page: null });
-  }
-
-  protected changePage(event: PageEvent): void {
-    this.navigate({ page: event.pageIndex + 1, pageSize: event.pageSize });
   }
 
   protected exportCsv(): void {
@@ -181,14 +104,5 @@ export default class MaterialList {
     this.importing.set(false);
     this.snackBar.open(`Imported ${result.imported} material(s).`, 'OK', { duration: 5000 });
     this.result.reload();
-  }
-
-  private navigate(queryParams: Record<string, string | number | null>): void {
-    void this.router.navigate([], {
-      relativeTo: this.route,
-      queryParams,
-      queryParamsHandling: 'merge',
-      replaceUrl: true,
-    });
   }
 }
