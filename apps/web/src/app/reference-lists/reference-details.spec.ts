@@ -15,4 +15,17 @@ describe('referenceDetails', () => {
       { label: 'Certified batches', value: 'no' },
     ]);
   });
+
+  it("puts a US listing's permitted uses and an EU field of application in words", () => {
+    // 21 CFR 73.2725: ultramarines, externally applied cosmetics (including the eye area)
+    const us = referenceDetails({
+      uses: { generally: false, eyeArea: true, externallyApplied: true },
+    });
+    expect(us).toEqual([{ label: 'Permitted', value: 'externally applied only; eye area' }]);
+    const eu = referenceDetails({ field: 'rinse-off-only', maxPercent: 0.5 });
+    expect(eu).toEqual([
+      { label: 'Field of application', value: 'rinse-off products only' },
+      { label: 'Maximum %', value: '0.5' },
+    ]);
+  });
 });

@@ -10,7 +10,33 @@ const DETAIL_KEYS: [key: string, label: string][] = [
   ['text', 'Text'],
   ['certificationRequired', 'Certified batches'],
   ['maxPercent', 'Maximum %'],
+  ['conditions', 'Conditions'],
 ];
+
+/** EU Annex IV fields of application, in words. */
+const FIELDS: Record<string, string> = {
+  all: 'all products',
+  'not-eye': 'not eye products',
+  'not-mucous-membranes': 'not on mucous membranes',
+  'rinse-off-only': 'rinse-off products only',
+};
+
+/** A US listing's permitted uses, in words. */
+function usesInWords(uses: unknown): string {
+  if (!uses || typeof uses !== 'object') return '';
+  const u = uses as Record<string, unknown>;
+  const words: string[] = [];
+  if (u['generally']) words.push('cosmetics generally');
+  else if (u['externallyApplied']) words.push('externally applied only');
+  if (u['eyeArea']) words.push('eye area');
+  if (typeof u['lipProductsMaxPercent'] === 'number') {
+    words.push(`lip products up to ${u['lipProductsMaxPercent']} %`);
+  }
+  if (Array.isArray(u['restrictedTo']) && u['restrictedTo'].length) {
+    words.push(`only ${u['restrictedTo'].join(', ')}`);
+  }
+  return words.join('; ');
+}
 
 function show(value: unknown): string {
   if (value === null || value === undefined || value === '') return '';
@@ -24,8 +50,11 @@ function show(value: unknown): string {
 export function referenceDetails(
   data: Record<string, unknown>,
 ): { label: string; value: string }[] {
-  return DETAIL_KEYS.flatMap(([key, label]) => {
-    const value = show(data[key]);
+  const details = DETAIL_KEYS.flatMap(([key, label]) => {
+    const value =
+      key === 'field' ? (FIELDS[String(data[key])] ?? show(data[key])) : show(data[key]);
     return value ? [{ label, value }] : [];
   });
+  const uses = usesInWords(data['uses']);
+  return uses ? [...details, { label: 'Permitted', value: uses }] : details;
 }
