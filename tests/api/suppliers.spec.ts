@@ -55,7 +55,7 @@ describe('POST /api/suppliers', () => {
 describe('GET /api/suppliers', () => {
   it('filters by name, sorts and pages on the server', async () => {
     const ws = await buildWorkshop(h.handle.db, TEST_JWT_SECRET, { roles: ['viewer'] });
-    for (const name of ['Bramble Oils', 'Alder Chemicals', 'Cobble Clays', 'Alder Micas']) {
+    for (const name of ['Birchwick Oils', 'Alder Chemicals', 'Cobble Clays', 'Alder Micas']) {
       await buildSupplier(h.handle.db, ws.id, { name });
     }
     const minerals = await buildSupplier(h.handle.db, ws.id, { name: 'Alder Minerals' });
@@ -70,7 +70,7 @@ describe('GET /api/suppliers', () => {
     ]);
     expect(filtered.total).toBe(3);
     const page2 = supplierPageSchema.parse((await get('sort=name&page=2&pageSize=3')).body);
-    expect(page2.items.map((s) => s.name)).toEqual(['Bramble Oils', 'Cobble Clays']);
+    expect(page2.items.map((s) => s.name)).toEqual(['Birchwick Oils', 'Cobble Clays']);
     expect(page2).toMatchObject({ total: 5, page: 2, pageSize: 3 });
   });
 
