@@ -1,7 +1,7 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { lotPageSchema, lotSchema } from '@batchproof/shared';
-import { aMaterial, buildMaterial } from '../../fixtures/builders/material-builder';
+import { aMaterial, buildMaterial, buildSupplier } from '../../fixtures/builders/material-builder';
 import { aLot, buildLot, consumeFromLot } from '../../fixtures/builders/lot-builder';
 import { buildWorkshop, type BuiltWorkshop } from '../../fixtures/builders/workshop-builder';
 import { startApiHarness, TEST_JWT_SECRET, type ApiHarness } from '../support/api-harness';
@@ -26,6 +26,15 @@ describe('POST /api/lots', () => {
     expect(res.status).toBe(201);
     const lot = lotSchema.parse(res.body);
     expect(lot).toMatchObject({ quantity: 12.5, unit: 'kg', unitCost: 2.75, stockOnHand: 12.5 });
+  });
+
+  it("names the material's supplier, or null when none is recorded", async () => {
+    const supplier = await buildSupplier(h.handle.db, w.id, { name: 'Quillmoor Salts' });
+    const supplied = await buildMaterial(h.handle.db, w.id, aMaterial({ supplierId: supplier.id }));
+    const withSupplier = lotSchema.parse((await post(aLot(supplied.id))).body);
+    const without = lotSchema.parse((await post(aLot(materialId))).body);
+    expect(withSupplier.supplierName).toBe('Quillmoor Salts');
+    expect(without.supplierName).toBeNull();
   });
 
   it('when the expiry is before the day received, responds 400 with fieldErrors.expiresOn', async () => {

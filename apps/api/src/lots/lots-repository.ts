@@ -2,16 +2,22 @@ import { and, count, eq, lte, sql, type SQL } from 'drizzle-orm';
 import type { LotFields, LotListQuery } from '@batchproof/shared';
 import { containsPattern, listOrder, pageWindow } from '../core/list-paging';
 import type { Database } from '../db/database';
-import { lotConsumptions, lots, materials } from '../db/schema';
+import { lotConsumptions, lots, materials, suppliers } from '../db/schema';
 
 // Computed per returned row only: PostgreSQL evaluates select-list subqueries after LIMIT. The
 // outer id is spelled out so the subquery can never bind it to its own table's id.
 const stockOnHand = sql<number>`(${lots.quantity} - coalesce((select sum(${lotConsumptions.quantity}) from ${lotConsumptions} where ${lotConsumptions.lotId} = ${sql.raw('"lots"."id"')}), 0))::float8`;
 
+// The material's supplier, looked up per returned row like stock on hand (no join to page over).
+const supplierName = sql<
+  string | null
+>`(select ${suppliers.name} from ${suppliers} where ${suppliers.id} = ${sql.raw('"materials"."supplier_id"')})`;
+
 const columns = {
   id: lots.id,
   materialId: lots.materialId,
   materialName: materials.tradeName,
+  supplierName,
   supplierLotNumber: lots.supplierLotNumber,
   quantity: lots.quantity,
   unit: lots.unit,

@@ -53,6 +53,8 @@ export const lotSchema = z.object({
   ...storedRecordFields,
   materialId: z.string(),
   materialName: z.string(),
+  /** The material's supplier, when one is recorded. */
+  supplierName: z.string().nullable(),
   supplierLotNumber: z.string(),
   quantity: z.number(),
   unit: lotUnitSchema,

@@ -37,6 +37,7 @@ function lot(overrides: Partial<Lot>): Lot {
     updatedAt: '2026-03-01T10:00:00.000Z',
     materialId: SHEA,
     materialName: 'Shea butter, refined',
+    supplierName: 'Larkfield Supplies',
     supplierLotNumber: 'SB-2231',
     quantity: 5000,
     unit: 'g',
@@ -55,6 +56,7 @@ const PAGE: LotPage = {
     lot({
       id: 'l2',
       materialName: 'Citric acid, fine',
+      supplierName: null,
       supplierLotNumber: 'CA-77',
       quantity: 2,
       unit: 'kg',
@@ -154,6 +156,7 @@ describe('LotList', () => {
     const table = await loader.getHarness(MatTableHarness);
     const cells = await table.getCellTextByColumnName();
     expect(cells['materialName']!.text).toEqual(['Shea butter, refined', 'Citric acid, fine']);
+    expect(cells['supplierName']!.text).toEqual(['Larkfield Supplies', 'not recorded']);
     expect(cells['quantity']!.text).toEqual(['5,000 g', '2 kg']);
     expect(cells['stockOnHand']!.text).toEqual(['3,250.5 g', '2 kg']);
     expect(cells['unitCost']!.text).toEqual(['0.012 / g', '—']);

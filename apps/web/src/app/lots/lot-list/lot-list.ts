@@ -55,6 +55,7 @@ export default class LotList {
   protected readonly flags = EXPIRY_FLAGS;
   protected readonly columns = [
     'materialName',
+    'supplierName',
     'supplierLotNumber',
     'receivedOn',
     'expiresOn',

@@ -45,6 +45,7 @@ const LOT: Lot = {
   updatedAt: '2026-03-01T10:00:00.000Z',
   materialId: SHEA,
   materialName: 'Shea butter, refined',
+  supplierName: 'Larkfield Supplies',
   supplierLotNumber: 'SB-2231',
   quantity: 5000,
   unit: 'g',
