@@ -18,18 +18,17 @@ async function createMaterial(
   return ((await res.json()) as { id: string }).id;
 }
 
-/** The text of each cell of the lots table, row by row. */
-async function lotRows(page: Page): Promise<string[][]> {
-  return page
-    .getByRole('table', { name: 'Lots' })
-    .locator('tbody tr')
-    .evaluateAll((rows) =>
-      rows.map((row) =>
-        Array.from(row.querySelectorAll('td')).map((td) =>
-          (td.textContent ?? '').replace(/\s+/g, ' ').trim(),
-        ),
+/** The text of each cell of the lots table, row by row, keyed by its column's heading. */
+async function lotRows(page: Page): Promise<Record<string, string>[]> {
+  return page.getByRole('table', { name: 'Lots' }).evaluate((table) => {
+    const text = (el: Element) => (el.textContent ?? '').replace(/\s+/g, ' ').trim();
+    const headings = Array.from(table.querySelectorAll('thead th')).map(text);
+    return Array.from(table.querySelectorAll('tbody tr')).map((row) =>
+      Object.fromEntries(
+        Array.from(row.querySelectorAll('td')).map((td, i) => [headings[i] ?? String(i), text(td)]),
       ),
     );
+  });
 }
 
 describe('journey: goods-in', () => {
@@ -136,17 +135,19 @@ describe('journey: goods-in', () => {
     await page.waitForURL('**/lots');
     await page.getByRole('table', { name: 'Lots' }).getByText('CA-77').waitFor();
     const rows = await lotRows(page);
-    expect(rows.map((r) => [r[0], r[1], r[5]])).toEqual([
+    expect(rows.map((r) => [r['Material'], r['Supplier lot'], r['Stock on hand']])).toEqual([
       ['Shea butter, refined', 'SB-2231', '5,000 g'],
       ['Citric acid, fine', 'CA-77', '2 kg'],
     ]);
-    expect(rows[1]![3]).toContain('Expired');
+    expect(rows[1]!['Expiry']).toContain('Expired');
     await h.screenshot(page, 'goods-in-04-lots-list');
 
     // Filtering by lot number goes through the URL to the server.
     await page.getByLabel('Filter by lot number or material').fill('SB-');
     await page.waitForURL('**/lots?q=SB-');
-    await expect.poll(() => lotRows(page).then((r) => r.map((row) => row[1]))).toEqual(['SB-2231']);
+    await expect
+      .poll(() => lotRows(page).then((r) => r.map((row) => row['Supplier lot'])))
+      .toEqual(['SB-2231']);
     await h.screenshot(page, 'goods-in-05-lots-filtered');
 
     // Filtering for expired lots finds none of these, and says how to see them all.
