@@ -40,24 +40,3 @@ export function marketFindings(page: Page, title: string): Locator {
 export function declaration(page: Page, market: string): Locator {
   return page.locator(`.declarations [data-market="${market}"] dd`);
 }
-
-/** Names of visible elements that stick out past the right edge of the window. */
-export async function overflowingElements(page: Page): Promise<string[]> {
-  return page.evaluate(() => {
-    const width = document.documentElement.clientWidth;
-    const out: string[] = [];
-    if (document.documentElement.scrollWidth > width)
-      out.push(`document (${document.documentElement.scrollWidth}px)`);
-    for (const el of Array.from(document.body.querySelectorAll('*'))) {
-      const rect = el.getBoundingClientRect();
-      if (rect.width > 0 && rect.height > 0 && rect.right > width + 1) {
-        // Content inside a sideways scroller is meant to be wider than the window.
-        if (el.closest('.scroller')) continue;
-        out.push(
-          `${el.tagName.toLowerCase()}.${[...el.classList].join('.')} (right ${Math.round(rect.right)}px)`,
-        );
-      }
-    }
-    return out;
-  });
-}

@@ -1,12 +1,7 @@
 import { randomBytes } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import {
-  addLine,
-  createMaterial,
-  declaration,
-  marketFindings,
-  overflowingElements,
-} from './formula-editor-steps';
+import { addLine, createMaterial, declaration, marketFindings } from './formula-editor-steps';
+import { expectNoSidewaysOverflow } from './layout-checks';
 import { type JourneyHarness, startJourneyHarness } from './journey-harness';
 
 describe('journey: a maker builds a bath formula with live checks, releases it and compares versions', () => {
@@ -192,7 +187,7 @@ describe('journey: a maker builds a bath formula with live checks, releases it a
     await page.getByText('Version 2 · released').waitFor();
     await page.setViewportSize({ width: 360, height: 740 });
     await page.locator('mat-sidenav').waitFor({ state: 'hidden' });
-    expect(await overflowingElements(page)).toEqual([]);
+    await expectNoSidewaysOverflow(page);
     await h.screenshot(page, 'formulas-11-editor-360px');
 
     // The refused release answers 409, which the browser logs; nothing else went wrong.

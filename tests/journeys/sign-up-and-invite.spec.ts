@@ -1,27 +1,8 @@
 import { randomBytes } from 'node:crypto';
-import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { firstLink } from '../support/mail-catcher';
 import { type JourneyHarness, startJourneyHarness } from './journey-harness';
-
-/** Names of visible elements that stick out past the right edge of the window. */
-async function overflowingElements(page: Page): Promise<string[]> {
-  return page.evaluate(() => {
-    const width = document.documentElement.clientWidth;
-    const out: string[] = [];
-    if (document.documentElement.scrollWidth > width)
-      out.push(`document (${document.documentElement.scrollWidth}px)`);
-    for (const el of Array.from(document.body.querySelectorAll('*'))) {
-      const rect = el.getBoundingClientRect();
-      if (rect.width > 0 && rect.height > 0 && rect.right > width + 1) {
-        out.push(
-          `${el.tagName.toLowerCase()}.${[...el.classList].join('.')} (right ${Math.round(rect.right)}px)`,
-        );
-      }
-    }
-    return out;
-  });
-}
+import { expectNoSidewaysOverflow } from './layout-checks';
 
 describe('journey: a maker sets up a workshop and brings in a formulator', () => {
   let h: JourneyHarness;
@@ -111,7 +92,7 @@ describe('journey: a maker sets up a workshop and brings in a formulator', () =>
     await invitee.setViewportSize({ width: 360, height: 740 });
     await invitee.getByRole('button', { name: 'Open the navigation' }).waitFor();
     await invitee.locator('mat-sidenav').waitFor({ state: 'hidden' }); // the overlay has slid away
-    expect(await overflowingElements(invitee)).toEqual([]);
+    await expectNoSidewaysOverflow(invitee);
     await h.screenshot(invitee, '07-home-formulator-360px');
 
     expect(h.problems).toEqual([]);
