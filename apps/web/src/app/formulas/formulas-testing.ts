@@ -1,15 +1,8 @@
 import { TestbedHarnessEnvironment } from '@angular/cdk/testing/testbed';
-import { provideHttpClient, withInterceptors } from '@angular/common/http';
-import {
-  HttpTestingController,
-  provideHttpClientTesting,
-  type TestRequest,
-} from '@angular/common/http/testing';
-import { provideZonelessChangeDetection, type Type } from '@angular/core';
-import { TestBed } from '@angular/core/testing';
-import { provideRouter, type Routes, withComponentInputBinding } from '@angular/router';
+import type { HttpTestingController, TestRequest } from '@angular/common/http/testing';
+import type { Type } from '@angular/core';
+import type { Routes } from '@angular/router';
 import { RouterTestingHarness } from '@angular/router/testing';
-import { firstValueFrom } from 'rxjs';
 import type {
   Formula,
   FormulaVersion,
@@ -18,9 +11,7 @@ import type {
   ProductProfile,
   Role,
 } from '@batchproof/shared';
-import { authInterceptor } from '../auth/auth-interceptor';
-import { Session } from '../auth/session';
-import { errorInterceptor } from '../http/error-interceptor';
+import { signedInAs } from '../auth/signed-in-as';
 
 /** Test data and page set-up for the formulas specs (imported by specs only). */
 
@@ -163,30 +154,7 @@ export function aFormula(versions: FormulaVersion[]): Formula {
  * routes with the app's interceptors, as the real app would.
  */
 export async function openAs(role: Role, routes: Routes, url: string, page: Type<unknown>) {
-  TestBed.configureTestingModule({
-    providers: [
-      provideZonelessChangeDetection(),
-      provideRouter(routes, withComponentInputBinding()),
-      provideHttpClient(withInterceptors([errorInterceptor, authInterceptor])),
-      provideHttpClientTesting(),
-    ],
-  });
-  const backend = TestBed.inject(HttpTestingController);
-  const signingIn = firstValueFrom(
-    TestBed.inject(Session).signIn({ email: 'me@example.com', password: 'x' }),
-  );
-  backend.expectOne('/api/auth/sign-in').flush({
-    accessToken: 'token-1',
-    expiresIn: 900,
-    user: {
-      id: 'u1',
-      name: 'Ada Marsh',
-      email: 'me@example.com',
-      role,
-      workshop: { id: 'w1', name: 'Hollowmere' },
-    },
-  });
-  await signingIn;
+  const backend = await signedInAs(role, routes);
   const harness = await RouterTestingHarness.create();
   await harness.navigateByUrl(url, page);
   return {

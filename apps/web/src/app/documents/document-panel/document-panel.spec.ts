@@ -1,11 +1,8 @@
 import { TestbedHarnessEnvironment } from '@angular/cdk/testing/testbed';
-import { provideHttpClient } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
-import { provideZonelessChangeDetection } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
 import { MatTableHarness } from '@angular/material/table/testing';
 import type { DocumentStatus, Role, SupplierDocument } from '@batchproof/shared';
-import { signedInAs } from '../signed-in-as';
+import { signedInAs } from '../../auth/signed-in-as';
 import { DocumentPanel } from './document-panel';
 
 const MATERIAL_ID = '6f1c1f4e-3a52-4c1e-9c55-0d0f7a9e2b11';
@@ -40,11 +37,7 @@ const STATUS: DocumentStatus = {
 };
 
 async function openPanel(role: Role, owner: { materialId?: string; lotId?: string }) {
-  TestBed.configureTestingModule({
-    providers: [provideZonelessChangeDetection(), provideHttpClient(), provideHttpClientTesting()],
-  });
-  await signedInAs(role);
-  const backend = TestBed.inject(HttpTestingController);
+  const backend = await signedInAs(role);
   const fixture = TestBed.createComponent(DocumentPanel);
   for (const [key, value] of Object.entries(owner)) fixture.componentRef.setInput(key, value);
   fixture.detectChanges();

@@ -6,7 +6,7 @@ import { TestBed } from '@angular/core/testing';
 import { MatButtonHarness } from '@angular/material/button/testing';
 import { MatInputHarness } from '@angular/material/input/testing';
 import { errorInterceptor } from '../../http/error-interceptor';
-import { pickFile } from '../signed-in-as';
+import { pickFile } from '../pick-file';
 import { DocumentUpload } from './document-upload';
 
 const MATERIAL_ID = '6f1c1f4e-3a52-4c1e-9c55-0d0f7a9e2b11';

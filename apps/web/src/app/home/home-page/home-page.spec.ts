@@ -1,39 +1,10 @@
-import { provideHttpClient } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
-import { provideZonelessChangeDetection } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
-import { provideRouter } from '@angular/router';
-import { firstValueFrom } from 'rxjs';
 import type { Role } from '@batchproof/shared';
-import { Session } from '../../auth/session';
+import { signedInAs } from '../../auth/signed-in-as';
 import HomePage from './home-page';
 
 async function openHomeAs(role: Role) {
-  TestBed.configureTestingModule({
-    providers: [
-      provideZonelessChangeDetection(),
-      provideRouter([]),
-      provideHttpClient(),
-      provideHttpClientTesting(),
-    ],
-  });
-  const signingIn = firstValueFrom(
-    TestBed.inject(Session).signIn({ email: 'me@example.com', password: 'x' }),
-  );
-  TestBed.inject(HttpTestingController)
-    .expectOne('/api/auth/sign-in')
-    .flush({
-      accessToken: 't',
-      expiresIn: 900,
-      user: {
-        id: 'u1',
-        name: 'Ada Marsh',
-        email: 'me@example.com',
-        role,
-        workshop: { id: 'w1', name: 'Hollowmere Bathworks' },
-      },
-    });
-  await signingIn;
+  await signedInAs(role);
   const fixture = TestBed.createComponent(HomePage);
   await fixture.whenStable();
   return fixture.nativeElement as HTMLElement;

@@ -1,17 +1,12 @@
 import { TestbedHarnessEnvironment } from '@angular/cdk/testing/testbed';
-import { provideHttpClient, withInterceptors } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
-import { provideZonelessChangeDetection } from '@angular/core';
+import type { HttpTestingController } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
 import { MatSortHarness } from '@angular/material/sort/testing';
 import { MatTableHarness } from '@angular/material/table/testing';
-import { provideRouter, Router, withComponentInputBinding } from '@angular/router';
+import { Router } from '@angular/router';
 import { RouterTestingHarness } from '@angular/router/testing';
-import { firstValueFrom } from 'rxjs';
 import type { Lot, LotPage, MaterialSummary, Role } from '@batchproof/shared';
-import { authInterceptor } from '../../auth/auth-interceptor';
-import { Session } from '../../auth/session';
-import { errorInterceptor } from '../../http/error-interceptor';
+import { signedInAs } from '../../auth/signed-in-as';
 import { addDays } from '../lot-expiry';
 import LotList from './lot-list';
 
@@ -73,36 +68,10 @@ const PAGE: LotPage = {
 const isLots = (r: { url: string }) => r.url === '/api/lots';
 
 async function openAs(role: Role, url = '/lots') {
-  TestBed.configureTestingModule({
-    providers: [
-      provideZonelessChangeDetection(),
-      provideRouter(
-        [
-          { path: 'lots', component: LotList },
-          { path: 'lots/:id', children: [] },
-        ],
-        withComponentInputBinding(),
-      ),
-      provideHttpClient(withInterceptors([errorInterceptor, authInterceptor])),
-      provideHttpClientTesting(),
-    ],
-  });
-  const backend = TestBed.inject(HttpTestingController);
-  const signingIn = firstValueFrom(
-    TestBed.inject(Session).signIn({ email: 'me@example.com', password: 'x' }),
-  );
-  backend.expectOne('/api/auth/sign-in').flush({
-    accessToken: 'token-1',
-    expiresIn: 900,
-    user: {
-      id: 'u1',
-      name: 'Ada Marsh',
-      email: 'me@example.com',
-      role,
-      workshop: { id: 'w1', name: 'Hollowmere' },
-    },
-  });
-  await signingIn;
+  const backend = await signedInAs(role, [
+    { path: 'lots', component: LotList },
+    { path: 'lots/:id', children: [] },
+  ]);
   const harness = await RouterTestingHarness.create();
   await harness.navigateByUrl(url, LotList);
   return { harness, backend, loader: TestbedHarnessEnvironment.loader(harness.fixture) };

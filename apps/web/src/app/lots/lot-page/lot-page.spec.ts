@@ -1,22 +1,17 @@
 import { HarnessLoader } from '@angular/cdk/testing';
 import { TestbedHarnessEnvironment } from '@angular/cdk/testing/testbed';
-import { provideHttpClient, withInterceptors } from '@angular/common/http';
 import type { HttpRequest } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
-import { provideZonelessChangeDetection } from '@angular/core';
+import type { HttpTestingController } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
 import { MatAutocompleteHarness } from '@angular/material/autocomplete/testing';
 import { MatButtonHarness } from '@angular/material/button/testing';
 import { MatDialogHarness } from '@angular/material/dialog/testing';
 import { MatFormFieldHarness } from '@angular/material/form-field/testing';
 import { MatInputHarness } from '@angular/material/input/testing';
-import { provideRouter, Router, withComponentInputBinding } from '@angular/router';
+import { Router } from '@angular/router';
 import { RouterTestingHarness } from '@angular/router/testing';
-import { firstValueFrom } from 'rxjs';
 import type { Lot, MaterialSummary, Role } from '@batchproof/shared';
-import { authInterceptor } from '../../auth/auth-interceptor';
-import { Session } from '../../auth/session';
-import { errorInterceptor } from '../../http/error-interceptor';
+import { signedInAs } from '../../auth/signed-in-as';
 import LotPage from './lot-page';
 
 const SHEA = '0b4c7a52-2c1e-4a55-9d5e-6f1f3b2a9c01';
@@ -57,37 +52,11 @@ const LOT: Lot = {
 };
 
 async function openAs(role: Role, url: string) {
-  TestBed.configureTestingModule({
-    providers: [
-      provideZonelessChangeDetection(),
-      provideRouter(
-        [
-          { path: 'lots', children: [] },
-          { path: 'lots/new', component: LotPage },
-          { path: 'lots/:id', component: LotPage },
-        ],
-        withComponentInputBinding(),
-      ),
-      provideHttpClient(withInterceptors([errorInterceptor, authInterceptor])),
-      provideHttpClientTesting(),
-    ],
-  });
-  const backend = TestBed.inject(HttpTestingController);
-  const signingIn = firstValueFrom(
-    TestBed.inject(Session).signIn({ email: 'me@example.com', password: 'x' }),
-  );
-  backend.expectOne('/api/auth/sign-in').flush({
-    accessToken: 'token-1',
-    expiresIn: 900,
-    user: {
-      id: 'u1',
-      name: 'Ada Marsh',
-      email: 'me@example.com',
-      role,
-      workshop: { id: 'w1', name: 'Hollowmere' },
-    },
-  });
-  await signingIn;
+  const backend = await signedInAs(role, [
+    { path: 'lots', children: [] },
+    { path: 'lots/new', component: LotPage },
+    { path: 'lots/:id', component: LotPage },
+  ]);
   const harness = await RouterTestingHarness.create();
   await harness.navigateByUrl(url);
   const loader = TestbedHarnessEnvironment.loader(harness.fixture);

@@ -1,16 +1,12 @@
 import { TestbedHarnessEnvironment } from '@angular/cdk/testing/testbed';
-import { provideHttpClient, withInterceptors } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { provideZonelessChangeDetection } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
 import { NonNullableFormBuilder } from '@angular/forms';
 import { MatButtonHarness } from '@angular/material/button/testing';
 import { MatFormFieldHarness } from '@angular/material/form-field/testing';
 import { MatInputHarness } from '@angular/material/input/testing';
-import { provideRouter } from '@angular/router';
 import type { Material } from '@batchproof/shared';
-import { signedInAs } from '../../documents/signed-in-as';
-import { errorInterceptor } from '../../http/error-interceptor';
+import { signedInAs } from '../../auth/signed-in-as';
 import { MaterialForm } from '../material-form/material-form';
 import { MaterialFormModel } from '../material-form/material-form-model';
 import { BlendEditor } from './blend-editor';
@@ -41,20 +37,9 @@ const MICA_BLEND: Material = {
   calibrationSummary: [],
 };
 
-function configure() {
-  TestBed.configureTestingModule({
-    providers: [
-      provideZonelessChangeDetection(),
-      provideRouter([]),
-      provideHttpClient(withInterceptors([errorInterceptor])),
-      provideHttpClientTesting(),
-    ],
-  });
-}
-
 describe('BlendEditor', () => {
   it('shows the running sum and what is left to reach 100 % as percentages change', async () => {
-    configure();
+    TestBed.configureTestingModule({ providers: [provideZonelessChangeDetection()] });
     const model = new MaterialFormModel(TestBed.inject(NonNullableFormBuilder));
     const rows = model.form(null).controls.components;
     rows.push(model.component({ inci: 'Mica', percent: 60 }));
@@ -85,9 +70,7 @@ describe('BlendEditor', () => {
   });
 
   it("shows the server's message about the components beside them and keeps what was typed", async () => {
-    configure();
-    await signedInAs('formulator');
-    const backend = TestBed.inject(HttpTestingController);
+    const backend = await signedInAs('formulator');
     const fixture = TestBed.createComponent(MaterialForm);
     fixture.componentRef.setInput('material', MICA_BLEND);
     // The supplier picker's read goes out on the first render; answer it before waiting.

@@ -1,31 +1,17 @@
 import { TestbedHarnessEnvironment } from '@angular/cdk/testing/testbed';
-import { provideHttpClient, withInterceptors } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
-import { provideZonelessChangeDetection } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
 import { MatButtonHarness } from '@angular/material/button/testing';
 import { MatFormFieldHarness } from '@angular/material/form-field/testing';
 import { MatInputHarness } from '@angular/material/input/testing';
 import { MatSelectHarness } from '@angular/material/select/testing';
-import { provideRouter } from '@angular/router';
 import type { Material, Role } from '@batchproof/shared';
-import { signedInAs } from '../../documents/signed-in-as';
-import { errorInterceptor } from '../../http/error-interceptor';
+import { signedInAs } from '../../auth/signed-in-as';
 import { MaterialForm } from './material-form';
 
 const SUPPLIER_ID = '3d1f0a52-2b7e-4c0b-8f2e-9a8b7c6d5e4f';
 
 async function openForm(role: Role, material: Material | null = null) {
-  TestBed.configureTestingModule({
-    providers: [
-      provideZonelessChangeDetection(),
-      provideRouter([]),
-      provideHttpClient(withInterceptors([errorInterceptor])),
-      provideHttpClientTesting(),
-    ],
-  });
-  await signedInAs(role);
-  const backend = TestBed.inject(HttpTestingController);
+  const backend = await signedInAs(role);
   const fixture = TestBed.createComponent(MaterialForm);
   fixture.componentRef.setInput('material', material);
   fixture.detectChanges();

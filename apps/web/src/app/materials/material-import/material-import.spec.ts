@@ -6,7 +6,7 @@ import { TestBed } from '@angular/core/testing';
 import { MatButtonHarness } from '@angular/material/button/testing';
 import { MatTableHarness } from '@angular/material/table/testing';
 import type { MaterialImportPreview, MaterialImportResult } from '@batchproof/shared';
-import { pickFile } from '../../documents/signed-in-as';
+import { pickFile } from '../../documents/pick-file';
 import { errorInterceptor } from '../../http/error-interceptor';
 import { MaterialImport } from './material-import';
 

@@ -1,19 +1,13 @@
 import { TestbedHarnessEnvironment } from '@angular/cdk/testing/testbed';
-import { provideHttpClient } from '@angular/common/http';
-import {
-  HttpTestingController,
-  provideHttpClientTesting,
-  type TestRequest,
-} from '@angular/common/http/testing';
-import { provideZonelessChangeDetection } from '@angular/core';
+import type { TestRequest } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
 import { MatPaginatorHarness } from '@angular/material/paginator/testing';
 import { MatSelectHarness } from '@angular/material/select/testing';
 import { MatTableHarness } from '@angular/material/table/testing';
-import { provideRouter, Router, withComponentInputBinding } from '@angular/router';
+import { Router } from '@angular/router';
 import { RouterTestingHarness } from '@angular/router/testing';
 import type { MaterialPage, Role } from '@batchproof/shared';
-import { signedInAs } from '../../documents/signed-in-as';
+import { signedInAs } from '../../auth/signed-in-as';
 import MaterialList from './material-list';
 
 const PAGE: MaterialPage = {
@@ -40,16 +34,7 @@ const PAGE: MaterialPage = {
 const isList = (r: { url: string }) => r.url === '/api/materials';
 
 async function openList(url: string, role: Role = 'formulator') {
-  TestBed.configureTestingModule({
-    providers: [
-      provideZonelessChangeDetection(),
-      provideRouter([{ path: 'materials', component: MaterialList }], withComponentInputBinding()),
-      provideHttpClient(),
-      provideHttpClientTesting(),
-    ],
-  });
-  await signedInAs(role);
-  const backend = TestBed.inject(HttpTestingController);
+  const backend = await signedInAs(role, [{ path: 'materials', component: MaterialList }]);
   const harness = await RouterTestingHarness.create();
   await harness.navigateByUrl(url, MaterialList);
   return { harness, backend, loader: TestbedHarnessEnvironment.loader(harness.fixture) };

@@ -1,11 +1,5 @@
 import { TestbedHarnessEnvironment } from '@angular/cdk/testing/testbed';
-import { provideHttpClient, withInterceptors } from '@angular/common/http';
-import {
-  HttpTestingController,
-  provideHttpClientTesting,
-  type TestRequest,
-} from '@angular/common/http/testing';
-import { provideZonelessChangeDetection } from '@angular/core';
+import type { TestRequest } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
 import { MatButtonHarness } from '@angular/material/button/testing';
 import { MatFormFieldHarness } from '@angular/material/form-field/testing';
@@ -13,13 +7,10 @@ import { MatInputHarness } from '@angular/material/input/testing';
 import { MatSelectHarness } from '@angular/material/select/testing';
 import { MatSortHarness } from '@angular/material/sort/testing';
 import { MatRowHarness, MatTableHarness } from '@angular/material/table/testing';
-import { provideRouter, Router, withComponentInputBinding } from '@angular/router';
+import { Router } from '@angular/router';
 import { RouterTestingHarness } from '@angular/router/testing';
-import { firstValueFrom } from 'rxjs';
 import type { Member, Role } from '@batchproof/shared';
-import { authInterceptor } from '../../auth/auth-interceptor';
-import { Session } from '../../auth/session';
-import { errorInterceptor } from '../../http/error-interceptor';
+import { signedInAs } from '../../auth/signed-in-as';
 import MembersPage from './members-page';
 
 const MEMBERS: Member[] = [
@@ -42,31 +33,7 @@ const MEMBERS: Member[] = [
 const isMembersList = (req: { url: string }) => req.url === '/api/members';
 
 async function openMembersAs(role: Role, url = '/workshop') {
-  TestBed.configureTestingModule({
-    providers: [
-      provideZonelessChangeDetection(),
-      provideRouter([{ path: 'workshop', component: MembersPage }], withComponentInputBinding()),
-      provideHttpClient(withInterceptors([errorInterceptor, authInterceptor])),
-      provideHttpClientTesting(),
-    ],
-  });
-  const backend = TestBed.inject(HttpTestingController);
-  const signingIn = firstValueFrom(
-    TestBed.inject(Session).signIn({ email: 'me@example.com', password: 'x' }),
-  );
-  backend.expectOne('/api/auth/sign-in').flush({
-    accessToken: 'token-1',
-    expiresIn: 900,
-    user: {
-      id: 'u1',
-      name: 'Ada Marsh',
-      email: 'me@example.com',
-      role,
-      workshop: { id: 'w1', name: 'Hollowmere' },
-    },
-  });
-  await signingIn;
-
+  const backend = await signedInAs(role, [{ path: 'workshop', component: MembersPage }]);
   const harness = await RouterTestingHarness.create();
   await harness.navigateByUrl(url, MembersPage);
   const loader = TestbedHarnessEnvironment.loader(harness.fixture);
