@@ -1,9 +1,10 @@
 import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
-import { MatButton, MatIconButton } from '@angular/material/button';
+import { MatButton } from '@angular/material/button';
 import { MatError, MatFormField, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
+import { EditableRow } from '../../forms/editable-row';
 import { errorMessage } from '../../forms/form-errors';
 import { formChanges } from '../material-form/form-changes';
 import { type AllergenGroup, MaterialFormModel } from '../material-form/material-form-model';
@@ -17,12 +18,12 @@ const round = (n: number) => Math.round(n * 1000) / 1000;
 @Component({
   selector: 'bp-allergen-declaration-editor',
   imports: [
+    EditableRow,
     ReactiveFormsModule,
     MatButton,
     MatError,
     MatFormField,
     MatIcon,
-    MatIconButton,
     MatInput,
     MatLabel,
     MatSuffix,
@@ -43,8 +44,12 @@ const round = (n: number) => Math.round(n * 1000) / 1000;
       }
       <ol class="rows" aria-label="Declared allergens">
         @for (row of group().controls.allergens.controls; track row; let i = $index) {
-          <li [formGroup]="row" class="row">
-            <div class="fields">
+          <li [formGroup]="row">
+            <bp-editable-row
+              [removeLabel]="'Remove allergen row ' + (i + 1)"
+              [removable]="!s.disabled"
+              (remove)="remove(i)"
+            >
               <mat-form-field class="name">
                 <mat-label>Allergen</mat-label>
                 <input matInput formControlName="inci" autocomplete="off" />
@@ -68,18 +73,7 @@ const round = (n: number) => Math.round(n * 1000) / 1000;
                 <span matTextSuffix class="unit">%</span>
                 <mat-error>{{ errorMessage(row.controls.percent) }}</mat-error>
               </mat-form-field>
-            </div>
-            @if (!s.disabled) {
-              <button
-                mat-icon-button
-                type="button"
-                class="remove"
-                [attr.aria-label]="'Remove allergen row ' + (i + 1)"
-                (click)="remove(i)"
-              >
-                <mat-icon>delete_outline</mat-icon>
-              </button>
-            }
+            </bp-editable-row>
           </li>
         }
       </ol>

@@ -1,10 +1,11 @@
 import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
 import { type FormArray, NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
-import { MatButton, MatIconButton } from '@angular/material/button';
+import { MatButton } from '@angular/material/button';
 import { MatError, MatFormField, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { BLEND_TOLERANCE_PERCENT } from '@batchproof/shared';
+import { EditableRow } from '../../forms/editable-row';
 import { errorMessage } from '../../forms/form-errors';
 import { formChanges } from '../material-form/form-changes';
 import { type ComponentRow, MaterialFormModel } from '../material-form/material-form-model';
@@ -18,12 +19,12 @@ const round = (n: number) => Math.round(n * 1000) / 1000;
 @Component({
   selector: 'bp-blend-editor',
   imports: [
+    EditableRow,
     ReactiveFormsModule,
     MatButton,
     MatError,
     MatFormField,
     MatIcon,
-    MatIconButton,
     MatInput,
     MatLabel,
     MatSuffix,

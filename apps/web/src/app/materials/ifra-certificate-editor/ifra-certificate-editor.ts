@@ -1,9 +1,10 @@
 import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
-import { MatButton, MatIconButton } from '@angular/material/button';
+import { MatButton } from '@angular/material/button';
 import { MatError, MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
+import { EditableRow } from '../../forms/editable-row';
 import { errorMessage } from '../../forms/form-errors';
 import { formChanges } from '../material-form/form-changes';
 import { type IfraGroup, MaterialFormModel } from '../material-form/material-form-model';
@@ -15,13 +16,13 @@ import { type IfraGroup, MaterialFormModel } from '../material-form/material-for
 @Component({
   selector: 'bp-ifra-certificate-editor',
   imports: [
+    EditableRow,
     ReactiveFormsModule,
     MatButton,
     MatError,
     MatFormField,
     MatHint,
     MatIcon,
-    MatIconButton,
     MatInput,
     MatLabel,
     MatSuffix,
@@ -51,8 +52,12 @@ import { type IfraGroup, MaterialFormModel } from '../material-form/material-for
       }
       <ol class="rows" aria-label="Maximum per IFRA category">
         @for (row of group().controls.limits.controls; track row; let i = $index) {
-          <li [formGroup]="row" class="row">
-            <div class="fields">
+          <li [formGroup]="row">
+            <bp-editable-row
+              [removeLabel]="'Remove IFRA category row ' + (i + 1)"
+              [removable]="!s.disabled"
+              (remove)="remove(i)"
+            >
               <mat-form-field class="category">
                 <mat-label>IFRA category</mat-label>
                 <input matInput formControlName="category" autocomplete="off" />
@@ -71,18 +76,7 @@ import { type IfraGroup, MaterialFormModel } from '../material-form/material-for
                 <span matTextSuffix class="unit">%</span>
                 <mat-error>{{ errorMessage(row.controls.maxPercent) }}</mat-error>
               </mat-form-field>
-            </div>
-            @if (!s.disabled) {
-              <button
-                mat-icon-button
-                type="button"
-                class="remove"
-                [attr.aria-label]="'Remove IFRA category row ' + (i + 1)"
-                (click)="remove(i)"
-              >
-                <mat-icon>delete_outline</mat-icon>
-              </button>
-            }
+            </bp-editable-row>
           </li>
         }
       </ol>
