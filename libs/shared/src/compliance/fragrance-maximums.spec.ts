@@ -24,6 +24,7 @@ describe("fragrance against the supplier's IFRA maximum for the product's catego
   });
 
   it('accepts a fragrance exactly at its maximum', () => {
+    // IFRA Standards, via the supplier's certificate: the maximum itself is allowed
     expect(
       fragranceFindings(
         aLine(97, 'Sodium Bicarbonate'),
@@ -38,6 +39,7 @@ describe("fragrance against the supplier's IFRA maximum for the product's catego
       aFragranceLine(2, 'Orchard Breeze', { '9': 3 }),
       aFragranceLine(2, 'Orchard Breeze', { '9': 3 }),
     );
+    // IFRA Standards: the maximum applies to the fragrance's total in the finished product
     expect(findings.map((f) => f.code)).toEqual(['FRAGRANCE_OVER_MAXIMUM']);
   });
 
@@ -46,6 +48,7 @@ describe("fragrance against the supplier's IFRA maximum for the product's catego
       aLine(98, 'Sodium Bicarbonate'),
       aFragranceLine(2, 'Orchard Breeze', { '5A': 1.2 }),
     );
+    // common practice, no published source: with no maximum for the category, ask, don't pass
     expect(finding?.code).toBe('FRAGRANCE_NO_MAXIMUM');
     expect(finding?.severity).toBe('warn');
   });
