@@ -31,16 +31,6 @@ export interface EuAnnexIiiAllergen extends ReferenceRow {
   readonly peroxideLimit?: boolean;
 }
 
-/** One-time prohibited former allergen (moved to Annex II), so the engine can flag it. */
-export interface EuProhibitedFragranceSubstance extends ReferenceRow {
-  /** Name as used in ingredient lists. */
-  readonly labelName: string;
-  /** CAS number. */
-  readonly cas: string;
-  /** The Annex III reference it used to have. */
-  readonly formerAnnexRef: string;
-}
-
 /**
  * Products that do not name the 2023/1545 allergens may be placed on the EU market until this day,
  * and made available until {@link EU_ALLERGEN_AVAILABILITY_DEADLINE}. Regulation (EU) 2023/1545,

@@ -1,4 +1,9 @@
-import { euAnnexIiiAllergens, euProhibitedFragranceSubstances } from './eu-annex-iii-allergens';
+import { caHotlistSubstances } from './ca-hotlist-substances';
+import { essentialOilHints } from './essential-oil-hints';
+import { euAnnexIiiAllergens } from './eu-annex-iii-allergens';
+import { euRestrictedSubstances } from './eu-restricted-substances';
+import { foamingSurfactants } from './foaming-surfactants';
+import { usLabelNames } from './us-label-names';
 import { euAnnexIvColourants } from './eu-annex-iv-colourants';
 import type { ReferenceRow } from './reference-row';
 import { requiredWarnings } from './required-warnings';
@@ -46,10 +51,39 @@ export const referenceLists: readonly ReferenceList[] = [
     rows: euAnnexIiiAllergens,
   },
   {
-    key: 'eu-prohibited-fragrance-substances',
-    title: 'Former allergens now prohibited in the EU',
-    description: 'Former Annex III allergens moved to Annex II.',
-    rows: euProhibitedFragranceSubstances,
+    key: 'eu-restricted-substances',
+    title: 'EU and UK prohibited and restricted substances',
+    description:
+      'Annex II prohibitions and Annex III and V restrictions (preservatives, maxima, rinse-off only) of Regulation (EC) No 1223/2009 that reach bath and body products, with their dates.',
+    rows: euRestrictedSubstances,
+  },
+  {
+    key: 'ca-hotlist-substances',
+    title: 'Canada: Cosmetic Ingredient Hotlist entries',
+    description:
+      "Health Canada's prohibited and restricted cosmetic ingredients that Batchproof checks, where the entry could be confirmed.",
+    rows: caHotlistSubstances,
+  },
+  {
+    key: 'essential-oil-hints',
+    title: 'Essential oils and the allergens they typically carry',
+    description:
+      "A hint for what to ask the supplier for; never used in place of the supplier's allergen declaration.",
+    rows: essentialOilHints,
+  },
+  {
+    key: 'us-label-names',
+    title: 'US names for EU glossary names',
+    description:
+      'Latin or EU-only ingredient names that a US label prints by their US name (Aqua as Water).',
+    rows: usLabelNames,
+  },
+  {
+    key: 'foaming-surfactants',
+    title: 'Foaming and cleansing surfactants',
+    description:
+      'Surfactants that make a bath product a foaming detergent bath product (21 CFR 740.17) whatever function is typed.',
+    rows: foamingSurfactants,
   },
   {
     key: 'required-warnings',

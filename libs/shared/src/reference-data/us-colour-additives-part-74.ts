@@ -33,12 +33,12 @@ export const usPart74ColourAdditives: readonly UsColourAdditive[] = [
     ['16035'],
     '74.2340',
     { ...GENERAL_NOT_EYE, eyeArea: true, eyeAreaIncludesLake: true },
-    'M',
+    'C2',
     'C',
     {
-      // from memory
       aliases: ['red 40', 'allura red ac'],
-      note: 'Cosmetic paragraph from memory; eye area (with Aluminum Lake) confirmed only in the drug listing 74.1340.',
+      source: `21 CFR 74.2340; FDA, Color Additives Permitted for Use in Cosmetics (table copy)`,
+      note: 'The 74.2340 paragraph itself was not read. FDA summary table (copy): "FD&C Red No. 40 | Yes, also Al lake | Yes" (eye area; generally). Drug listing 74.1340(b)(1) confirms eye-area use with the Aluminum Lake (C).',
     },
   ),
   certified(
@@ -87,8 +87,9 @@ export const usPart74ColourAdditives: readonly UsColourAdditive[] = [
   certified('us-dc-red-28', 'D&C Red No. 28', ['45410'], '74.2328', GENERAL_NOT_EYE, 'M', 'C2', {
     aliases: ['red 28', 'phloxine b'],
   }), // from memory
-  certified('us-dc-red-30', 'D&C Red No. 30', ['73360'], '74.2330', GENERAL_NOT_EYE, 'C', 'M', {
+  certified('us-dc-red-30', 'D&C Red No. 30', ['73360'], '74.2330', GENERAL_NOT_EYE, 'C', 'C2', {
     aliases: ['red 30'],
+    note: '74.2330: "may be safely used for coloring cosmetics generally". CI 73360 = D&C Red No. 30 from a secondary source that also gives the Annex IV entry 100 chemical name.',
   }),
   certified('us-dc-red-31', 'D&C Red No. 31', ['15800:1'], '74.2331', EXTERNAL_ONLY, 'C', 'M', {
     aliases: ['red 31'],
@@ -100,10 +101,10 @@ export const usPart74ColourAdditives: readonly UsColourAdditive[] = [
     '74.2333',
     { ...EXTERNAL_ONLY, lipProductsMaxPercent: 3 },
     'C',
-    'M',
+    'CALC',
     {
       aliases: ['red 33', 'acid fuchsine'],
-      note: 'Lip products up to 3 % total colour by weight; also mouthwashes and dentifrices. CI 17200 pairing from memory.',
+      note: 'Lip products up to 3 % total colour by weight; also mouthwashes and dentifrices. CI 17200: 74.1333(a) "disodium salt of 5-amino-4-hydroxy-3-(phenylazo)-2,7-naphthalenedisulfonic acid" is the substance of Annex IV entry 37 (CI 17200), so the pairing is derived (CALC).',
     },
   ),
   certified(
@@ -223,6 +224,10 @@ export const usPart74ColourAdditives: readonly UsColourAdditive[] = [
     },
     'C',
     'C',
-    { aliases: ['carbon black', 'black 2'], source: '21 CFR 74.2052(c)' },
+    {
+      aliases: ['carbon black', 'black 2'],
+      source: '21 CFR 74.2052(c)',
+      note: '74.2052(c): "may be safely used for coloring the following cosmetics in amounts consistent with current good manufacturing practice: Eyeliner, brush-on-brow, eye shadow, mascara, lipstick, blushers and rouge, makeup and foundation, and nail enamel."',
+    },
   ),
 ];
