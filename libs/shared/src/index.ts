@@ -15,6 +15,7 @@ export * from './lots/lot-schema';
 export * from './documents/document-schema';
 export * from './formulas/formula-schema';
 export * from './formulas/formula-comparison';
+export * from './formulas/evaluation-input-builder';
 export * from './formulas/formula-scaling-schema';
 export * from './compliance/index';
 export * from './materials/material-csv-schema';

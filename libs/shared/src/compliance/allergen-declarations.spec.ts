@@ -26,7 +26,7 @@ function allergenIn(
 }
 
 describe('fragrance allergens: percent in product and the labelling thresholds', () => {
-  // Check values, regulatory sources file 2.3 ([CALC] from the [C] Annex III threshold wording)
+  // Check values [CALC] from Regulation (EC) No 1223/2009, Annex III threshold wording (0.001 % leave-on, 0.01 % rinse-off)
   it('declares limonene at 0.6 % in a bath bomb (2.0 % fragrance × 30 %)', () => {
     const [limonene] = allergenIn(aBathBomb(), 2, {
       inci: 'Limonene',
@@ -154,17 +154,21 @@ describe('allergen limits and unknowns', () => {
     expect(result.findings.find((f) => f.code === 'ALLERGEN_NOT_LISTED')?.severity).toBe('warn');
   });
 
-  it('flags a former allergen now prohibited, as a check because the rule is from memory', () => {
-    // from memory: Butylphenyl Methylpropional moved to Annex II
+  it('blocks a former allergen now prohibited when a fragrance declares it, and does not name it as an allergen', () => {
     const result = allergenIn(aBathBomb(), 2, {
       inci: 'Butylphenyl Methylpropional',
       cas: '80-54-6',
       percent: 1,
     });
+    // Regulation (EU) 2021/1902: butylphenyl methylpropional in Annex II from 1 March 2022
     const finding = result.findings.find(
-      (f) => f.code === 'ALLERGEN_PROHIBITED' && f.market === 'EU',
+      (f) => f.code === 'PROHIBITED_SUBSTANCE' && f.market === 'EU',
     );
-    expect(finding?.severity).toBe('warn');
+    expect(finding?.severity).toBe('block');
+    expect(finding?.message).toMatch(/declared inside a fragrance/);
+    expect(result.findings.some((f) => f.code === 'ALLERGEN_NOT_LISTED' && f.market === 'EU')).toBe(
+      false,
+    );
   });
 
   it('asks the assessor about rinse-off vs leave-on when a bath product has an allergen between the two thresholds', () => {

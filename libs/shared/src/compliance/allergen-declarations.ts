@@ -6,7 +6,8 @@ import {
   type EuAnnexIiiAllergen,
 } from '../reference-data/eu-annex-iii-allergens';
 import type { ComplianceMarket, ReferenceStatus } from '../reference-data/reference-row';
-import { matchAnnexIiiAllergen, matchProhibitedFragranceSubstance } from './allergen-matching';
+import { matchAnnexIiiAllergen } from './allergen-matching';
+import { matchRestricted } from './restricted-substances';
 import type { AllergenAddition } from './declarations';
 import type { EvaluationInput, ProductInput } from './evaluation-input-schema';
 import {
@@ -17,7 +18,7 @@ import {
 import { formatPercent, makeFinding } from './finding-builder';
 import type { ExpandedIngredient } from './formula-expansion';
 import { normaliseName } from './ingredient-names';
-import { classificationFinding, noUsRuleFinding, prohibitedFindings } from './allergen-findings';
+import { classificationFinding, noUsRuleFinding } from './allergen-findings';
 
 /** One allergen summed over the formula: through fragrances and as a directly added ingredient. */
 export interface AllergenTotal {
@@ -197,7 +198,7 @@ export function evaluateAllergens(
       if (
         !total.row &&
         declared &&
-        !matchProhibitedFragranceSubstance({ inci: total.name, cas: total.cas })
+        !matchRestricted(market, { inci: total.name, cas: total.cas }).some((m) => m.row.prohibited)
       ) {
         findings.push(
           makeFinding({
@@ -241,7 +242,6 @@ export function evaluateAllergens(
         );
       }
     }
-    if (market !== 'US' && market !== 'CA') findings.push(...prohibitedFindings(totals, market));
     if (market === 'US' && totals.length > 0) findings.push(noUsRuleFinding(totals));
     if (classificationMatters.length > 0)
       findings.push(classificationFinding(market, classificationMatters, threshold));

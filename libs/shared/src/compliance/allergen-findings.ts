@@ -1,35 +1,7 @@
 import type { ComplianceMarket } from '../reference-data/reference-row';
 import type { AllergenTotal } from './allergen-declarations';
-import { matchProhibitedFragranceSubstance } from './allergen-matching';
-import { DEFER_TO_ASSESSOR, type ComplianceFinding } from './evaluation-result-schema';
+import type { ComplianceFinding } from './evaluation-result-schema';
 import { formatPercent, makeFinding } from './finding-builder';
-
-/** ALLERGEN_PROHIBITED findings for former allergens now in Annex II (EU/UK). */
-export function prohibitedFindings(
-  totals: readonly AllergenTotal[],
-  market: ComplianceMarket,
-): ComplianceFinding[] {
-  const findings: ComplianceFinding[] = [];
-  for (const total of totals) {
-    if (total.row || total.percent <= 0) continue;
-    const banned = matchProhibitedFragranceSubstance({ inci: total.name, cas: total.cas });
-    if (!banned) continue;
-    findings.push(
-      // from memory: the Annex II moves of these two former allergens are not yet confirmed (status M).
-      makeFinding({
-        code: 'ALLERGEN_PROHIBITED',
-        severity: 'block',
-        market,
-        subject: total.name,
-        message: `${total.name} is prohibited in cosmetics (moved from Annex III entry ${banned.formerAnnexRef} to Annex II); ask your supplier for a fragrance without it. ${DEFER_TO_ASSESSOR}`,
-        source: banned.source,
-        status: banned.status,
-        lines: total.lines,
-      }),
-    );
-  }
-  return findings;
-}
 
 /** The note that the US has no allergen labelling rule yet. */
 export function noUsRuleFinding(totals: readonly AllergenTotal[]): ComplianceFinding {

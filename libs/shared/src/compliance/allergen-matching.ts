@@ -1,8 +1,6 @@
 import {
   euAnnexIiiAllergens,
-  euProhibitedFragranceSubstances,
   type EuAnnexIiiAllergen,
-  type EuProhibitedFragranceSubstance,
 } from '../reference-data/eu-annex-iii-allergens';
 import { normaliseName } from './ingredient-names';
 
@@ -15,11 +13,6 @@ for (const row of euAnnexIiiAllergens) {
     if (!byName.has(normaliseName(substance.name))) byName.set(normaliseName(substance.name), row);
   }
 }
-const prohibitedByCas = new Map(euProhibitedFragranceSubstances.map((row) => [row.cas, row]));
-const prohibitedByName = new Map(
-  euProhibitedFragranceSubstances.map((row) => [normaliseName(row.labelName), row]),
-);
-
 /** The Annex III entry for a substance, by CAS number first, then by name; null when it is not listed. */
 export function matchAnnexIiiAllergen(substance: {
   inci: string;
@@ -30,16 +23,4 @@ export function matchAnnexIiiAllergen(substance: {
     if (row) return row;
   }
   return byName.get(normaliseName(substance.inci)) ?? null;
-}
-
-/** The prohibited former allergen a substance is, if any. */
-export function matchProhibitedFragranceSubstance(substance: {
-  inci: string;
-  cas?: string | undefined;
-}): EuProhibitedFragranceSubstance | null {
-  return (
-    (substance.cas ? prohibitedByCas.get(substance.cas) : undefined) ??
-    prohibitedByName.get(normaliseName(substance.inci)) ??
-    null
-  );
 }

@@ -13,7 +13,7 @@ import { baseColourIndex, normaliseName } from './ingredient-names';
 
 /** What a colourant matched in the US lists. */
 export type UsColourMatch =
-  | { kind: 'listed'; row: UsColourAdditive; lake: boolean }
+  | { kind: 'listed'; row: UsColourAdditive; lake: boolean; lakeName: string | null }
   | { kind: 'not-permitted'; row: UsNotPermittedColourant }
   | { kind: 'ambiguous'; rows: UsColourAdditive[] }
   | { kind: 'none' };
@@ -40,16 +40,36 @@ for (const row of usNotPermittedColourants) {
 }
 const euByCi = new Map<string, EuAnnexIvColourant>();
 const euByName = new Map<string, EuAnnexIvColourant>();
+const euKey = (key: string, nano: boolean) => `${key}|${nano ? 'nano' : 'plain'}`;
 for (const row of euAnnexIvColourants) {
-  if (row.colourIndex) euByCi.set(row.colourIndex, row);
-  else euByName.set(normaliseName(row.name), row);
+  if (row.colourIndex) euByCi.set(euKey(row.colourIndex, row.nano === true), row);
+  else euByName.set(euKey(normaliseName(row.name), row.nano === true), row);
 }
 
-/** A name with any lake suffix removed, and whether there was one. */
-function stripLake(name: string): { name: string; lake: boolean } {
+/** A name with any lake suffix removed, whether there was one, and the suffix as written. */
+function stripLake(name: string): { name: string; lake: boolean; suffix: string | null } {
   const normalised = normaliseName(name);
   const stripped = normalised.replace(LAKE_SUFFIX, '');
-  return { name: stripped, lake: stripped !== normalised };
+  const suffix = LAKE_SUFFIX.exec(name.trim().replace(/\s+/g, ' '))?.[0].trim() ?? null;
+  return { name: stripped, lake: stripped !== normalised, suffix };
+}
+
+/**
+ * The lake designation as the US label prints it after the listed name: "Aluminum Lake", "Calcium
+ * Lake" or "Lake" (21 CFR 82.51: lakes are named by the straight colour and the salt), in title case.
+ */
+function lakeDesignation(suffix: string): string {
+  const words = suffix.toLowerCase().split(' ');
+  const salt: Record<string, string> = {
+    al: 'Aluminum',
+    aluminum: 'Aluminum',
+    aluminium: 'Aluminum',
+    ca: 'Calcium',
+    calcium: 'Calcium',
+    ba: 'Barium',
+    barium: 'Barium',
+  };
+  return words.length > 1 && salt[words[0]!] ? `${salt[words[0]!]} Lake` : 'Lake';
 }
 
 /** Whether two rows give the same answer for every exposure, so an ambiguous CI needs no US name. */
@@ -64,7 +84,7 @@ function sameUses(a: UsColourAdditive, b: UsColourAdditive): boolean {
 /**
  * Matches a colourant to the US lists by its US name together with its CI number: CI numbers are not
  * unique US keys (CI 42090 is FD&C Blue No. 1 and D&C Blue No. 4), so a CI shared by listings with
- * different uses needs the US name (regulatory sources file, section 15).
+ * different uses needs the US name (FDA/ICMAD regulatory information sheet of permanently listed colours).
  */
 export function matchUsColourant(
   colourant: { colourIndex: string | undefined; usName: string | undefined; inci: string },
@@ -74,6 +94,8 @@ export function matchUsColourant(
     .filter((n): n is string => n !== undefined)
     .map(stripLake);
   const lake = names.some((n) => n.lake);
+  const suffix = names.find((n) => n.suffix)?.suffix ?? null;
+  const lakeName = lake && suffix ? lakeDesignation(suffix) : null;
   const ci = colourant.colourIndex;
   if (ci !== undefined) {
     const banned = notPermittedByCi.get(ci);
@@ -97,18 +119,24 @@ export function matchUsColourant(
   candidates = [...new Set(candidates)].filter((row) => isInEffect(row, asOf));
   if (candidates.length === 0) return { kind: 'none' };
   const first = candidates[0]!;
-  if (candidates.every((row) => sameUses(row, first))) return { kind: 'listed', row: first, lake };
+  if (candidates.every((row) => sameUses(row, first)))
+    return { kind: 'listed', row: first, lake, lakeName };
   return { kind: 'ambiguous', rows: candidates };
 }
 
-/** Matches a colourant to an Annex IV entry: by CI number (an entry covers its salts and lakes), else by name. */
+/**
+ * Matches a colourant to an Annex IV entry: by CI number (an entry covers its salts and lakes), else by
+ * name. A nanomaterial matches only the entry for the nano form, and an ordinary colourant only the
+ * ordinary entry, so conditions written for one never fall on the other.
+ */
 export function matchEuColourant(
-  colourant: { colourIndex: string | undefined; inci: string },
+  colourant: { colourIndex: string | undefined; inci: string; nano?: boolean },
   asOf: string,
 ): EuAnnexIvColourant | null {
+  const nano = colourant.nano === true;
   const row =
     colourant.colourIndex !== undefined
-      ? euByCi.get(baseColourIndex(colourant.colourIndex))
-      : euByName.get(normaliseName(colourant.inci));
+      ? euByCi.get(euKey(baseColourIndex(colourant.colourIndex), nano))
+      : euByName.get(euKey(normaliseName(colourant.inci), nano));
   return row && isInEffect(row, asOf) ? row : null;
 }

@@ -1,4 +1,10 @@
-import type { ColourantVerdict, ComplianceFinding } from './evaluation-result-schema';
+export { INTERPRETATION_NOTE } from './evaluation-result-schema';
+import type {
+  ColourantVerdict,
+  ComplianceFinding,
+  FindingStatus,
+} from './evaluation-result-schema';
+import { formatPercent } from './finding-builder';
 
 /** A verdict with the findings it raises. */
 export interface VerdictWithFindings {
@@ -6,5 +12,39 @@ export interface VerdictWithFindings {
   findings: ComplianceFinding[];
 }
 
-/** The fields of a verdict that do not depend on the rule. */
-export type VerdictBase = Pick<ColourantVerdict, 'subject' | 'colourIndex' | 'percent' | 'lines'>;
+/** The fields of a verdict that do not depend on the rule, and what the rules need to know. */
+export type VerdictBase = Pick<
+  ColourantVerdict,
+  'subject' | 'colourIndex' | 'percent' | 'lines'
+> & {
+  /** The colour's percent over all its forms; maxima apply to it. */
+  readonly totalPercent: number;
+  /** Lines of the colour's other forms, named in messages about the total. */
+  readonly otherFormLines: readonly number[];
+  /** Whether this occurrence is a nanomaterial. */
+  readonly nano: boolean;
+};
+
+/** The verdict record for a base and the rule's outcome (drops the rule-only fields). */
+export function verdictOf(
+  base: VerdictBase,
+  outcome: Pick<ColourantVerdict, 'listing' | 'verdict' | 'conditions' | 'source'> & {
+    status: FindingStatus | null;
+  },
+): ColourantVerdict {
+  return {
+    subject: base.subject,
+    colourIndex: base.colourIndex,
+    percent: base.percent,
+    ...(base.otherFormLines.length > 0 ? { totalPercent: base.totalPercent } : {}),
+    lines: base.lines,
+    ...outcome,
+  };
+}
+
+/** "2.5 % of the product" or, when other forms add to it, "2.5 % of the product with its other forms (lines 3, 4)". */
+export function amountText(base: VerdictBase): string {
+  if (base.otherFormLines.length === 0) return `${formatPercent(base.totalPercent)} of the product`;
+  const lines = base.otherFormLines.map((l) => l + 1).join(', ');
+  return `${formatPercent(base.totalPercent)} of the product counting the same colour on line${base.otherFormLines.length > 1 ? 's' : ''} ${lines}`;
+}

@@ -44,7 +44,7 @@ describe('US colour additives against the product exposure', () => {
   });
 
   it('blocks ultramarines in a lip product', () => {
-    // 21 CFR 73.2725 with 82.3(n): externally applied excludes the lips (sources file check value)
+    // 21 CFR 73.2725 with 82.3(n): externally applied excludes the lips
     expect(
       verdicts('US', aLipBalm(), aColourLine(0.5, 'Ultramarines', '77007')).verdicts[0]?.verdict,
     ).toBe('not-permitted');

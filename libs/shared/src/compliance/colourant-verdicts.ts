@@ -4,8 +4,8 @@ import type { ColourantVerdict, ComplianceFinding } from './evaluation-result-sc
 import type { ProductInput } from './evaluation-input-schema';
 import { makeFinding } from './finding-builder';
 import type { ExpandedIngredient } from './formula-expansion';
-import { normaliseName } from './ingredient-names';
-import type { VerdictWithFindings } from './colourant-verdict-types';
+import { baseColourIndex, normaliseName } from './ingredient-names';
+import { verdictOf, type VerdictWithFindings } from './colourant-verdict-types';
 import { euColourantVerdict } from './eu-colourant-rules';
 import { usColourantVerdict } from './us-colourant-rules';
 
@@ -15,6 +15,7 @@ export interface ColourantOccurrence {
   readonly inci: string;
   readonly usName: string | undefined;
   readonly colourIndex: string | undefined;
+  readonly nano: boolean;
   readonly percent: number;
   readonly lines: number[];
 }
@@ -26,7 +27,7 @@ export function collectColourants(
   const byKey = new Map<string, { first: ExpandedIngredient; percent: number; lines: number[] }>();
   for (const ingredient of ingredients) {
     if (!ingredient.isColourant) continue;
-    const key = `${ingredient.colourIndex ?? ''}|${normaliseName(ingredient.usName ?? ingredient.inci)}`;
+    const key = `${ingredient.colourIndex ?? ''}|${normaliseName(ingredient.usName ?? ingredient.inci)}|${ingredient.nano}`;
     const entry = byKey.get(key);
     if (entry) {
       entry.percent += ingredient.percent;
@@ -37,8 +38,17 @@ export function collectColourants(
   return [...byKey.values()].map(({ first, percent, lines }) => {
     const label = first.usName ?? first.inci;
     const ci = first.colourIndex;
-    const subject = ci !== undefined && !label.includes(ci) ? `${label} (CI ${ci})` : label;
-    return { subject, inci: first.inci, usName: first.usName, colourIndex: ci, percent, lines };
+    const named = ci !== undefined && !label.includes(ci) ? `${label} (CI ${ci})` : label;
+    const subject = first.nano ? `${named} (nano)` : named;
+    return {
+      subject,
+      inci: first.inci,
+      usName: first.usName,
+      colourIndex: ci,
+      nano: first.nano,
+      percent,
+      lines,
+    };
   });
 }
 
@@ -58,8 +68,10 @@ export function evaluateColourants(
   const findings: ComplianceFinding[] = [];
   for (const market of markets) {
     const list: ColourantVerdict[] = [];
+    const groups = groupByColour(market, colourants, asOf);
     for (const colourant of colourants) {
-      const result = verdictFor(market, colourant, product, asOf);
+      const group = groups.get(colourant)!;
+      const result = verdictFor(market, colourant, group, product, asOf);
       list.push(result.verdict);
       findings.push(...result.findings);
     }
@@ -83,9 +95,53 @@ export function evaluateColourants(
   return { verdicts, findings };
 }
 
+/** The forms of one colour in a market, summed. */
+interface ColourGroup {
+  readonly totalPercent: number;
+  readonly lines: readonly number[];
+}
+
+/**
+ * Groups the occurrences that are one colour in a market's eyes, so a limit applies to the colour in
+ * total: in the US, every form matching the same listing (a dye and its lakes: 21 CFR 74.2333(c),
+ * "3 percent total color by weight"); in the EU and UK, every form with the same CI number, salts and
+ * lakes included (Annex IV preamble: "a colorant shall include its salts and lakes"), nano apart.
+ */
+export function groupByColour(
+  market: ComplianceMarket,
+  colourants: readonly ColourantOccurrence[],
+  asOf: string,
+): Map<ColourantOccurrence, ColourGroup> {
+  const keyOf = (c: ColourantOccurrence): string => {
+    if (market === 'US') {
+      const match = matchUsColourant(c, asOf);
+      if (match.kind === 'listed') return `us:${match.row.id}`;
+      if (match.kind === 'not-permitted') return `us-np:${match.row.id}`;
+    } else if (c.colourIndex !== undefined) {
+      return `ci:${baseColourIndex(c.colourIndex)}|${c.nano}`;
+    }
+    return `own:${c.colourIndex ?? ''}|${normaliseName(c.usName ?? c.inci)}|${c.nano}`;
+  };
+  const byKey = new Map<string, ColourantOccurrence[]>();
+  for (const c of colourants) {
+    const key = keyOf(c);
+    const list = byKey.get(key);
+    if (list) list.push(c);
+    else byKey.set(key, [c]);
+  }
+  const groups = new Map<ColourantOccurrence, ColourGroup>();
+  for (const members of byKey.values()) {
+    const totalPercent = members.reduce((sum, c) => sum + c.percent, 0);
+    const lines = [...new Set(members.flatMap((c) => c.lines))].sort((a, b) => a - b);
+    for (const c of members) groups.set(c, { totalPercent, lines });
+  }
+  return groups;
+}
+
 function verdictFor(
   market: ComplianceMarket,
   colourant: ColourantOccurrence,
+  group: ColourGroup,
   product: ProductInput,
   asOf: string,
 ): VerdictWithFindings {
@@ -93,18 +149,20 @@ function verdictFor(
     subject: colourant.subject,
     colourIndex: colourant.colourIndex ?? null,
     percent: colourant.percent,
+    totalPercent: group.totalPercent,
+    otherFormLines: group.lines.filter((l) => !colourant.lines.includes(l)),
+    nano: colourant.nano,
     lines: colourant.lines,
   };
   if (market === 'CA') {
     return {
-      verdict: {
-        ...base,
+      verdict: verdictOf(base, {
         listing: null,
         verdict: 'not-checked',
         conditions: [],
         source: 'Cosmetic Ingredient Hotlist',
         status: null,
-      },
+      }),
       findings: [],
     };
   }

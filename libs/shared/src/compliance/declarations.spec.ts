@@ -1,5 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
+import { usCommonName } from './declarations';
 import { evaluateFormula } from './evaluate-formula';
 import {
   aBathBomb,
@@ -189,8 +190,11 @@ describe('declaration properties', () => {
             });
           });
           const result = evaluateFormula(aFormula(drafts, aBathBomb(), { markets: [market] }));
+          // 21 CFR 701.3: a US label prints the US name of an EU glossary name (Aqua as Water)
+          const label = (name: string) =>
+            normaliseName(market === 'US' ? usCommonName(name) : name);
           const expected = new Set(
-            lines.filter((l) => !l.incidental).flatMap((l) => l.parts.map(normaliseName)),
+            lines.filter((l) => !l.incidental).flatMap((l) => l.parts.map(label)),
           );
           const declared = result.declarations[market]!.ingredients.map(normaliseName);
           expect(new Set(declared).size).toBe(declared.length);

@@ -1,7 +1,18 @@
 import type { ComplianceMarket } from '../reference-data/reference-row';
 import type { Declaration } from './evaluation-result-schema';
 import type { ExpandedIngredient } from './formula-expansion';
+import { usLabelNames } from '../reference-data/us-label-names';
 import { baseColourIndex, compareColourIndex, normaliseName } from './ingredient-names';
+
+const usNameForEuName = new Map(usLabelNames.map((row) => [normaliseName(row.euName), row.usName]));
+
+/**
+ * The US common name for an EU glossary name that has one (Aqua → Water, Cera Alba → Beeswax), so a
+ * Latin glossary name is never printed on a US label without its US name (21 CFR 701.3(c), 701.30).
+ */
+export function usCommonName(name: string): string {
+  return usNameForEuName.get(normaliseName(name)) ?? name;
+}
 
 /** A fragrance allergen the label must name, with the grams that arrive through fragrances. */
 export interface AllergenAddition {
@@ -14,9 +25,10 @@ const EPSILON = 1e-9;
 
 /**
  * Label name of an ingredient in a market.
- * US (21 CFR 701.3): the US name where given, else the listed colour additive name, else INCI;
- * fragrance as "Fragrance" (701.3(a)). EU/UK (Art. 19(1)(g)) and CA: INCI; colourants by CI number;
- * fragrance as "Parfum", flavour as "Aroma".
+ * US (21 CFR 701.3): the US name where given, else the listed colour additive name (with its lake
+ * designation), else INCI with any EU-only glossary name replaced by its US name; fragrance as
+ * "Fragrance" (701.3(a)). EU/UK (Art. 19(1)(g)) and CA: INCI; colourants by CI number; fragrance as
+ * "Parfum", flavour as "Aroma"; in the EU/UK a nanomaterial is followed by "(nano)" (Art. 19(1)(g)).
  */
 export function labelNameFor(
   market: ComplianceMarket,
@@ -26,15 +38,17 @@ export function labelNameFor(
   if (market === 'US') {
     if (ingredient.fragranceWord === 'fragrance') return 'Fragrance';
     if (ingredient.fragranceWord === 'flavour') return 'Flavor';
-    return (
-      ingredient.usName ?? (ingredient.isColourant ? usListedName : undefined) ?? ingredient.inci
-    );
+    if (ingredient.usName !== undefined) return ingredient.usName;
+    if (ingredient.isColourant && usListedName !== undefined) return usListedName;
+    return usCommonName(ingredient.inci);
   }
   if (ingredient.fragranceWord === 'fragrance') return 'Parfum';
   if (ingredient.fragranceWord === 'flavour') return 'Aroma';
-  if (ingredient.isColourant && ingredient.colourIndex !== undefined)
-    return `CI ${baseColourIndex(ingredient.colourIndex)}`;
-  return ingredient.inci;
+  const name =
+    ingredient.isColourant && ingredient.colourIndex !== undefined
+      ? `CI ${baseColourIndex(ingredient.colourIndex)}`
+      : ingredient.inci;
+  return ingredient.nano && (market === 'EU' || market === 'UK') ? `${name} (nano)` : name;
 }
 
 interface Entry {

@@ -1,9 +1,20 @@
 import type { EuAnnexIvColourant } from '../reference-data/eu-annex-iv-colourants';
 import type { ComplianceMarket } from '../reference-data/reference-row';
-import type { VerdictBase, VerdictWithFindings } from './colourant-verdict-types';
+import {
+  amountText,
+  INTERPRETATION_NOTE,
+  verdictOf,
+  type VerdictBase,
+  type VerdictWithFindings,
+} from './colourant-verdict-types';
 import type { ProductInput } from './evaluation-input-schema';
-import { DEFER_TO_ASSESSOR, type ComplianceFinding } from './evaluation-result-schema';
-import { formatPercent, makeFinding } from './finding-builder';
+import {
+  DEFER_TO_ASSESSOR,
+  type ComplianceFinding,
+  type FindingStatus,
+} from './evaluation-result-schema';
+import { makeFinding } from './finding-builder';
+import { impliedContact } from './product-types';
 
 const FIELD_TEXT = {
   'not-eye': 'Not to be used in eye products',
@@ -12,8 +23,10 @@ const FIELD_TEXT = {
 } as const;
 
 /**
- * EU (and UK) verdict against an Annex IV entry's field of application and maximum. A product used in
- * the bath counts as applied on mucous membranes, as in the US (interpretation, shown as such).
+ * EU (and UK) verdict against an Annex IV entry's field of application and maximum. Maxima apply to the
+ * colourant's total over its salts and lakes (Annex IV preamble). A product used in the bath counts as
+ * applied on mucous membranes, as in the US: Batchproof's reading, labelled as an interpretation.
+ * A nanomaterial is covered only where Annex IV names the nano form.
  */
 export function euColourantVerdict(
   base: VerdictBase,
@@ -22,23 +35,30 @@ export function euColourantVerdict(
   market: ComplianceMarket,
 ): VerdictWithFindings {
   const finding = (f: Omit<Parameters<typeof makeFinding>[0], 'market' | 'subject' | 'lines'>) =>
-    makeFinding({ ...f, market, subject: base.subject, lines: base.lines });
+    makeFinding({
+      ...f,
+      market,
+      subject: base.subject,
+      lines: [...base.lines, ...base.otherFormLines],
+    });
   if (!row) {
     const source = 'Regulation (EC) No 1223/2009, Annex IV';
+    const nanoNote = base.nano
+      ? ' Annex IV covers the nano form of a colourant only where an entry names it (preamble to Annexes II to VI); ask your supplier which entry its nano grade falls under.'
+      : '';
     return {
-      verdict: {
-        ...base,
+      verdict: verdictOf(base, {
         listing: null,
         verdict: 'not-listed',
         conditions: [],
         source,
         status: null,
-      },
+      }),
       findings: [
         finding({
           code: 'COLOURANT_NOT_LISTED',
           severity: 'warn',
-          message: `${base.subject}: not in Batchproof's Annex IV list. Only colourants in Annex IV may be used; check the entry and its conditions.`,
+          message: `${base.subject}: not in Batchproof's Annex IV list. Only colourants in Annex IV may be used; check the entry and its conditions.${nanoNote}`,
           source,
           status: 'C',
         }),
@@ -46,34 +66,43 @@ export function euColourantVerdict(
     };
   }
   const source = `${row.source}${row.annexRef ? `, entry ${row.annexRef}` : ''}`;
-  const notPermitted = (why: string): VerdictWithFindings => ({
-    verdict: {
-      ...base,
-      listing: row.name,
-      verdict: 'not-permitted',
-      conditions: [],
-      source,
-      status: row.status,
-    },
-    findings: [
-      finding({
-        code: 'COLOURANT_NOT_PERMITTED',
-        severity: 'block',
-        message: `${base.subject}: ${why} ${DEFER_TO_ASSESSOR}`,
+  /** A block; an interpretation keeps the row's status when that is `M`, so it still only warns. */
+  const notPermitted = (why: string, interpretation = false): VerdictWithFindings => {
+    const status: FindingStatus =
+      interpretation && row.status !== 'M' ? 'interpretation' : row.status;
+    return {
+      verdict: verdictOf(base, {
+        listing: row.name,
+        verdict: 'not-permitted',
+        conditions: [],
         source,
-        status: row.status,
+        status,
       }),
-    ],
-  });
-  const mucous = product.inBath || product.contact.mucousMembranes || product.contact.lips;
-  if (row.field === 'not-eye' && product.contact.eyeArea)
+      findings: [
+        finding({
+          code: 'COLOURANT_NOT_PERMITTED',
+          severity: 'block',
+          message: `${base.subject}: ${why} ${DEFER_TO_ASSESSOR}${interpretation ? ` ${INTERPRETATION_NOTE}` : ''}`,
+          source,
+          status,
+        }),
+      ],
+    };
+  };
+  const implied = impliedContact(product.type);
+  const lips = product.contact.lips || implied.lips;
+  const eyeArea = product.contact.eyeArea || implied.eyeArea;
+  const statedMucous = product.contact.mucousMembranes || lips;
+  if (row.field === 'not-eye' && eyeArea)
     return notPermitted(`not permitted in eye products — "${FIELD_TEXT['not-eye']}" (${source}).`);
-  if (row.field === 'not-mucous-membranes' && mucous) {
-    const where = product.inBath
-      ? 'products used in the bath (they reach mucous membranes)'
-      : 'products applied on mucous membranes';
+  if (row.field === 'not-mucous-membranes' && (statedMucous || product.inBath)) {
+    if (statedMucous)
+      return notPermitted(
+        `not permitted in products applied on mucous membranes — "${FIELD_TEXT['not-mucous-membranes']}" (${source}).`,
+      );
     return notPermitted(
-      `not permitted in ${where} — "${FIELD_TEXT['not-mucous-membranes']}" (${source}).`,
+      `not permitted in products used in the bath, which Batchproof treats as applied on mucous membranes — "${FIELD_TEXT['not-mucous-membranes']}" (${source}).`,
+      true,
     );
   }
   if (row.field === 'rinse-off-only' && product.use === 'leave-on')
@@ -81,12 +110,21 @@ export function euColourantVerdict(
   const conditions: string[] = [];
   const findings: ComplianceFinding[] = [];
   if (row.maxPercent !== undefined) {
-    if (base.percent > row.maxPercent) {
+    if (base.totalPercent > row.maxPercent * (1 + 1e-9)) {
       return notPermitted(
-        `${formatPercent(base.percent)} of the product, above the ${row.maxPercent} % maximum in ${source}.`,
+        `${amountText(base)}, above the ${row.maxPercent} % maximum in ${source}.`,
       );
     }
     conditions.push(`At most ${row.maxPercent} % of the finished product`);
+  }
+  if (row.lipstick && lips) {
+    const max = row.lipstick.maxPercent;
+    if (max !== undefined && base.totalPercent > max * (1 + 1e-9)) {
+      return notPermitted(
+        `${amountText(base)}, above the ${max} % Annex IV allows in lip products — "${row.lipstick.wording}" (${source}).`,
+      );
+    }
+    conditions.push(row.lipstick.wording);
   }
   if (row.field !== 'all') conditions.push(FIELD_TEXT[row.field]);
   if (row.conditions) conditions.push(row.conditions);
@@ -102,14 +140,13 @@ export function euColourantVerdict(
     );
   }
   return {
-    verdict: {
-      ...base,
+    verdict: verdictOf(base, {
       listing: row.name,
       verdict: conditions.length > 0 ? 'permitted-with-conditions' : 'permitted',
       conditions,
       source,
       status: row.status,
-    },
+    }),
     findings,
   };
 }

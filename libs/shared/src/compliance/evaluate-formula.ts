@@ -9,6 +9,9 @@ import { makeFinding } from './finding-builder';
 import { expandFormula, type ExpandedIngredient } from './formula-expansion';
 import { checkFragranceMaximums } from './fragrance-maximums';
 import { checkRequiredWarnings } from './required-warning-checks';
+import { checkRestrictedSubstances } from './restricted-substances';
+import { allergenDataFindings } from './scent-materials';
+import { soapFindings } from './soap-rules';
 
 const SEVERITY_ORDER = { block: 0, warn: 1, info: 2 } as const;
 
@@ -44,13 +47,21 @@ export function evaluateFormula(input: EvaluationInput): EvaluationResult {
     for (const ingredient of ingredients) {
       if (!ingredient.isColourant || ingredient.usName !== undefined) continue;
       const match = matchUsColourant(ingredient, asOf);
-      if (match.kind === 'listed') usListedNames.set(ingredient, match.row.name);
+      // 21 CFR 82.51: a lake is named by its straight colour followed by the lake designation.
+      if (match.kind === 'listed')
+        usListedNames.set(
+          ingredient,
+          match.lakeName ? `${match.row.name} ${match.lakeName}` : match.row.name,
+        );
     }
   }
 
   const colourants = evaluateColourants(collectColourants(ingredients), product, markets, asOf);
   findings.push(...colourants.findings);
   findings.push(...checkFragranceMaximums(input, totalGrams));
+  findings.push(...allergenDataFindings(input, markets));
+  const restricted = checkRestrictedSubstances(input, ingredients, totalGrams, markets);
+  findings.push(...restricted.findings);
   const allergens = evaluateAllergens(
     sumAllergens(input, ingredients, totalGrams),
     product,
@@ -60,6 +71,12 @@ export function evaluateFormula(input: EvaluationInput): EvaluationResult {
   findings.push(...allergens.findings);
   const warnings = checkRequiredWarnings(product, ingredients, markets, asOf);
   findings.push(...warnings.findings);
+  for (const market of markets) {
+    const list = warnings.warnings[market] ?? [];
+    for (const text of restricted.labelWarnings[market] ?? [])
+      if (!list.includes(text)) list.push(text);
+    warnings.warnings[market] = list;
+  }
 
   const declarations: Partial<Record<ComplianceMarket, Declaration>> = {};
   const incidental = ingredients.filter((i) => i.incidental);
@@ -87,7 +104,8 @@ export function evaluateFormula(input: EvaluationInput): EvaluationResult {
     }
   }
 
-  findings.sort((a, b) => SEVERITY_ORDER[a.severity] - SEVERITY_ORDER[b.severity]);
+  const checked = soapFindings(product, markets, findings);
+  checked.sort((a, b) => SEVERITY_ORDER[a.severity] - SEVERITY_ORDER[b.severity]);
   return {
     asOf,
     markets,
@@ -97,6 +115,6 @@ export function evaluateFormula(input: EvaluationInput): EvaluationResult {
     allergens: allergens.allergens,
     colourants: colourants.verdicts,
     warnings: warnings.warnings,
-    findings,
+    findings: checked,
   };
 }

@@ -1,9 +1,18 @@
 import { z } from 'zod';
 import { complianceMarketSchema } from '../reference-data/reference-row';
 import { parseColourIndex } from './ingredient-names';
+import { productTypeSchema } from './product-types';
+
+/** A CAS Registry Number as written, e.g. 122-99-6. */
+const casSchema = z
+  .string()
+  .trim()
+  .regex(/^\d{2,7}-\d{2}-\d$/, { error: 'Enter a CAS number such as 122-99-6' });
 
 /** Largest line weight the engine accepts: 1,000 tonnes, far above any small batch, keeps sums finite. */
 const MAX_GRAMS = 1e9;
+/** Most lines a formula may have: far more than any real formula, small enough to check quickly. */
+export const MAX_LINES = 200;
 /** Blend components must add up to 100 % within this tolerance. */
 export const BLEND_TOLERANCE_PERCENT = 0.01;
 
@@ -32,6 +41,9 @@ export const blendComponentSchema = z.object({
   inci: text('INCI name'),
   usName: text('US name').optional(),
   colourIndex: colourIndexSchema.optional(),
+  cas: casSchema.optional(),
+  /** Whether this component is a nanomaterial: EU/UK lists name it followed by "(nano)" (Art. 19(1)(g)). */
+  nano: z.boolean().optional(),
   functions: z.array(z.string().trim().min(1)).optional(),
   percent: percentSchema.refine((p) => p > 0, {
     error: 'A component must be more than 0 % of its blend',
@@ -54,8 +66,14 @@ export const fragranceAllergenInputSchema = z.object({
 /** Fragrance data from the supplier's IFRA certificate and allergen declaration. */
 export const fragranceInputSchema = z
   .object({
+    /** Maxima by IFRA category from the certificate; empty when no certificate is entered. */
     maxPercentByIfraCategory: z.record(z.string().trim().min(1), percentSchema),
     allergens: z.array(fragranceAllergenInputSchema),
+    /**
+     * Whether `allergens` comes from the supplier's allergen declaration. False when only the IFRA
+     * certificate is entered: an empty list then means "unknown", not "none".
+     */
+    allergensDeclared: z.boolean().default(true),
   })
   .superRefine((fragrance, ctx) => {
     const sum = fragrance.allergens.reduce((total, a) => total + a.percent, 0);
@@ -75,7 +93,12 @@ export const materialInputSchema = z
     inci: text('INCI name'),
     usName: text('US name').optional(),
     functions: z.array(z.string().trim().min(1)),
+    /** The material's kind as the workshop files it; `fragrance` and `essential-oil` mark scent materials. */
+    category: z.string().trim().min(1).max(50).optional(),
     colourIndex: colourIndexSchema.optional(),
+    cas: casSchema.optional(),
+    /** Whether the material is a nanomaterial (Regulation (EC) No 1223/2009, Art. 2(1)(k), 19(1)(g)). */
+    nano: z.boolean().optional(),
     components: z
       .array(blendComponentSchema)
       .min(1, { error: 'A blend needs at least one component' })
@@ -108,6 +131,10 @@ export const formulaLineInputSchema = z.object({
 /** The product the formula makes: how it is used decides which rules apply. */
 export const productInputSchema = z.object({
   name: text('Product name'),
+  /** What kind of product it is; listings that name product types are applied to it. */
+  type: productTypeSchema.default('other'),
+  /** A soap labelled and sold solely as soap: not a cosmetic in the US (21 CFR 701.20). */
+  soldAsSoap: z.boolean().default(false),
   use: z.enum(['rinse-off', 'leave-on'], { error: 'Choose rinse-off or leave-on' }),
   contact: z.object({ mucousMembranes: z.boolean(), eyeArea: z.boolean(), lips: z.boolean() }),
   /** Whether it is used in the bath (bath bomb, salts, bubble bar): treated as mucous-membrane contact. */
@@ -132,7 +159,10 @@ export const evaluationInputSchema = z
       .min(1, { error: 'Choose at least one market' })
       .transform((markets) => [...new Set(markets)]),
     product: productInputSchema,
-    lines: z.array(formulaLineInputSchema).min(1, { error: 'Add at least one line' }),
+    lines: z
+      .array(formulaLineInputSchema)
+      .min(1, { error: 'Add at least one line' })
+      .max(MAX_LINES, { error: `A formula has at most ${MAX_LINES} lines` }),
   })
   .superRefine((input, ctx) => {
     const total = input.lines.reduce((sum, line) => sum + line.grams, 0);

@@ -1,6 +1,15 @@
 import { z } from 'zod';
 import { complianceMarketSchema, referenceStatusSchema } from '../reference-data/reference-row';
 
+/**
+ * How sure a finding is: the status of the reference row it rests on, or `interpretation` when it
+ * rests on Batchproof's own reading of a rule (a product used in the bath touches mucous membranes).
+ * An interpretation may block, and the owner may record a reasoned override at release.
+ */
+export const findingStatusSchema = z.enum([...referenceStatusSchema.options, 'interpretation']);
+/** How sure a finding is. */
+export type FindingStatus = z.infer<typeof findingStatusSchema>;
+
 /** Stable codes for every finding the engine can raise. */
 export const findingCodeSchema = z.enum([
   'COLOURANT_NOT_PERMITTED',
@@ -24,6 +33,15 @@ export const findingCodeSchema = z.enum([
   'WARNING_FOAMING_BATH_ADULTS_ONLY',
   'WARNING_SURFACTANT_ROLE_CHECK',
   'DECLARATION_INCIDENTAL_OMITTED',
+  'FRAGRANCE_ALLERGEN_DATA_MISSING',
+  'RESTRICTED_OVER_MAXIMUM',
+  'RESTRICTED_NOT_ALLOWED',
+  'RESTRICTED_CONDITION',
+  'RESTRICTED_UPCOMING',
+  'PROHIBITED_SUBSTANCE',
+  'PROHIBITED_UPCOMING',
+  'WARNING_FOAMING_BATH_DIRECTIONS',
+  'SOAP_NOT_A_COSMETIC',
 ]);
 /** A finding code. */
 export type FindingCode = z.infer<typeof findingCodeSchema>;
@@ -44,8 +62,8 @@ export const complianceFindingSchema = z.object({
   message: z.string(),
   /** The published rule it rests on. */
   source: z.string(),
-  /** How sure we are of that rule; `M` findings never block. */
-  status: referenceStatusSchema,
+  /** How sure we are of that rule; `M` findings never block; `interpretation` is our reading. */
+  status: findingStatusSchema,
   /** Indexes of the formula lines involved. */
   lines: z.array(z.number().int()),
 });
@@ -97,9 +115,15 @@ export const colourantVerdictSchema = z.object({
     'not-checked',
   ]),
   conditions: z.array(z.string()),
+  /** Percent of the finished product in this form (a dye, or its lake, or one blend's share). */
   percent: z.number(),
+  /**
+   * Percent of the same colour in all its forms (the dye and its lakes and salts, every blend it comes
+   * in): limits apply to this total (21 CFR 74.2333(c) "total color"; Annex IV preamble).
+   */
+  totalPercent: z.number().optional(),
   source: z.string(),
-  status: referenceStatusSchema.nullable(),
+  status: findingStatusSchema.nullable(),
   lines: z.array(z.number().int()),
 });
 /** A colourant verdict. */
@@ -131,3 +155,7 @@ export type EvaluationResult = z.infer<typeof evaluationResultSchema>;
 /** Sentence added to findings that could hurt someone. */
 export const DEFER_TO_ASSESSOR =
   'This could harm the people who use the product: ask your qualified safety assessor and check the law where you sell before releasing it.';
+
+/** Added to the message of a finding whose status is `interpretation`. */
+export const INTERPRETATION_NOTE =
+  "This rests on Batchproof's reading, not on the regulation's words: the owner may record a reasoned override at release, ideally with the safety assessor's view.";

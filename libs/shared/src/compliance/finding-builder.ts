@@ -1,5 +1,10 @@
-import type { ComplianceMarket, ReferenceStatus } from '../reference-data/reference-row';
-import type { ComplianceFinding, FindingCode, FindingSeverity } from './evaluation-result-schema';
+import type { ComplianceMarket } from '../reference-data/reference-row';
+import type {
+  ComplianceFinding,
+  FindingCode,
+  FindingSeverity,
+  FindingStatus,
+} from './evaluation-result-schema';
 
 /** Appended to a blocking message whose rule is from memory, which therefore only warns. */
 export const FROM_MEMORY_NOTE =
@@ -16,7 +21,7 @@ export function makeFinding(finding: {
   subject: string;
   message: string;
   source: string;
-  status: ReferenceStatus;
+  status: FindingStatus;
   lines: readonly number[];
 }): ComplianceFinding {
   const demoted = finding.status === 'M' && finding.severity === 'block';

@@ -13,7 +13,7 @@ describe('molar masses from atomic weights', () => {
     ['CO2', 44.009],
     ['H2O', 18.015],
   ])('%s is %d g/mol and agrees with mf-parser', (formula, expected) => {
-    // regulatory sources file §11 [CALC] from CIAAW standard atomic weights
+    // CIAAW standard atomic weights [CALC]
     expect(molarMass(formula)).toBeCloseTo(expected, 3);
     // mf-parser uses slightly different atomic weights: agree within 0.01 %
     const reference = new MF(formula).getInfo().mass;
@@ -21,7 +21,7 @@ describe('molar masses from atomic weights', () => {
   });
 
   it('balances 3 NaHCO3 + C6H8O7 → Na3C6H5O7 + 3 H2O + 3 CO2 by mass', () => {
-    // regulatory sources file §11: mass balance 444.140 = 444.140 [CALC]
+    // Conservation of mass over 3 NaHCO3 + C6H8O7 → Na3C6H5O7 + 3 H2O + 3 CO2 (CIAAW atomic weights): 444.140 = 444.140 [CALC]
     const left = 3 * molarMass('NaHCO3') + molarMass('C6H8O7');
     const right = molarMass('Na3C6H5O7') + 3 * molarMass('H2O') + 3 * molarMass('CO2');
     expect(left).toBeCloseTo(444.14, 2);
@@ -35,7 +35,7 @@ describe('molar masses from atomic weights', () => {
 
 describe('fizzBalance', () => {
   it('finds the stoichiometric ratio 1.3117 : 1 baking soda to anhydrous citric acid balanced', () => {
-    // regulatory sources file §11 [CALC]: 252.017 / 192.123 = 1.3117
+    // Stoichiometry with CIAAW atomic weights [CALC]: 252.017 / 192.123 = 1.3117
     const result = fizzBalance([
       { inci: 'Sodium Bicarbonate', grams: 131.17 },
       { inci: 'Citric Acid', grams: 100 },
@@ -45,7 +45,7 @@ describe('fizzBalance', () => {
   });
 
   it('needs 76.23 g anhydrous or 83.38 g monohydrate citric acid per 100 g baking soda, releasing 52.39 g CO2', () => {
-    // regulatory sources file §11 [CALC]
+    // Stoichiometry with CIAAW atomic weights [CALC]
     const anhydrous = fizzBalance([
       { inci: 'Sodium Bicarbonate', grams: 100 },
       { inci: 'Citric Acid', grams: 1000 },

@@ -10,6 +10,10 @@ export interface ExpandedIngredient {
   readonly inci: string;
   readonly usName: string | undefined;
   readonly colourIndex: string | undefined;
+  /** CAS number, when the material or component gives one. */
+  readonly cas: string | undefined;
+  /** Whether it is a nanomaterial (named with "(nano)" in EU/UK lists). */
+  readonly nano: boolean;
   readonly functions: readonly string[];
   /** Grams in the batch. */
   readonly grams: number;
@@ -49,6 +53,8 @@ export function expandFormula(input: EvaluationInput): ExpandedFormula {
         inci: material.inci,
         usName: material.usName,
         colourIndex: material.colourIndex,
+        cas: material.cas,
+        nano: material.nano,
         functions: material.functions,
         percent: 100,
         incidental: material.incidental,
@@ -63,6 +69,8 @@ export function expandFormula(input: EvaluationInput): ExpandedFormula {
         inci: part.inci,
         usName: part.usName,
         colourIndex: part.colourIndex,
+        cas: part.cas,
+        nano: Boolean(part.nano),
         functions,
         grams,
         percent: (grams / totalGrams) * 100,

@@ -1,7 +1,8 @@
 import type { EvaluationInput } from './evaluation-input-schema';
 import { DEFER_TO_ASSESSOR, type ComplianceFinding } from './evaluation-result-schema';
 import { formatPercent, makeFinding } from './finding-builder';
-import { fragranceWordOf, normaliseName } from './ingredient-names';
+import { normaliseName } from './ingredient-names';
+import { scentReasonOf } from './scent-materials';
 
 /** `Category 9`, `cat. 5a`, ` 9 ` → `9`, `5A`: how IFRA category keys are compared. */
 export function normaliseIfraCategory(category: string): string {
@@ -18,7 +19,8 @@ const IFRA_SOURCE =
 /**
  * Checks each fragrance's percent of the finished product (summed when the same fragrance is on
  * several lines) against the maximum the user entered from the supplier's IFRA certificate for the
- * product's category. Over the maximum blocks; no maximum for the category warns.
+ * product's category. Over the maximum blocks; no certificate, or no maximum for the category, warns.
+ * Fragrant materials are recognised as in {@link scentReasonOf} (fragrances, essential oils, extracts).
  */
 export function checkFragranceMaximums(
   input: EvaluationInput,
@@ -32,13 +34,12 @@ export function checkFragranceMaximums(
   >();
   input.lines.forEach((line, index) => {
     const { material } = line;
-    const isFragrance = material.fragrance !== undefined || fragranceWordOf(material.inci) !== null;
-    if (!isFragrance || line.grams <= 0) return;
+    if (line.grams <= 0 || scentReasonOf(material) === null) return;
     const key = normaliseName(material.name);
     const entry = fragrances.get(key) ?? { name: material.name, grams: 0, lines: [], maxima: null };
     entry.grams += line.grams;
     entry.lines.push(index);
-    if (material.fragrance) {
+    if (material.fragrance && Object.keys(material.fragrance.maxPercentByIfraCategory).length > 0) {
       entry.maxima = {};
       for (const [cat, max] of Object.entries(material.fragrance.maxPercentByIfraCategory))
         entry.maxima[normaliseIfraCategory(cat)] = max;
@@ -55,7 +56,7 @@ export function checkFragranceMaximums(
           ...base,
           code: 'FRAGRANCE_DATA_MISSING',
           severity: 'warn',
-          message: `${fragrance.name}: no IFRA certificate or allergen data entered, so Batchproof cannot check its maximum or which allergens the label must name. Enter them from the supplier's IFRA certificate and allergen declaration.`,
+          message: `${fragrance.name}: no IFRA certificate entered, so Batchproof cannot check it against the maximum for Category ${category}. Ask the supplier for its IFRA certificate of conformity and enter the maxima on the material.`,
           source: IFRA_SOURCE,
           status: 'C',
         }),

@@ -15,7 +15,7 @@ function messagesFor(input: Gs1ElementInput): { path: string; message: string }[
 
 describe('gs1CheckDigit (GS1 General Specifications §7.9.1)', () => {
   it.each([
-    ['0952123454321', 3], // [CALC] regulatory sources file §10, worked example 1
+    ['0952123454321', 3], // [CALC] GS1 General Specifications, section 7.9 check digit calculation (mod 10, weights 3 and 1)
     ['400638133393', 1], // GS1 General Specifications §7.9.1, worked example 2
     ['629104150021', 3], // GS1 General Specifications §7.9.1, worked example 3
   ])('gives %s the check digit %d', (digits, expected) => {
@@ -42,7 +42,7 @@ describe('gs1CheckDigit (GS1 General Specifications §7.9.1)', () => {
 
 describe('gs1ElementString', () => {
   it('builds (01)(17)(10) with the lot last so no separator is needed', () => {
-    // regulatory sources file §10 element-string example [CALC] on GS1 Barcode Syntax Dictionary rules
+    // GS1 General Specifications (element strings, FNC1 and predefined lengths) and GS1 Barcode Syntax Dictionary [CALC]
     const result = gs1ElementString({
       gtin: '09521234543213',
       expiry: '2026-07-31',
@@ -99,5 +99,36 @@ describe('gs1ElementString', () => {
       path: 'expiry',
       message: 'Expiry day must be 01 to 28 for that month',
     });
+  });
+});
+
+describe('best before, AI (15)', () => {
+  it('encodes a best-before date with AI (15), before the lot', () => {
+    // GS1 General Specifications: AI (15) BEST BEFORE or BEST BY, N6 YYMMDD
+    const result = gs1ElementString({
+      gtin: '09521234543213',
+      bestBefore: '2027-03-15',
+      lot: 'C3',
+    });
+    expect(result.hri).toBe('(01)09521234543213(15)270315(10)C3');
+    expect(result.elements.map((e) => e.ai)).toEqual(['01', '15', '10']);
+  });
+
+  it('can carry both (15) and (17), in ascending AI order', () => {
+    // GS1 General Specifications: predefined-length AIs (15) and (17) need no separator
+    const result = gs1ElementString({
+      gtin: '09521234543213',
+      bestBefore: '2027-01',
+      expiry: '2027-06-30',
+      lot: 'D4',
+    });
+    expect(result.hri).toBe('(01)09521234543213(15)270100(17)270630(10)D4');
+  });
+
+  it('refuses an impossible best-before date with a message naming it', () => {
+    // GS1 General Specifications: YYMMDD with a valid month
+    expect(() =>
+      gs1ElementString({ gtin: '09521234543213', bestBefore: '2027-13-01', lot: 'E5' }),
+    ).toThrow(/Best-before date month must be 01 to 12/);
   });
 });

@@ -23,6 +23,44 @@ function describeChar(char: string): string {
   return char === ' ' ? 'space' : `"${char}"`;
 }
 
+/** A GS1 date (AI 15 or 17) as `YYYY-MM-DD`, or `YYYY-MM` when only the month is known (day 00). */
+const gs1DateSchema = (what: string) => {
+  const What = what[0]!.toUpperCase() + what.slice(1);
+  return z
+    .string()
+    .trim()
+    .superRefine((expiry, ctx) => {
+      const match = /^(\d{4})-(\d{2})(?:-(\d{2}))?$/.exec(expiry);
+      if (!match) {
+        ctx.addIssue({
+          code: 'custom',
+          message: `Enter the ${what} as YYYY-MM-DD, or YYYY-MM for a month`,
+        });
+        return;
+      }
+      const [year, month, day] = [
+        Number(match[1]),
+        Number(match[2]),
+        match[3] === undefined ? undefined : Number(match[3]),
+      ];
+      if (year < 2000 || year > 2099)
+        ctx.addIssue({
+          code: 'custom',
+          message: `${What} year must be between 2000 and 2099 (the AI stores two digits)`,
+        });
+      if (month < 1 || month > 12)
+        ctx.addIssue({ code: 'custom', message: `${What} month must be 01 to 12` });
+      if (day !== undefined) {
+        const last = new Date(Date.UTC(year, month, 0)).getUTCDate();
+        if (day < 1 || day > last)
+          ctx.addIssue({
+            code: 'custom',
+            message: `${What} day must be 01 to ${last} for that month`,
+          });
+      }
+    });
+};
+
 /** Input of {@link gs1ElementString}. */
 export const gs1ElementInputSchema = z.object({
   /** A complete GTIN-8, -12, -13 or -14 including its check digit. */
@@ -46,41 +84,10 @@ export const gs1ElementInputSchema = z.object({
       }
     })
     .optional(),
-  /** Expiry as `YYYY-MM-DD`, or `YYYY-MM` when only the month is known (encoded with day 00). */
-  expiry: z
-    .string()
-    .trim()
-    .superRefine((expiry, ctx) => {
-      const match = /^(\d{4})-(\d{2})(?:-(\d{2}))?$/.exec(expiry);
-      if (!match) {
-        ctx.addIssue({
-          code: 'custom',
-          message: 'Enter the expiry as YYYY-MM-DD, or YYYY-MM for a month',
-        });
-        return;
-      }
-      const [year, month, day] = [
-        Number(match[1]),
-        Number(match[2]),
-        match[3] === undefined ? undefined : Number(match[3]),
-      ];
-      if (year < 2000 || year > 2099)
-        ctx.addIssue({
-          code: 'custom',
-          message: 'Expiry year must be between 2000 and 2099 (AI (17) stores two digits)',
-        });
-      if (month < 1 || month > 12)
-        ctx.addIssue({ code: 'custom', message: 'Expiry month must be 01 to 12' });
-      if (day !== undefined) {
-        const last = new Date(Date.UTC(year, month, 0)).getUTCDate();
-        if (day < 1 || day > last)
-          ctx.addIssue({
-            code: 'custom',
-            message: `Expiry day must be 01 to ${last} for that month`,
-          });
-      }
-    })
-    .optional(),
+  /** Expiry (AI 17) as `YYYY-MM-DD`, or `YYYY-MM` when only the month is known (encoded with day 00). */
+  expiry: gs1DateSchema('expiry').optional(),
+  /** Best before (AI 15), the same way: for a durability date rather than an expiry. */
+  bestBefore: gs1DateSchema('best-before date').optional(),
   /** Batch/lot: 1 to 20 characters of GS1 character set 82. */
   lot: z.string({ error: 'Enter a lot code' }).superRefine((lot, ctx) => {
     if (lot.length === 0) {
@@ -110,18 +117,21 @@ export interface Gs1ElementString {
   readonly hri: string;
   /** Data to encode after the leading FNC1; AI (10) goes last so no separator is needed. */
   readonly data: string;
-  readonly elements: { ai: '01' | '17' | '10'; title: string; value: string }[];
+  readonly elements: { ai: '01' | '15' | '17' | '10'; title: string; value: string }[];
   /** Things that are valid to encode but worth knowing. */
   readonly warnings: string[];
 }
 
+const DAY_00 = 'Day 00 means the last day of that month.';
+
 /**
- * Builds the GS1 element string (01) GTIN-14 + (17) expiry YYMMDD + (10) batch/lot, in that order so
- * the variable-length lot comes last (GS1 General Specifications; GS1 Barcode Syntax Dictionary).
+ * Builds the GS1 element string (01) GTIN-14 + (15) best before and/or (17) expiry YYMMDD + (10)
+ * batch/lot, in that order so the variable-length lot comes last (GS1 General Specifications;
+ * GS1 Barcode Syntax Dictionary: AI 15 BEST BEFORE or BEST BY, AI 17 USE BY or EXPIRY).
  * Throws a ZodError with field paths and plain messages on invalid input.
  */
 export function gs1ElementString(input: Gs1ElementInput): Gs1ElementString {
-  const { gtin, expiry, lot } = gs1ElementInputSchema.parse(input);
+  const { gtin, expiry, bestBefore, lot } = gs1ElementInputSchema.parse(input);
   const elements: Gs1ElementString['elements'] = [];
   const warnings: string[] = [];
   if (gtin !== undefined) elements.push({ ai: '01', title: 'GTIN', value: gtin.padStart(14, '0') });
@@ -129,10 +139,15 @@ export function gs1ElementString(input: Gs1ElementInput): Gs1ElementString {
     warnings.push(
       'GS1 requires AI (10) batch/lot to be used together with a GTIN (01); without one this is an internal code, not a valid GS1 barcode.',
     );
-  if (expiry !== undefined) {
-    const [year, month, day = '00'] = expiry.split('-') as [string, string, string?];
-    elements.push({ ai: '17', title: 'USE BY or EXPIRY', value: `${year.slice(2)}${month}${day}` });
-    if (day === '00') warnings.push('Day 00 means the last day of that month.');
+  const dates = [
+    { ai: '15' as const, title: 'BEST BEFORE or BEST BY', date: bestBefore },
+    { ai: '17' as const, title: 'USE BY or EXPIRY', date: expiry },
+  ];
+  for (const { ai, title, date } of dates) {
+    if (date === undefined) continue;
+    const [year, month, day = '00'] = date.split('-') as [string, string, string?];
+    elements.push({ ai, title, value: `${year.slice(2)}${month}${day}` });
+    if (day === '00' && !warnings.includes(DAY_00)) warnings.push(DAY_00);
   }
   elements.push({ ai: '10', title: 'BATCH/LOT', value: lot });
   return {

@@ -1,4 +1,5 @@
 export * from './evaluation-input-schema';
+export * from './product-types';
 export * from './evaluation-result-schema';
 export { evaluateFormula } from './evaluate-formula';
 export { normaliseIfraCategory } from './fragrance-maximums';

@@ -5,7 +5,7 @@ import { marginOfSafety } from './margin-of-safety';
 // SED = A × C/100 × DAp/100 and MoS = PoD_sys / SED: from memory (SCCS Notes of Guidance, SCCS/1647/22).
 describe('marginOfSafety (SCCS Notes of Guidance)', () => {
   it('computes SED 0.0279 and MoS 1792 for a shower gel at 1 % (worked example E1)', () => {
-    // regulatory sources file §8 E1 [CALC] on [M] exposure A = 2.79 mg/kg bw/day
+    // SCCS Notes of Guidance (SED = A × C / 100) [CALC]; exposure A = 2.79 mg/kg bw/day from memory
     const result = marginOfSafety({
       exposureMgPerKgDay: 2.79,
       concentrationPercent: 1,
@@ -18,7 +18,7 @@ describe('marginOfSafety (SCCS Notes of Guidance)', () => {
   });
 
   it('flags MoS 97.4 for a body lotion at 0.5 % and defers to the assessor (worked example E2)', () => {
-    // regulatory sources file §8 E2 [CALC]; threshold 100 from memory
+    // SCCS Notes of Guidance (MoS = POD / SED) [CALC]; threshold 100 from memory
     const result = marginOfSafety({
       exposureMgPerKgDay: 123.2,
       concentrationPercent: 0.5,

@@ -1,11 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { ZodError } from 'zod';
-import { netQuantityStatement } from './net-quantity-statement';
+import { largestWholeUnits, netQuantityStatement } from './net-quantity-statement';
 import { US_UNITS } from './us-customary-units';
 
 describe('netQuantityStatement (FPLA; 21 CFR 701.13)', () => {
   it('declares 4 oz of a solid as "Net Wt. 4 oz (113 g)", rounding the grams down', () => {
-    // regulatory sources file 6.2 check value [CALC]: 4 oz = 113.3980925 g; NIST: never overstate, round down
+    // NIST Handbook 133 / 44 (1 oz = 28.349523125 g exactly) [CALC]: 4 oz = 113.3980925 g; NIST: never overstate, round down
     const statement = netQuantityStatement({ amount: 4 * US_UNITS.ounceGrams, unit: 'g' });
     expect(statement.text).toBe('Net Wt. 4 oz (113 g)');
     expect(statement.kind).toBe('weight');
@@ -19,7 +19,7 @@ describe('netQuantityStatement (FPLA; 21 CFR 701.13)', () => {
   });
 
   it('declares 1 lb as "16 oz (1 lb) 453 g" and adds pounds from 16 oz', () => {
-    // regulatory sources file 6.2 check value; dual oz + lb form from memory
+    // NIST Handbook 44 (1 lb = 16 oz = 453.59237 g) [CALC]; dual oz + lb form from memory
     expect(netQuantityStatement({ amount: US_UNITS.poundGrams, unit: 'g' }).text).toBe(
       'Net Wt. 16 oz (1 lb) 453 g',
     );
@@ -29,7 +29,7 @@ describe('netQuantityStatement (FPLA; 21 CFR 701.13)', () => {
   });
 
   it('declares a liquid in fluid ounces: 8 fl oz (236 mL)', () => {
-    // regulatory sources file 6.2 check value [CALC]: 8 fl oz = 236.5882365 mL; FPLA: liquids by fluid measure
+    // NIST Handbook 44 (1 US fl oz = 29.5735295625 mL) [CALC]: 8 fl oz = 236.5882365 mL; FPLA: liquids by fluid measure
     const statement = netQuantityStatement({
       amount: 8 * US_UNITS.fluidOunceMillilitres,
       unit: 'mL',
@@ -79,5 +79,28 @@ describe('netQuantityStatement (FPLA; 21 CFR 701.13)', () => {
       expect(error).toBeInstanceOf(ZodError);
       expect((error as ZodError).issues[0]?.path).toEqual(['amount']);
     }
+  });
+});
+
+describe('net quantity for volumes and for each market', () => {
+  it('adds the largest whole US units for a liquid of a quart or more', () => {
+    // NIST Handbook 44 (1 qt = 32 fl oz, 1 gal = 128 fl oz) [CALC]; FPLA "largest whole unit" form from memory
+    const quart = netQuantityStatement({ amount: 32 * US_UNITS.fluidOunceMillilitres, unit: 'mL' });
+    expect(quart.text).toBe('Net 32 fl oz (1 qt) 946 mL');
+    const litre = netQuantityStatement({ amount: 1000, unit: 'mL' });
+    expect(litre.text).toBe('Net 33.8 fl oz (1 qt 1.8 fl oz) 1000 mL');
+    expect(largestWholeUnits(160)).toBe('1 gal 1 qt');
+    expect(largestWholeUnits(48)).toBe('1 qt 1 pt');
+    expect(largestWholeUnits(20)).toBe('1 pt 4 fl oz');
+  });
+
+  it('puts the metric quantity first, on its own, for the EU, UK and Canada', () => {
+    // Regulation (EC) No 1223/2009, Art. 19(1)(b): nominal content by weight or volume
+    const statement = netQuantityStatement({ amount: 250, unit: 'mL' });
+    expect(statement.byMarket.EU).toBe('250 ml');
+    expect(statement.byMarket.UK).toBe('250 ml');
+    expect(statement.byMarket.CA).toBe('250 mL');
+    expect(statement.byMarket.US).toBe(statement.text);
+    expect(statement.notes.join(' ')).toMatch(/Poids net/);
   });
 });

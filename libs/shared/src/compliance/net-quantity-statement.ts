@@ -30,6 +30,12 @@ export interface NetQuantityStatement {
   readonly minimumTypeHeight: { inches: number; label: string; status: ReferenceStatus } | null;
   /** Things the maker should know. */
   readonly notes: string[];
+  /**
+   * The statement each market prints: the US dual statement; metric first, on its own, for the EU and
+   * UK (Art. 19(1)(b): nominal content by weight or volume); metric for Canada, whose unit symbols
+   * serve both languages (words, if added, go in English and French).
+   */
+  readonly byMarket: { US: string; EU: string; UK: string; CA: string };
 }
 
 /** Rounds down to `decimals` places; the tiny nudge keeps 3.99999999 (float noise for 4) at 4. */
@@ -91,11 +97,8 @@ export function netQuantityStatement(input: NetQuantityInput): NetQuantityStatem
     const flOz = roundDownForLabel(amount / US_UNITS.fluidOunceMillilitres);
     us = { value: flOz, unit: 'fl oz' };
     if (flOz >= 16) {
-      const pints = Math.floor(flOz / 16);
-      const rest = floorTo(flOz - pints * 16, 1);
-      const larger = rest > 0 ? `${pints} pt ${format(rest)} fl oz` : `${pints} pt`;
-      // from memory: the dual fl oz + pint form for 1 pint and over (FPLA).
-      text = `Net ${format(flOz)} fl oz (${larger}) ${format(metric.value)} mL`;
+      // from memory: FPLA's "largest whole unit" for liquids (gallons, quarts, pints) with the rest in fl oz.
+      text = `Net ${format(flOz)} fl oz (${largestWholeUnits(flOz)}) ${format(metric.value)} mL`;
     } else text = `Net ${format(flOz)} fl oz (${format(metric.value)} mL)`;
   }
   if (amount < 5)
@@ -115,5 +118,37 @@ export function netQuantityStatement(input: NetQuantityInput): NetQuantityStatem
       `Print the figures at least ${row.label} high (measure a lower-case "o"), in the bottom 30 % of the principal display panel.`,
     );
   }
-  return { kind: unit === 'g' ? 'weight' : 'fluid', text, metric, us, minimumTypeHeight, notes };
+  const metricText = `${format(metric.value)} ${unit === 'g' ? 'g' : 'ml'}`;
+  notes.push(
+    'Canada: the metric quantity with its symbol reads in both languages; if you add words such as "Net weight", add "Poids net" beside them.',
+  );
+  return {
+    kind: unit === 'g' ? 'weight' : 'fluid',
+    text,
+    metric,
+    us,
+    minimumTypeHeight,
+    notes,
+    byMarket: { US: text, EU: metricText, UK: metricText, CA: `${format(metric.value)} ${unit}` },
+  };
+}
+
+/** 48 → "1 qt 1 pt", 160 → "1 gal 1 qt", 33.8 → "1 qt 1.8 fl oz": the largest whole US units first. */
+export function largestWholeUnits(fluidOunces: number): string {
+  const units: [string, number][] = [
+    ['gal', 128],
+    ['qt', 32],
+    ['pt', 16],
+  ];
+  const parts: string[] = [];
+  let rest = fluidOunces;
+  for (const [name, size] of units) {
+    const whole = Math.floor(rest / size + 1e-9);
+    if (whole > 0) {
+      parts.push(`${whole} ${name}`);
+      rest = floorTo(rest - whole * size, 1);
+    }
+  }
+  if (rest > 0) parts.push(`${format(rest)} fl oz`);
+  return parts.join(' ');
 }

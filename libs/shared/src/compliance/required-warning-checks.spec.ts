@@ -76,3 +76,38 @@ describe('21 CFR 740.17 caution for foaming detergent bath products', () => {
     );
   });
 });
+
+describe('foaming surfactants recognised by INCI name', () => {
+  it('adds the caution and a directions reminder for sodium lauryl sulfoacetate typed with no function', () => {
+    // 21 CFR 740.17: "a surface-active agent serving as a detergent or foaming ingredient"
+    const result = evaluateFormula(
+      aFormula(
+        [aLine(90, 'Sodium Bicarbonate'), aLine(10, 'Sodium Lauryl Sulfoacetate')],
+        aBathBomb(),
+        { markets: ['US'] },
+      ),
+    );
+    expect(result.warnings.US).toEqual([US_FOAMING_BATH_CAUTION]);
+    // from memory: 740.17 also asks for adequate directions for safe use
+    const reminder = result.findings.find((f) => f.code === 'WARNING_FOAMING_BATH_DIRECTIONS');
+    expect(reminder?.severity).toBe('info');
+    expect(reminder?.message).toMatch(/directions for safe use/);
+  });
+
+  it('knows the common foaming surfactants by name', () => {
+    // 21 CFR 740.17 definition, applied to names makers buy
+    for (const inci of [
+      'Sodium Coco-Sulfate',
+      'Cocamidopropyl Betaine',
+      'Decyl Glucoside',
+      'Sodium Cocoyl Isethionate',
+    ]) {
+      const result = evaluateFormula(
+        aFormula([aLine(90, 'Sodium Bicarbonate'), aLine(10, inci)], aBathBomb(), {
+          markets: ['US'],
+        }),
+      );
+      expect(result.warnings.US, inci).toEqual([US_FOAMING_BATH_CAUTION]);
+    }
+  });
+});

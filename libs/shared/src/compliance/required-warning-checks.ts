@@ -4,7 +4,30 @@ import type { ProductInput } from './evaluation-input-schema';
 import type { ComplianceFinding } from './evaluation-result-schema';
 import { makeFinding } from './finding-builder';
 import type { ExpandedIngredient } from './formula-expansion';
-import { isDetergentOrFoamingFunction, isUnqualifiedSurfactant } from './ingredient-names';
+import { foamingSurfactants } from '../reference-data/foaming-surfactants';
+import {
+  isDetergentOrFoamingFunction,
+  isUnqualifiedSurfactant,
+  normaliseName,
+} from './ingredient-names';
+
+const FOAMING_INCI = new Set(
+  foamingSurfactants.flatMap((row) => row.inciNames.map((name) => normaliseName(name))),
+);
+
+/** Whether an ingredient serves as a detergent or foaming surfactant, by its function or its INCI name. */
+export function isFoamingSurfactant(ingredient: {
+  inci: string;
+  functions: readonly string[];
+}): boolean {
+  return (
+    isDetergentOrFoamingFunction(ingredient.functions) ||
+    FOAMING_INCI.has(normaliseName(ingredient.inci))
+  );
+}
+
+/** FPLA/21 CFR 740.17 directions reminder; the paragraph requiring directions is from memory. */
+const DIRECTIONS_SOURCE = '21 CFR 740.17 (directions for safe use; paragraph from memory)';
 
 const CAUTION_ROW = requiredWarnings.find((w) => w.id === 'us-740-17-foaming-detergent-bath')!;
 
@@ -24,13 +47,26 @@ export function checkRequiredWarnings(
   if (!markets.includes('US') || !product.inBath || asOf < (CAUTION_ROW.effectiveFrom ?? ''))
     return { warnings, findings };
 
-  const foaming = ingredients.filter((i) => isDetergentOrFoamingFunction(i.functions));
+  const foaming = ingredients.filter((i) => isFoamingSurfactant(i));
   const unclear = ingredients.filter(
-    (i) => !isDetergentOrFoamingFunction(i.functions) && isUnqualifiedSurfactant(i.functions),
+    (i) => !isFoamingSurfactant(i) && isUnqualifiedSurfactant(i.functions),
   );
   const base = { market: 'US' as const, source: CAUTION_ROW.source, status: CAUTION_ROW.status };
   if (foaming.length > 0) {
     const names = [...new Set(foaming.map((i) => i.usName ?? i.inci))].join(', ');
+    findings.push(
+      // from memory: that 740.17 asks for adequate directions for safe use is not yet confirmed.
+      makeFinding({
+        code: 'WARNING_FOAMING_BATH_DIRECTIONS',
+        severity: 'info',
+        market: 'US',
+        subject: product.name,
+        message: `Foaming bath product (${names}): print directions for safe use on the label (how much to use, how long to soak), as well as any caution.`,
+        source: DIRECTIONS_SOURCE,
+        status: 'M',
+        lines: foaming.map((i) => i.line),
+      }),
+    );
     if (product.adultsOnly) {
       findings.push(
         makeFinding({

@@ -1,17 +1,31 @@
 import type { ComplianceMarket } from '../reference-data/reference-row';
 import type { UsColourMatch } from './colourant-matching';
-import type { VerdictBase, VerdictWithFindings } from './colourant-verdict-types';
+import {
+  amountText,
+  INTERPRETATION_NOTE,
+  verdictOf,
+  type VerdictBase,
+  type VerdictWithFindings,
+} from './colourant-verdict-types';
 import type { ProductInput } from './evaluation-input-schema';
-import { DEFER_TO_ASSESSOR, type ComplianceFinding } from './evaluation-result-schema';
-import { formatPercent, makeFinding } from './finding-builder';
+import {
+  DEFER_TO_ASSESSOR,
+  type ComplianceFinding,
+  type FindingStatus,
+} from './evaluation-result-schema';
+import { makeFinding } from './finding-builder';
+import { impliedContact, PRODUCT_TYPE_NAMES, productTypeFitsListing } from './product-types';
 
 const EXTERNALLY_APPLIED = '21 CFR 82.3(n)';
 const EYE_AREA = '21 CFR 70.5(a)';
 
 /**
  * US verdict for the product's exposure. The eye area needs a listing that provides for it (70.5(a));
- * lips need "generally" or a lip-product listing; a product used in the bath touches mucous membranes,
- * so a colour listed only for externally applied cosmetics (82.3(n)) is not permitted there.
+ * a listing that names the products it may be used in allows those only (74.2052(c)); lips need
+ * "generally" or a lip-product listing, whose maximum applies to the colour's total over its forms
+ * (74.2333(c) "total color"); a product used in the bath touches mucous membranes — Batchproof's
+ * reading, labelled as such — so a colour listed only for externally applied cosmetics (82.3(n)) is
+ * not permitted there.
  */
 export function usColourantVerdict(
   base: VerdictBase,
@@ -20,19 +34,23 @@ export function usColourantVerdict(
 ): VerdictWithFindings {
   const market: ComplianceMarket = 'US';
   const finding = (f: Omit<Parameters<typeof makeFinding>[0], 'market' | 'subject' | 'lines'>) =>
-    makeFinding({ ...f, market, subject: base.subject, lines: base.lines });
+    makeFinding({
+      ...f,
+      market,
+      subject: base.subject,
+      lines: [...base.lines, ...base.otherFormLines],
+    });
 
   if (match.kind === 'none') {
     const source = '21 CFR Parts 73 and 74';
     return {
-      verdict: {
-        ...base,
+      verdict: verdictOf(base, {
         listing: null,
         verdict: 'not-listed',
         conditions: [],
         source,
         status: null,
-      },
+      }),
       findings: [
         finding({
           code: 'COLOURANT_NOT_LISTED',
@@ -48,14 +66,13 @@ export function usColourantVerdict(
     const names = match.rows.map((r) => r.name).join(' and ');
     const source = 'FDA/ICMAD regulatory information sheet (CI numbers are not unique US keys)';
     return {
-      verdict: {
-        ...base,
+      verdict: verdictOf(base, {
         listing: null,
         verdict: 'not-listed',
         conditions: [],
         source,
         status: 'C',
-      },
+      }),
       findings: [
         finding({
           code: 'COLOURANT_AMBIGUOUS',
@@ -70,14 +87,13 @@ export function usColourantVerdict(
   if (match.kind === 'not-permitted') {
     const source = match.row.source;
     return {
-      verdict: {
-        ...base,
+      verdict: verdictOf(base, {
         listing: match.row.name,
         verdict: 'not-permitted',
         conditions: [],
         source,
         status: match.row.status,
-      },
+      }),
       findings: [
         finding({
           code: 'COLOURANT_NOT_PERMITTED',
@@ -92,31 +108,42 @@ export function usColourantVerdict(
 
   const { row, lake } = match;
   const source = `21 CFR ${row.cfrSection}`;
-  const notPermitted = (why: string, ruleSource: string): VerdictWithFindings => ({
-    verdict: {
-      ...base,
-      listing: row.name,
-      verdict: 'not-permitted',
-      conditions: [],
-      source: ruleSource,
-      status: row.status,
-    },
-    findings: [
-      finding({
-        code: 'COLOURANT_NOT_PERMITTED',
-        severity: 'block',
-        message: `${base.subject}: ${why} ${DEFER_TO_ASSESSOR}`,
+  /** A block; an interpretation keeps the row's status when that is `M`, so it still only warns. */
+  const notPermitted = (
+    why: string,
+    ruleSource: string,
+    interpretation = false,
+  ): VerdictWithFindings => {
+    const status: FindingStatus =
+      interpretation && row.status !== 'M' ? 'interpretation' : row.status;
+    return {
+      verdict: verdictOf(base, {
+        listing: row.name,
+        verdict: 'not-permitted',
+        conditions: [],
         source: ruleSource,
-        status: row.status,
+        status,
       }),
-    ],
-  });
+      findings: [
+        finding({
+          code: 'COLOURANT_NOT_PERMITTED',
+          severity: 'block',
+          message: `${base.subject}: ${why} ${DEFER_TO_ASSESSOR}${interpretation ? ` ${INTERPRETATION_NOTE}` : ''}`,
+          source: ruleSource,
+          status,
+        }),
+      ],
+    };
+  };
   const { uses } = row;
-  const mucous = product.inBath || product.contact.mucousMembranes;
+  const implied = impliedContact(product.type);
+  const eyeArea = product.contact.eyeArea || implied.eyeArea;
+  const lips = product.contact.lips || implied.lips;
+  const typeName = PRODUCT_TYPE_NAMES[product.type];
   const conditions: string[] = [];
   const findings: ComplianceFinding[] = [];
 
-  if (product.contact.eyeArea && (!uses.eyeArea || (lake && !uses.eyeAreaIncludesLake))) {
+  if (eyeArea && (!uses.eyeArea || (lake && !uses.eyeAreaIncludesLake))) {
     const what = lake
       ? `its lake is not listed for the area of the eye`
       : `it is not listed for the area of the eye`;
@@ -125,26 +152,32 @@ export function usColourantVerdict(
       `${source}; ${EYE_AREA}`,
     );
   }
+  let listedForThisProduct = false;
   if (uses.restrictedTo) {
     const list = uses.restrictedTo.join(', ');
-    if (product.inBath) {
+    const fit = productTypeFitsListing(product.type, uses.restrictedTo);
+    if (fit === 'no') {
       return notPermitted(
-        `not permitted in the US for products used in the bath — ${source} allows it only in ${list}.`,
+        `not permitted in the US in a ${typeName} — ${source} allows it only in ${list}.`,
         source,
       );
     }
     conditions.push(`Only in ${list}`);
+    listedForThisProduct = fit === 'yes';
     findings.push(
       finding({
         code: 'COLOURANT_CONDITION',
-        severity: 'warn',
-        message: `${base.subject}: permitted in the US only in ${list} (${source}); check this product is one of them.`,
+        severity: fit === 'yes' ? 'info' : 'warn',
+        message:
+          fit === 'yes'
+            ? `${base.subject}: permitted in the US only in ${list} (${source}); a ${typeName} is one of them.`
+            : `${base.subject}: permitted in the US only in ${list} (${source}); check this ${typeName} is one of them.`,
         source,
         status: row.status,
       }),
     );
   }
-  if (product.contact.lips && !uses.generally) {
+  if (lips && !uses.generally && !listedForThisProduct) {
     if (uses.lipProductsMaxPercent === undefined) {
       return notPermitted(
         `not permitted in the US for lip products — ${source} lists it for externally applied cosmetics, which excludes the lips (${EXTERNALLY_APPLIED}).`,
@@ -152,9 +185,9 @@ export function usColourantVerdict(
       );
     }
     const max = uses.lipProductsMaxPercent;
-    if (base.percent > max) {
+    if (base.totalPercent > max * (1 + 1e-9)) {
       return notPermitted(
-        `${formatPercent(base.percent)} of this lip product, above the ${max} % maximum for lip products in ${source}.`,
+        `${amountText(base)}, above the ${max} % maximum (total colour, by weight) for lip products in ${source}.`,
         source,
       );
     }
@@ -163,22 +196,26 @@ export function usColourantVerdict(
       finding({
         code: 'COLOURANT_CONDITION',
         severity: 'info',
-        message: `${base.subject}: ${formatPercent(base.percent)} of this lip product, within the ${max} % maximum in ${source}.`,
+        message: `${base.subject}: ${amountText(base)}, within the ${max} % maximum for lip products in ${source}.`,
         source,
         status: row.status,
       }),
     );
-  } else if (mucous && !uses.generally) {
-    const where = product.inBath
-      ? 'products used in the bath'
-      : 'products that touch mucous membranes';
-    const why = product.inBath
-      ? " Batchproof treats bath water as reaching mucous membranes, as makers' guidance does; your assessor may decide otherwise."
-      : '';
-    return notPermitted(
-      `not permitted in the US for ${where} — ${source} lists it for externally applied cosmetics only, which excludes lips and mucous membranes (${EXTERNALLY_APPLIED}).${why}`,
-      `${source}; ${EXTERNALLY_APPLIED}`,
-    );
+  } else if (!lips && !uses.generally && !listedForThisProduct) {
+    const statedMucous = product.contact.mucousMembranes;
+    if (statedMucous || product.inBath) {
+      const where = statedMucous
+        ? 'products that touch mucous membranes'
+        : 'products used in the bath';
+      const why = statedMucous
+        ? ''
+        : ' Batchproof treats bath water as reaching mucous membranes, as makers\u2019 guidance does; the regulation does not name bath products.';
+      return notPermitted(
+        `not permitted in the US for ${where} — ${source} lists it for externally applied cosmetics only, which excludes lips and mucous membranes (${EXTERNALLY_APPLIED}).${why}`,
+        `${source}; ${EXTERNALLY_APPLIED}`,
+        !statedMucous,
+      );
+    }
   }
   if (row.certificationRequired || lake) {
     conditions.push('FDA-certified batch');
@@ -195,14 +232,13 @@ export function usColourantVerdict(
     );
   }
   return {
-    verdict: {
-      ...base,
+    verdict: verdictOf(base, {
       listing: row.name,
       verdict: conditions.length > 0 ? 'permitted-with-conditions' : 'permitted',
       conditions,
       source,
       status: row.status,
-    },
+    }),
     findings,
   };
 }

@@ -9,21 +9,7 @@ import {
   storedRecordFields,
 } from '../records/record-fields';
 
-/** Kinds of product a formula makes. */
-export const PRODUCT_TYPES = [
-  'fizzer',
-  'foaming-fizzer',
-  'bubble-bar',
-  'bath-salts',
-  'shower-steamer',
-  'soap',
-  'lotion',
-  'other',
-] as const;
-export const productTypeSchema = z.enum(PRODUCT_TYPES, {
-  error: `Choose a product type: ${PRODUCT_TYPES.join(', ')}`,
-});
-export type ProductType = z.infer<typeof productTypeSchema>;
+import { productTypeSchema } from '../compliance/product-types';
 
 /** Life of a version: a draft until released; releasing the next one supersedes it. */
 export const versionStateSchema = z.enum(['draft', 'released', 'superseded']);
@@ -46,6 +32,8 @@ export const productProfileSchema = z.object({
   inBath: z.boolean({ error: 'Say whether it is used in the bath' }),
   /** Whether the label says "for adults only". */
   adultsOnly: z.boolean().default(false),
+  /** Whether a soap is labelled and sold solely as soap (21 CFR 701.20: then not a cosmetic in the US). */
+  soldAsSoap: z.boolean().default(false),
   ifraCategory: requiredText('IFRA category', 10),
   markets: z
     .array(complianceMarketSchema, { error: 'Choose at least one market' })

@@ -11,6 +11,7 @@ export const MATERIAL_CSV_COLUMNS = [
   'category',
   'supplier',
   'colourIndex',
+  'nano',
   'notes',
   'components',
   'ifraCertificate',
@@ -28,6 +29,9 @@ export const MATERIAL_CSV_JSON_COLUMNS = [
   'weightPerVolume',
   'calibrations',
 ] as const;
+/** Cell values of the `nano` column (case-insensitive); a blank or missing cell means no. */
+export const MATERIAL_CSV_YES = ['yes', 'true'] as const;
+export const MATERIAL_CSV_NO = ['no', 'false'] as const;
 /** Separator of the functions column: `humectant; skin conditioning`. */
 export const MATERIAL_CSV_LIST_SEPARATOR = ';';
 /** Most rows one import takes. */

@@ -107,6 +107,8 @@ export const materialCreateSchema = z
       (v) => v === null || parseColourIndex(v) !== null,
       { error: 'Enter a Colour Index number such as CI 77891 or 15850:1' },
     ),
+    /** Whether the material is a nanomaterial: EU/UK ingredient lists add "(nano)" to its name. */
+    nano: z.boolean().default(false),
     components: z.array(blendComponentSchema).max(50).default([]),
     ifraCertificate: ifraCertificateSchema.nullish().transform((v) => v ?? null),
     allergenDeclaration: allergenDeclarationSchema.nullish().transform((v) => v ?? null),
@@ -157,6 +159,7 @@ export const materialSchema = z.object({
   supplierName: z.string().nullable(),
   notes: z.string().nullable(),
   colourIndex: z.string().nullable(),
+  nano: z.boolean(),
   components: z.array(blendComponentSchema),
   ifraCertificate: ifraCertificateSchema.nullable(),
   allergenDeclaration: allergenDeclarationSchema.nullable(),

@@ -16,7 +16,7 @@ export {
 } from './eu-annex-iii-allergen-row';
 
 /**
- * Annex III entries carrying the fragrance-allergen labelling condition (regulatory sources file, 2.3).
+ * Annex III entries carrying the fragrance-allergen labelling condition (Regulation (EC) No 1223/2009, Annex III, as amended by Regulation (EU) 2023/1545).
  * Substances and CAS numbers are confirmed from the official export; label names are C2 or, where
  * marked, from memory — for those the engine uses the supplier's INCI name instead.
  */

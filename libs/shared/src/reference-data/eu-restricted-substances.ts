@@ -31,8 +31,12 @@ const PARABEN_GROUP_LIMIT = {
     '0,8 % (as acid) for mixtures of substances mentioned in entry 12 and 12a (4-hydroxybenzoic acid, its methyl and ethyl esters, propyl and butyl 4-hydroxybenzoate, and their salts)',
 } as const;
 
+/**
+ * UK status CALC: derived from the confirmed EU entry and the rule that retained EU law is the text as
+ * it stood on 31 December 2020 (European Union (Withdrawal) Act 2018, s. 3).
+ */
 const UK_RETAINED_INFERRED =
-  'Inferred, not read: the EU entry predates IP completion day (31 Dec 2020), so GB retained it; no GB amendment to this entry was found, but the GB annex entry itself was not read.';
+  'Derived, not read: the EU entry predates IP completion day (31 Dec 2020), so GB retained it; no GB amendment to this entry was found, but the GB annex entry itself was not read.';
 
 export const euRestrictedSubstances: readonly RestrictedSubstance[] = [
   // ---------------------------------------------------------------- Annex V: preservatives
@@ -45,7 +49,13 @@ export const euRestrictedSubstances: readonly RestrictedSubstance[] = [
     status: 'C',
     forms: [
       { inci: 'Benzoic Acid', cas: '65-85-0', asFactor: 1 },
-      { inci: 'Sodium Benzoate', cas: '532-32-1', asFactor: 0.8475 }, // C7H5NaO2 → C7H6O2
+      {
+        inci: 'Sodium Benzoate',
+        cas: '532-32-1',
+        asFactor: 0.8475,
+        formula: 'C7H5NaO2',
+        asFormula: 'C7H6O2',
+      },
     ],
     expressedAs: 'acid',
     limits: [
@@ -66,9 +76,27 @@ export const euRestrictedSubstances: readonly RestrictedSubstance[] = [
     source: `${ANNEX_V}, entry 1a`,
     status: 'C',
     forms: [
-      { inci: 'Potassium Benzoate', cas: '582-25-2', asFactor: 0.7623 }, // C7H5KO2 → C7H6O2
-      { inci: 'Calcium Benzoate', cas: '2090-05-3', asFactor: 0.8652 }, // C14H10CaO4 → 2 × C7H6O2
-      { inci: 'Ammonium Benzoate', cas: '1863-63-4', asFactor: 0.8776 }, // C7H9NO2 → C7H6O2
+      {
+        inci: 'Potassium Benzoate',
+        cas: '582-25-2',
+        asFactor: 0.7623,
+        formula: 'C7H5KO2',
+        asFormula: 'C7H6O2',
+      },
+      {
+        inci: 'Calcium Benzoate',
+        cas: '2090-05-3',
+        asFactor: 0.8652,
+        formula: 'C14H10CaO4',
+        asFormula: '(C7H6O2)2',
+      },
+      {
+        inci: 'Ammonium Benzoate',
+        cas: '1863-63-4',
+        asFactor: 0.8776,
+        formula: 'C7H9NO2',
+        asFormula: 'C7H6O2',
+      },
     ],
     expressedAs: 'acid',
     limits: [{ scope: 'all', maxPercent: 0.5, wording: '0,5 % (acid)' }],
@@ -86,12 +114,48 @@ export const euRestrictedSubstances: readonly RestrictedSubstance[] = [
     status: 'C',
     forms: [
       { inci: 'Salicylic Acid', cas: '69-72-7', asFactor: 1 },
-      { inci: 'Sodium Salicylate', cas: '54-21-7', asFactor: 0.8627 }, // C7H5NaO3 → C7H6O3
-      { inci: 'Potassium Salicylate', cas: '578-36-9', asFactor: 0.7838 }, // C7H5KO3 → C7H6O3
-      { inci: 'Calcium Salicylate', cas: '824-35-1', asFactor: 0.8789 }, // C14H10CaO6 → 2 × C7H6O3
-      { inci: 'Magnesium Salicylate', cas: '18917-89-0', asFactor: 0.9253 }, // C14H10MgO6 → 2 × C7H6O3
-      { inci: 'MEA-Salicylate', cas: '59866-70-5', asFactor: 0.6934 }, // C9H13NO4 → C7H6O3
-      { inci: 'TEA-Salicylate', cas: '2174-16-5', asFactor: 0.4807 }, // C13H21NO6 → C7H6O3
+      {
+        inci: 'Sodium Salicylate',
+        cas: '54-21-7',
+        asFactor: 0.8627,
+        formula: 'C7H5NaO3',
+        asFormula: 'C7H6O3',
+      },
+      {
+        inci: 'Potassium Salicylate',
+        cas: '578-36-9',
+        asFactor: 0.7838,
+        formula: 'C7H5KO3',
+        asFormula: 'C7H6O3',
+      },
+      {
+        inci: 'Calcium Salicylate',
+        cas: '824-35-1',
+        asFactor: 0.8789,
+        formula: 'C14H10CaO6',
+        asFormula: '(C7H6O3)2',
+      },
+      {
+        inci: 'Magnesium Salicylate',
+        cas: '18917-89-0',
+        asFactor: 0.9253,
+        formula: 'C14H10MgO6',
+        asFormula: '(C7H6O3)2',
+      },
+      {
+        inci: 'MEA-Salicylate',
+        cas: '59866-70-5',
+        asFactor: 0.6934,
+        formula: 'C9H13NO4',
+        asFormula: 'C7H6O3',
+      },
+      {
+        inci: 'TEA-Salicylate',
+        cas: '2174-16-5',
+        asFactor: 0.4807,
+        formula: 'C13H21NO6',
+        asFormula: 'C7H6O3',
+      },
     ],
     expressedAs: 'acid',
     limits: [{ scope: 'all', maxPercent: 0.5, wording: '0,5 % (acid)' }],
@@ -103,6 +167,8 @@ export const euRestrictedSubstances: readonly RestrictedSubstance[] = [
       'For use other than as a preservative see Annex III, entry 98',
     ],
     labelWarning: 'Not to be used for children under 3 years of age',
+    labelWarningFor:
+      'products which might be used for children under three years of age and which remain in prolonged contact with the skin',
     amendedBy: 'Regulation (EU) 2019/1966',
     placingFrom: '2020-05-01',
     availableFrom: '2020-05-01',
@@ -120,13 +186,31 @@ export const euRestrictedSubstances: readonly RestrictedSubstance[] = [
     status: 'C',
     forms: [
       { inci: 'Sorbic Acid', cas: '110-44-1', asFactor: 1 },
-      { inci: 'Potassium Sorbate', cas: '24634-61-5', asFactor: 0.7464 }, // C6H7KO2 → C6H8O2
-      { inci: 'Sodium Sorbate', cas: '7757-81-5', asFactor: 0.8361 }, // C6H7NaO2 → C6H8O2
-      { inci: 'Calcium Sorbate', cas: '7492-55-9', asFactor: 0.8549 }, // C12H14CaO4 → 2 × C6H8O2
+      {
+        inci: 'Potassium Sorbate',
+        cas: '24634-61-5',
+        asFactor: 0.7464,
+        formula: 'C6H7KO2',
+        asFormula: 'C6H8O2',
+      },
+      {
+        inci: 'Sodium Sorbate',
+        cas: '7757-81-5',
+        asFactor: 0.8361,
+        formula: 'C6H7NaO2',
+        asFormula: 'C6H8O2',
+      },
+      {
+        inci: 'Calcium Sorbate',
+        cas: '7492-55-9',
+        asFactor: 0.8549,
+        formula: 'C12H14CaO4',
+        asFormula: '(C6H8O2)2',
+      },
     ],
     expressedAs: 'acid',
     limits: [{ scope: 'all', maxPercent: 0.6, wording: '0,6 % (acid)' }],
-    ukStatus: 'M', // from memory (GB side inferred)
+    ukStatus: 'CALC',
     ukNote: UK_RETAINED_INFERRED,
   },
   // Entry 12 sets 0,4 % per single ester and 0,8 % for mixtures: one row per ester (and one for the acid
@@ -140,9 +224,27 @@ export const euRestrictedSubstances: readonly RestrictedSubstance[] = [
     status: 'C',
     forms: [
       { inci: '4-Hydroxybenzoic Acid', cas: '99-96-7', asFactor: 1 },
-      { inci: 'Sodium Paraben', cas: '114-63-6', asFactor: 0.8627 }, // C7H5NaO3 → C7H6O3
-      { inci: 'Potassium Paraben', cas: '16782-08-4', asFactor: 0.7838 }, // C7H5KO3 → C7H6O3
-      { inci: 'Calcium Paraben', cas: '69959-44-0', asFactor: 0.8789 }, // C14H10CaO6 → 2 × C7H6O3
+      {
+        inci: 'Sodium Paraben',
+        cas: '114-63-6',
+        asFactor: 0.8627,
+        formula: 'C7H5NaO3',
+        asFormula: 'C7H6O3',
+      },
+      {
+        inci: 'Potassium Paraben',
+        cas: '16782-08-4',
+        asFactor: 0.7838,
+        formula: 'C7H5KO3',
+        asFormula: 'C7H6O3',
+      },
+      {
+        inci: 'Calcium Paraben',
+        cas: '69959-44-0',
+        asFactor: 0.8789,
+        formula: 'C14H10CaO6',
+        asFormula: '(C7H6O3)2',
+      },
     ],
     expressedAs: 'acid',
     limits: [{ scope: 'all', maxPercent: 0.4, wording: '0,4 % (as acid) for single ester' }],
@@ -164,9 +266,27 @@ export const euRestrictedSubstances: readonly RestrictedSubstance[] = [
     source: `${ANNEX_V}, entry 12`,
     status: 'C',
     forms: [
-      { inci: 'Methylparaben', cas: '99-76-3', asFactor: 0.9078 }, // C8H8O3 → C7H6O3
-      { inci: 'Sodium Methylparaben', cas: '5026-62-0', asFactor: 0.7932 }, // C8H7NaO3 → C7H6O3
-      { inci: 'Potassium Methylparaben', cas: '26112-07-2', asFactor: 0.726 }, // C8H7KO3 → C7H6O3
+      {
+        inci: 'Methylparaben',
+        cas: '99-76-3',
+        asFactor: 0.9078,
+        formula: 'C8H8O3',
+        asFormula: 'C7H6O3',
+      },
+      {
+        inci: 'Sodium Methylparaben',
+        cas: '5026-62-0',
+        asFactor: 0.7932,
+        formula: 'C8H7NaO3',
+        asFormula: 'C7H6O3',
+      },
+      {
+        inci: 'Potassium Methylparaben',
+        cas: '26112-07-2',
+        asFactor: 0.726,
+        formula: 'C8H7KO3',
+        asFormula: 'C7H6O3',
+      },
     ],
     expressedAs: 'acid',
     limits: [{ scope: 'all', maxPercent: 0.4, wording: '0,4 % (as acid) for single ester' }],
@@ -188,9 +308,27 @@ export const euRestrictedSubstances: readonly RestrictedSubstance[] = [
     source: `${ANNEX_V}, entry 12`,
     status: 'C',
     forms: [
-      { inci: 'Ethylparaben', cas: '120-47-8', asFactor: 0.8312 }, // C9H10O3 → C7H6O3
-      { inci: 'Sodium Ethylparaben', cas: '35285-68-8', asFactor: 0.7341 }, // C9H9NaO3 → C7H6O3
-      { inci: 'Potassium Ethylparaben', cas: '36457-19-9', asFactor: 0.6762 }, // C9H9KO3 → C7H6O3
+      {
+        inci: 'Ethylparaben',
+        cas: '120-47-8',
+        asFactor: 0.8312,
+        formula: 'C9H10O3',
+        asFormula: 'C7H6O3',
+      },
+      {
+        inci: 'Sodium Ethylparaben',
+        cas: '35285-68-8',
+        asFactor: 0.7341,
+        formula: 'C9H9NaO3',
+        asFormula: 'C7H6O3',
+      },
+      {
+        inci: 'Potassium Ethylparaben',
+        cas: '36457-19-9',
+        asFactor: 0.6762,
+        formula: 'C9H9KO3',
+        asFormula: 'C7H6O3',
+      },
     ],
     expressedAs: 'acid',
     limits: [{ scope: 'all', maxPercent: 0.4, wording: '0,4 % (as acid) for single ester' }],
@@ -212,12 +350,48 @@ export const euRestrictedSubstances: readonly RestrictedSubstance[] = [
     source: `${ANNEX_V}, entry 12a`,
     status: 'C',
     forms: [
-      { inci: 'Propylparaben', cas: '94-13-3', asFactor: 0.7665 }, // C10H12O3 → C7H6O3
-      { inci: 'Butylparaben', cas: '94-26-8', asFactor: 0.7111 }, // C11H14O3 → C7H6O3
-      { inci: 'Sodium Propylparaben', cas: '35285-69-9', asFactor: 0.6831 }, // C10H11NaO3 → C7H6O3
-      { inci: 'Sodium Butylparaben', cas: '36457-20-2', asFactor: 0.6388 }, // C11H13NaO3 → C7H6O3
-      { inci: 'Potassium Propylparaben', cas: '84930-16-5', asFactor: 0.6327 }, // C10H11KO3 → C7H6O3
-      { inci: 'Potassium Butylparaben', cas: '38566-94-8', asFactor: 0.5945 }, // C11H13KO3 → C7H6O3
+      {
+        inci: 'Propylparaben',
+        cas: '94-13-3',
+        asFactor: 0.7665,
+        formula: 'C10H12O3',
+        asFormula: 'C7H6O3',
+      },
+      {
+        inci: 'Butylparaben',
+        cas: '94-26-8',
+        asFactor: 0.7111,
+        formula: 'C11H14O3',
+        asFormula: 'C7H6O3',
+      },
+      {
+        inci: 'Sodium Propylparaben',
+        cas: '35285-69-9',
+        asFactor: 0.6831,
+        formula: 'C10H11NaO3',
+        asFormula: 'C7H6O3',
+      },
+      {
+        inci: 'Sodium Butylparaben',
+        cas: '36457-20-2',
+        asFactor: 0.6388,
+        formula: 'C11H13NaO3',
+        asFormula: 'C7H6O3',
+      },
+      {
+        inci: 'Potassium Propylparaben',
+        cas: '84930-16-5',
+        asFactor: 0.6327,
+        formula: 'C10H11KO3',
+        asFormula: 'C7H6O3',
+      },
+      {
+        inci: 'Potassium Butylparaben',
+        cas: '38566-94-8',
+        asFactor: 0.5945,
+        formula: 'C11H13KO3',
+        asFormula: 'C7H6O3',
+      },
     ],
     expressedAs: 'acid',
     // The 0,14 % is for the sum of this entry's forms (propyl + butyl and their salts), not per form.
@@ -235,6 +409,7 @@ export const euRestrictedSubstances: readonly RestrictedSubstance[] = [
       'Label warning applies to leave-on products designed for children under three years of age',
     ],
     labelWarning: 'Do not use on the nappy area',
+    labelWarningFor: 'leave-on products designed for children under three years of age',
     amendedBy: 'Regulation (EU) No 1004/2014',
     placingFrom: '2015-04-16',
     availableFrom: '2015-10-16',
@@ -252,13 +427,19 @@ export const euRestrictedSubstances: readonly RestrictedSubstance[] = [
     status: 'C',
     forms: [
       { inci: 'Dehydroacetic Acid', cas: '520-45-6', asFactor: 1 },
-      { inci: 'Sodium Dehydroacetate', cas: '4418-26-2', asFactor: 0.8844 }, // C8H7NaO4 → C8H8O4 (anhydrous salt)
+      {
+        inci: 'Sodium Dehydroacetate',
+        cas: '4418-26-2',
+        asFactor: 0.8844,
+        formula: 'C8H7NaO4',
+        asFormula: 'C8H8O4',
+      },
     ],
     expressedAs: 'acid',
     limits: [{ scope: 'all', maxPercent: 0.6, wording: '0,6 % (as acid)' }],
     conditions: ['Not to be used in aerosol dispensers (sprays)'],
     note: 'The export also lists CAS 16807-48-0 for the salt (not keyed). The factor is for the anhydrous sodium salt; a supplier selling the monohydrate needs a lower factor.',
-    ukStatus: 'M', // from memory (GB side inferred)
+    ukStatus: 'CALC',
     ukNote: UK_RETAINED_INFERRED,
   },
   {
@@ -271,7 +452,7 @@ export const euRestrictedSubstances: readonly RestrictedSubstance[] = [
     forms: [{ inci: 'Phenoxyethanol', cas: '122-99-6' }],
     limits: [{ scope: 'all', maxPercent: 1, wording: '1,0 %' }],
     note: 'Ethylhexylglycerin and caprylyl glycol, often blended with it, are not Annex V preservatives and have no row here.',
-    ukStatus: 'M', // from memory (GB side inferred)
+    ukStatus: 'CALC',
     ukNote: UK_RETAINED_INFERRED,
   },
   {
@@ -285,7 +466,7 @@ export const euRestrictedSubstances: readonly RestrictedSubstance[] = [
     limits: [{ scope: 'all', maxPercent: 1, wording: '1,0 %' }],
     amendedBy: 'Regulation (EU) No 344/2013',
     note: 'Also an Annex III fragrance allergen (entry 45, labelling only); that entry is handled in the allergen list.',
-    ukStatus: 'M', // from memory (GB side inferred)
+    ukStatus: 'CALC',
     ukNote: UK_RETAINED_INFERRED,
   },
   {
@@ -380,8 +561,9 @@ export const euRestrictedSubstances: readonly RestrictedSubstance[] = [
       'Warning applies only to products which might be used for children under 3 years of age',
     ],
     labelWarning: 'Not to be used for children under three years of age',
+    labelWarningFor: 'products which might be used for children under three years of age',
     note: 'Read in a 2015-era CosIng Annex V export (entry dated 16/10/2010); later amendment not checked. The body lotion / body cream exclusion matters for lotion makers using IPBC blends.',
-    ukStatus: 'M', // from memory (GB side inferred)
+    ukStatus: 'CALC',
     ukNote: UK_RETAINED_INFERRED,
   },
 
@@ -411,6 +593,8 @@ export const euRestrictedSubstances: readonly RestrictedSubstance[] = [
       'For purposes other than inhibiting the development of micro-organisms in the product; this purpose has to be apparent from the presentation of the product',
     ],
     labelWarning: 'Not to be used for children under 3 years of age',
+    labelWarningFor:
+      'products which might be used for children under three years of age and which remain in prolonged contact with the skin',
     amendedBy: 'Regulation (EU) 2021/850',
     note: 'The body-lotion 0,5 % is kept as a condition, not a leave-on limit, because a leave-on limit would wrongly hold other leave-on products to 0,5 %. (a)/(b) and the children condition read in CosIng (pre-2021 text); (c) 0,5 % from 2021/850 is C2 (a regulatory database) and matches GB SI 2022/659. EU application date of 2021/850 not confirmed (M). The CosIng record words the warning "under three years of age".',
     ukStatus: 'C',
@@ -481,7 +665,7 @@ export const euRestrictedSubstances: readonly RestrictedSubstance[] = [
     ],
     conditions: ['Labelling in the ingredient list above 0,001 % (leave-on) / 0,01 % (rinse-off)'],
     note: 'Maximum and CAS numbers as quoted from the ECHA/EC Annex III export (16 May 2024) in the regulatory sources file, section 2.3; not re-read here. Eugenol (entry 71) has no numeric maximum in that export, so it has no row.',
-    ukStatus: 'M', // from memory
+    ukStatus: 'CALC',
     ukNote: UK_RETAINED_INFERRED,
   },
   {
@@ -497,7 +681,7 @@ export const euRestrictedSubstances: readonly RestrictedSubstance[] = [
     ],
     conditions: ['Labelling in the ingredient list above 0,001 % (leave-on) / 0,01 % (rinse-off)'],
     note: 'Maximum as quoted from the ECHA/EC Annex III export in the regulatory sources file, section 2.3; not re-read here.',
-    ukStatus: 'M', // from memory
+    ukStatus: 'CALC',
     ukNote: UK_RETAINED_INFERRED,
   },
   {

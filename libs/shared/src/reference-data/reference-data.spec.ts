@@ -46,7 +46,7 @@ describe('reference lists', () => {
 
 describe('EU Annex III allergen list', () => {
   it('holds the 24 original labelled allergens (26 less the two now prohibited)', () => {
-    // regulatory sources file 2.2 [C2]: "only 24 fragrance allergens necessitated individual labelling"
+    // Regulation (EU) 2023/1545, recital [C2]: "only 24 fragrance allergens necessitated individual labelling"
     expect(euAnnexIiiAllergens.filter((r) => r.origin === 'original-26')).toHaveLength(24);
   });
 

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 
 /**
- * How sure Batchproof is of a reference value, as tagged in the regulatory sources file:
+ * How sure Batchproof is of a reference value, as tagged beside each row:
  * `C` confirmed in a copy of the primary text, `C2` confirmed in a secondary source quoting it,
  * `CALC` computed from confirmed inputs, `M` from memory and not yet confirmed.
  */

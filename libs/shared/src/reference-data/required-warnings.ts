@@ -18,7 +18,7 @@ export interface RequiredWarning extends ReferenceRow {
 export const US_FOAMING_BATH_CAUTION =
   'Caution: Use only as directed. Excessive use or prolonged exposure may cause irritation to skin and urinary tract. Discontinue use if rash, redness, or itching occurs. Consult your physician if irritation persists.';
 
-/** Required warning statements Batchproof knows (regulatory sources file, section 5). */
+/** Required warning statements Batchproof knows (21 CFR Part 740, Subpart B). */
 export const requiredWarnings: readonly RequiredWarning[] = [
   {
     id: 'us-740-17-foaming-detergent-bath',

@@ -19,6 +19,10 @@ export interface RestrictedForm {
    * the form itself. Derived from molar masses; the tests check it with a molar-mass library.
    */
   readonly asFactor?: number;
+  /** Molecular formula of this form, when `asFactor` is derived from it (e.g. `C7H5NaO2`). */
+  readonly formula?: string;
+  /** Molecular formula of what the limit is expressed as (e.g. `C7H6O2`, or `(C7H6O3)2` for two per form). */
+  readonly asFormula?: string;
   /** Whether this form is the nanomaterial (Art. 2(1)(k)); an entry for the nano form matches only nano. */
   readonly nano?: boolean;
 }
@@ -66,6 +70,11 @@ export interface RestrictedSubstance extends ReferenceRow {
   readonly conditions?: readonly string[];
   /** Warning the label must carry, word for word, when the annex requires one. */
   readonly labelWarning?: string;
+  /**
+   * The products the warning is for, when the annex limits it (e.g. "products which might be used for
+   * children under three"): Batchproof cannot tell, so it asks instead of printing the warning.
+   */
+  readonly labelWarningFor?: string;
   /**
    * Day from which products not meeting the entry may no longer be placed on the market. Before it the
    * engine reports the entry as coming, not as a block.

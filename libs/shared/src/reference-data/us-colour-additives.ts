@@ -28,7 +28,7 @@ export interface UsNotPermittedColourant extends ReferenceRow {
   readonly reason: string;
 }
 
-/** Colourants with no US cosmetic listing (regulatory sources file, section 3.3). */
+/** Colourants with no US cosmetic listing (FDA/ICMAD regulatory information sheet; 21 CFR Parts 73, 74). */
 export const usNotPermittedColourants: readonly UsNotPermittedColourant[] = [
   {
     id: 'us-np-fdc-red-3',
@@ -84,7 +84,7 @@ export const usNotPermittedColourants: readonly UsNotPermittedColourant[] = [
     aliases: ['pigment green 7'],
     colourIndex: ['74260'],
     reason: 'Not listed for cosmetics.',
-    source: 'Regulatory sources file, section 3.3',
+    source: 'FDA/ICMAD regulatory information sheet (no cosmetic listing; CI 74260 from memory)',
     status: 'M',
   },
 ];
