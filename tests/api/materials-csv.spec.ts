@@ -119,6 +119,43 @@ describe('POST /api/materials/import', () => {
     expect(await materialCount(w.id)).toBe(0);
   });
 
+  it('reads an optional nano column as yes/no or true/false (blank is no) and refuses anything else', async () => {
+    const w = await workshopWithSupplier();
+    const rows = [
+      { ...good('Nano Zinc'), nano: 'Yes' },
+      { ...good('Nano White'), nano: 'true' },
+      { ...good('Plain Salt'), nano: 'no' },
+      { ...good('Blank Salt'), nano: '' },
+      { ...good('Odd Salt'), nano: 'maybe' },
+    ];
+    const preview = await request(h.app)
+      .post('/api/materials/import/preview')
+      .set(bearer(w.members.owner))
+      .set('Content-Type', 'text/csv')
+      .send(csv(rows));
+    const p = materialImportPreviewSchema.parse(preview.body);
+    expect(p.rows.map((r) => r.valid)).toEqual([true, true, true, true, false]);
+    expect(Object.keys(p.rows[4]!.errors)).toEqual(['nano']);
+
+    const res = await request(h.app)
+      .post('/api/materials/import')
+      .set(bearer(w.members.owner))
+      .set('Content-Type', 'text/csv')
+      .send(csv(rows.slice(0, 4)));
+    expect(res.status).toBe(201);
+    const stored = await h.handle.db
+      .select({ tradeName: materials.tradeName, nano: materials.nano })
+      .from(materials)
+      .where(eq(materials.workshopId, w.id))
+      .orderBy(materials.tradeName);
+    expect(stored).toEqual([
+      { tradeName: 'Blank Salt', nano: false },
+      { tradeName: 'Nano White', nano: true },
+      { tradeName: 'Nano Zinc', nano: true },
+      { tradeName: 'Plain Salt', nano: false },
+    ]);
+  });
+
   it('a viewer may not import (403)', async () => {
     const w = await workshopWithSupplier();
     const res = await request(h.app)
@@ -139,6 +176,11 @@ describe('GET /api/materials/export.csv', () => {
       from.id,
       aFragrance({ tradeName: '=Fig Leaf', notes: 'made-up scent' }),
     );
+    await buildMaterial(
+      h.handle.db,
+      from.id,
+      anUltramarineBlend({ tradeName: 'Ultrafine White', inci: 'Titanium Dioxide', nano: true }),
+    );
     const res = await request(h.app)
       .get('/api/materials/export.csv')
       .set(bearer(from.members.viewer));
@@ -146,6 +188,7 @@ describe('GET /api/materials/export.csv', () => {
     expect(res.headers['content-type']).toMatch(/^text\/csv/);
     expect(res.headers['content-disposition']).toMatch(/materials\.csv/);
     expect(res.text).toContain("'=Fig Leaf"); // a leading "=" is defused for spreadsheets
+    expect(res.text.split('\r\n')[0]).toContain(',nano,');
 
     const to = await workshopWithSupplier();
     const back = await request(h.app)
@@ -160,12 +203,18 @@ describe('GET /api/materials/export.csv', () => {
     expect(list.body.items.map((m: { tradeName: string }) => m.tradeName)).toEqual([
       '=Fig Leaf',
       'Night Blue Mica',
+      'Ultrafine White',
     ]);
+    const nano = await request(h.app)
+      .get(`/api/materials/${list.body.items[2].id}`)
+      .set(bearer(to.members.owner));
+    expect(nano.body.nano).toBe(true);
     const blend = await request(h.app)
       .get(`/api/materials/${list.body.items[1].id}`)
       .set(bearer(to.members.owner));
     expect(blend.body.components.map((c: { colourIndex: string }) => c.colourIndex)).toContain(
       '77007',
     );
+    expect(blend.body.nano).toBe(false);
   });
 });

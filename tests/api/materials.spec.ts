@@ -43,6 +43,26 @@ describe('POST /api/materials', () => {
     expect((await post(near)).status).toBe(201);
   });
 
+  it('keeps whether the material and each blend component is a nanomaterial; a material is not nano unless said', async () => {
+    expect((await post(aMaterial())).body.nano).toBe(false);
+    const blend = anUltramarineBlend({ nano: true });
+    blend.components![1] = { ...blend.components![1]!, nano: true, cas: '13463-67-7' };
+    const res = await post(blend);
+    expect(res.status).toBe(201);
+    expect(res.body.nano).toBe(true);
+    expect(res.body.components[1]).toMatchObject({ nano: true, cas: '13463-67-7' });
+    const read = await request(h.app)
+      .get(`/api/materials/${res.body.id}`)
+      .set(bearer(w.members.viewer));
+    expect(materialSchema.parse(read.body)).toMatchObject({ nano: true });
+
+    const cleared = await request(h.app)
+      .put(`/api/materials/${res.body.id}`)
+      .set(bearer(w.members.owner))
+      .send({ ...blend, nano: false });
+    expect(cleared.body.nano).toBe(false);
+  });
+
   it('when blend components add up to 90 %, responds 400 with fieldErrors.components', async () => {
     const blend = anUltramarineBlend();
     blend.components![0]!.percent = 50;

@@ -1,8 +1,8 @@
 import {
   evaluateFormula,
-  evaluationInputSchema,
-  materialToEngineInput,
+  prepareEvaluation,
   type ProductProfile,
+  type ProductType,
 } from '@batchproof/shared';
 import { AppError } from '../core/app-error';
 import type { Database } from '../db/database';
@@ -43,48 +43,45 @@ export async function loadLineMaterials(db: Database, workshopId: string, lines:
   return byId;
 }
 
+/** The formula a version belongs to, as far as the check reads it. */
+export interface EvaluatedFormula {
+  name: string;
+  productType: ProductType;
+}
+
 /**
- * Runs the shared compliance engine on stored lines and the product profile, exactly as the
- * editor does in the browser. When the draft cannot be checked yet (no lines, 0 g, a market
- * missing) the evaluation is null and the reasons are kept, so a draft can still be saved.
+ * Runs the shared compliance engine on stored lines and the product profile through
+ * `prepareEvaluation`, the same builder the editor's live check uses in the browser. When the
+ * draft cannot be checked yet (no lines, 0 g, a market missing) the evaluation is null and the
+ * reasons are kept, so a draft can still be saved.
  */
 export async function evaluateLines(
   db: Database,
   workshopId: string,
-  productName: string,
+  formula: EvaluatedFormula,
   lines: GramLine[],
   profile: ProductProfile,
   now = new Date(),
 ): Promise<EvaluationFields> {
   const materials = await loadLineMaterials(db, workshopId, lines);
-  const parsed = evaluationInputSchema.safeParse({
+  const prepared = prepareEvaluation({
     asOf: today(now),
-    markets: profile.markets,
-    product: {
-      name: productName,
-      use: profile.use,
-      contact: profile.contact,
-      inBath: profile.inBath,
-      adultsOnly: profile.adultsOnly,
-      ifraCategory: profile.ifraCategory,
-      ...(profile.netQuantity ? { netQuantity: profile.netQuantity } : {}),
-    },
-    lines: lines.map((l) => ({
-      grams: l.grams,
-      material: materialToEngineInput(materials.get(l.materialId)!),
-    })),
+    productName: formula.name,
+    productType: formula.productType,
+    profile,
+    lines: lines.map((l) => ({ grams: l.grams, material: materials.get(l.materialId)! })),
   });
-  if (!parsed.success) {
+  if (!prepared.ok) {
     return {
       evaluation: null,
       blockCount: null,
       warnCount: null,
       infoCount: null,
-      evaluationProblems: [...new Set(parsed.error.issues.map((i) => i.message))],
+      evaluationProblems: prepared.problems,
       evaluatedAt: now,
     };
   }
-  const evaluation = evaluateFormula(parsed.data);
+  const evaluation = evaluateFormula(prepared.input);
   const countOf = (s: string) => evaluation.findings.filter((f) => f.severity === s).length;
   return {
     evaluation,

@@ -26,13 +26,7 @@ export async function createFormula(
   input: z.output<typeof formulaCreateSchema>,
 ) {
   const lines = linesInGrams(input.draft);
-  const evaluation = await evaluateLines(
-    db,
-    actor.workshopId,
-    input.name,
-    lines,
-    input.draft.profile,
-  );
+  const evaluation = await evaluateLines(db, actor.workshopId, input, lines, input.draft.profile);
   const id = await db.transaction(async (tx) => {
     const formulaId = await repo.insertFormula(tx, actor.workshopId, {
       name: input.name,
@@ -77,7 +71,7 @@ export async function saveDraft(
   const formula = await repo.findFormula(db, actor.workshopId, formulaId);
   if (!formula) throw notFound('That formula');
   const lines = linesInGrams(input);
-  const evaluation = await evaluateLines(db, actor.workshopId, formula.name, lines, input.profile);
+  const evaluation = await evaluateLines(db, actor.workshopId, formula, lines, input.profile);
   const row = await db.transaction(async (tx) => {
     const version = await repo.findVersion(tx, actor.workshopId, formulaId, n, true);
     if (!version) throw notFound(`Version ${n} of that formula`);
@@ -140,13 +134,7 @@ export async function newDraft(
       materialId: l.materialId,
       grams: l.grams,
     }));
-    const evaluation = await evaluateLines(
-      tx,
-      actor.workshopId,
-      formula.name,
-      lines,
-      source.profile,
-    );
+    const evaluation = await evaluateLines(tx, actor.workshopId, formula, lines, source.profile);
     const versionId = await repo.insertVersion(tx, {
       workshopId: actor.workshopId,
       formulaId,
@@ -184,13 +172,7 @@ export async function release(
       materialId: l.materialId,
       grams: l.grams,
     }));
-    const evaluation = await evaluateLines(
-      tx,
-      actor.workshopId,
-      formula.name,
-      lines,
-      version.profile,
-    );
+    const evaluation = await evaluateLines(tx, actor.workshopId, formula, lines, version.profile);
     await repo.updateVersion(tx, actor.workshopId, version.id, evaluation);
     if (!evaluation.evaluation) {
       throw conflict(

@@ -5,7 +5,9 @@ import {
   MATERIAL_CSV_JSON_COLUMNS,
   MATERIAL_CSV_LIST_SEPARATOR,
   MATERIAL_CSV_MAX_ROWS,
+  MATERIAL_CSV_NO,
   MATERIAL_CSV_REQUIRED,
+  MATERIAL_CSV_YES,
   materialCreateSchema,
   type Material,
   type MaterialFields,
@@ -19,6 +21,14 @@ import { toMaterial } from './materials-domain';
 import * as repo from './materials-repository';
 
 type Cells = Record<string, string | undefined>;
+
+/** The `nano` cell as a boolean: yes/true, no/false or blank (no); anything else is undefined. */
+function readYesNo(value: string): boolean | undefined {
+  const v = value.toLowerCase();
+  if (v === '' || (MATERIAL_CSV_NO as readonly string[]).includes(v)) return false;
+  if ((MATERIAL_CSV_YES as readonly string[]).includes(v)) return true;
+  return undefined;
+}
 
 // Spreadsheet formula guard: export prefixes risky cells with an apostrophe; import drops it.
 const unescapeFormula = (v: string) => (/^'[=+\-@\t\r]/.test(v) ? v.slice(1) : v);
@@ -70,6 +80,10 @@ export async function checkMaterialsCsv(db: Database, actor: AuthUser, text: str
       .split(MATERIAL_CSV_LIST_SEPARATOR)
       .map((f) => f.trim())
       .filter(Boolean);
+    const nano = readYesNo(cell('nano'));
+    if (nano === undefined)
+      errors['nano'] = ['Write yes or no (or true or false), or leave it blank'];
+    else input['nano'] = nano;
     for (const k of MATERIAL_CSV_JSON_COLUMNS) {
       const raw = cell(k);
       if (!raw) continue;
@@ -147,6 +161,7 @@ export async function exportMaterialsCsv(db: Database, actor: AuthUser) {
     category: m.category,
     supplier: m.supplierName ?? '',
     colourIndex: m.colourIndex ?? '',
+    nano: m.nano ? 'yes' : 'no',
     notes: m.notes ?? '',
     components: json(m.components),
     ifraCertificate: json(m.ifraCertificate),

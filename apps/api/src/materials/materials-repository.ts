@@ -18,6 +18,7 @@ const fullColumns = {
   supplierName: suppliers.name,
   notes: materials.notes,
   colourIndex: materials.colourIndex,
+  nano: materials.nano,
   components: materials.components,
   ifraCertificate: materials.ifraCertificate,
   allergenDeclaration: materials.allergenDeclaration,

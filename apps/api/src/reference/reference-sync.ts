@@ -5,7 +5,7 @@ import { referenceLists, referenceRows } from '../db/schema';
 /** The name a row is listed under, whatever kind of list it belongs to. */
 function labelOf(row: ReferenceRow): string {
   const r = row as unknown as Record<string, unknown>;
-  for (const key of ['labelName', 'name', 'title', 'text']) {
+  for (const key of ['labelName', 'name', 'euName', 'title', 'text']) {
     if (typeof r[key] === 'string' && r[key]) return r[key] as string;
   }
   return row.id;

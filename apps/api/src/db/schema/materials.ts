@@ -1,5 +1,5 @@
 import { sql } from 'drizzle-orm';
-import { index, jsonb, pgEnum, pgTable, text, uuid } from 'drizzle-orm/pg-core';
+import { boolean, index, jsonb, pgEnum, pgTable, text, uuid } from 'drizzle-orm/pg-core';
 import {
   MATERIAL_CATEGORIES,
   type AllergenDeclaration,
@@ -37,6 +37,8 @@ export const materials = pgTable(
       .notNull()
       .default(sql`'{}'::text[]`),
     category: materialCategoryEnum().notNull(),
+    /** Whether the material is a nanomaterial (EU and UK ingredient lists print "(nano)" after it). */
+    nano: boolean().notNull().default(false),
     notes: text(),
     colourIndex: text(),
     components: jsonb().$type<Material['components']>().notNull().default([]),

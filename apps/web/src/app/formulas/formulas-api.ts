@@ -1,6 +1,6 @@
 import { HttpClient, httpResource } from '@angular/common/http';
-import { inject, Injectable, type Signal } from '@angular/core';
-import { rxResource } from '@angular/core/rxjs-interop';
+import { inject, Injectable, type Signal, signal } from '@angular/core';
+import { rxResource, takeUntilDestroyed } from '@angular/core/rxjs-interop';
 import { forkJoin, map, type Observable, of, shareReplay } from 'rxjs';
 import {
   formulaPageSchema,
@@ -21,6 +21,7 @@ import {
   type ScaledVersion,
   versionComparisonSchema,
 } from '@batchproof/shared';
+import { MaterialsApi } from '../materials/materials-api';
 
 const enc = encodeURIComponent;
 const formulaUrl = (id: string) => `/api/formulas/${enc(id)}`;
@@ -32,6 +33,20 @@ export class FormulasApi {
   private readonly http = inject(HttpClient);
   /** Full material records already asked for, shared by every line naming them. */
   private readonly materialCache = new Map<string, Observable<Material>>();
+  /** Moves on whenever a cached material is replaced, so open editors read it again. */
+  private readonly cacheRevision = signal(0);
+
+  constructor() {
+    // A material saved in the materials screens replaces the cached copy: the editor's live
+    // check must read what the server will read on the next save, never a stale record.
+    inject(MaterialsApi)
+      .saved.pipe(takeUntilDestroyed())
+      .subscribe((material) => {
+        if (!this.materialCache.has(material.id)) return;
+        this.materialCache.set(material.id, of(material));
+        this.cacheRevision.update((n) => n + 1);
+      });
+  }
 
   /** One page of formulas, filtered, sorted and paged on the server. */
   list(query: () => FormulaListQuery) {
@@ -103,21 +118,22 @@ export class FormulasApi {
 
   /**
    * The full records (blend components, certificates, weights per volume) of the materials in
-   * `ids`, keyed by id: what the live check needs. Each id is asked for once per page load.
+   * `ids`, keyed by id: what the live check needs. Each id is asked for once per page load, and
+   * read again from the cache when one of them is saved in the materials screens.
    */
   materials(ids: Signal<readonly string[]>) {
     return rxResource({
-      params: () => ids(),
+      params: () => ({ ids: ids(), revision: this.cacheRevision() }),
       stream: ({ params }) =>
-        params.length === 0
+        params.ids.length === 0
           ? of(new Map<string, Material>())
-          : forkJoin(params.map((id) => this.material(id))).pipe(
+          : forkJoin(params.ids.map((id) => this.material(id))).pipe(
               map((list) => new Map(list.map((m) => [m.id, m]))),
             ),
     });
   }
 
-  /** One material's full record, cached for the life of the app. */
+  /** One material's full record, cached for the life of the app (a save here replaces it). */
   material(id: string): Observable<Material> {
     let cached = this.materialCache.get(id);
     if (!cached) {

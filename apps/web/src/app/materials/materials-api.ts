@@ -1,6 +1,6 @@
 import { HttpClient, httpResource } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
-import { map, type Observable } from 'rxjs';
+import { map, type Observable, Subject, tap } from 'rxjs';
 import {
   type Material,
   type MaterialCreate,
@@ -17,6 +17,13 @@ import {
 @Injectable({ providedIn: 'root' })
 export class MaterialsApi {
   private readonly http = inject(HttpClient);
+  private readonly savedMaterials = new Subject<Material>();
+  /**
+   * Every material this app saves, as the API stored it, so screens holding a copy (the formula
+   * editor's live check) replace theirs. An event stream rather than a signal: two saves in a row
+   * must both arrive, where a signal would only keep the last.
+   */
+  readonly saved: Observable<Material> = this.savedMaterials.asObservable();
 
   /** One page of materials, filtered, sorted and paged on the server. */
   page(query: () => MaterialListQuery) {
@@ -50,15 +57,17 @@ export class MaterialsApi {
   }
 
   create(input: MaterialCreate): Observable<Material> {
-    return this.http
-      .post<unknown>('/api/materials', input)
-      .pipe(map((body) => materialSchema.parse(body)));
+    return this.http.post<unknown>('/api/materials', input).pipe(
+      map((body) => materialSchema.parse(body)),
+      tap((material) => this.savedMaterials.next(material)),
+    );
   }
 
   update(id: string, input: MaterialCreate): Observable<Material> {
-    return this.http
-      .put<unknown>(`/api/materials/${encodeURIComponent(id)}`, input)
-      .pipe(map((body) => materialSchema.parse(body)));
+    return this.http.put<unknown>(`/api/materials/${encodeURIComponent(id)}`, input).pipe(
+      map((body) => materialSchema.parse(body)),
+      tap((material) => this.savedMaterials.next(material)),
+    );
   }
 
   /** Every material as CSV text, in the columns the import reads back. */

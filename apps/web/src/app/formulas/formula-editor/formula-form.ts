@@ -63,6 +63,7 @@ export function createFormulaForm(
       contact: fb.group({ ...p.contact }),
       inBath: p.inBath,
       adultsOnly: p.adultsOnly,
+      soldAsSoap: p.soldAsSoap,
       ifraCategory: p.ifraCategory,
       markets: fb.control<ComplianceMarket[]>([...p.markets]),
       unitMassGrams: fb.control<number | null>(p.unitMassGrams),
@@ -88,13 +89,22 @@ export function lineGrams(v: Pick<FormulaFormValue, 'entry' | 'batchGrams' | 'li
   return v.lines.map((l) => ((l.percent ?? 0) / 100) * batch);
 }
 
-/** The version body for `PUT /api/formulas/:id/versions/:n`, before the shared schema checks it. */
-export function toVersionInput(v: FormulaFormValue): FormulaVersionInput {
+/**
+ * The product profile as it is saved and checked live. "Sold as soap" only means something for a
+ * soap, so it is sent as false for any other type even if it was ticked before the type changed.
+ */
+export function profileOf(v: Pick<FormulaFormValue, 'productType' | 'profile'>) {
   const n = v.profile.netQuantity;
-  const profile = {
+  return {
     ...v.profile,
+    soldAsSoap: v.productType === 'soap' && v.profile.soldAsSoap,
     netQuantity: n.amount === null ? null : { amount: n.amount, unit: n.unit },
   };
+}
+
+/** The version body for `PUT /api/formulas/:id/versions/:n`, before the shared schema checks it. */
+export function toVersionInput(v: FormulaFormValue): FormulaVersionInput {
+  const profile = profileOf(v);
   // Blank amounts go as null so the schema names them ("Enter a weight in grams").
   const blank = null as unknown as number;
   if (v.entry === 'grams') {

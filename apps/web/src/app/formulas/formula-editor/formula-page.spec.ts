@@ -2,9 +2,13 @@ import { MatButtonHarness } from '@angular/material/button/testing';
 import { MatButtonToggleHarness } from '@angular/material/button-toggle/testing';
 import { MatFormFieldHarness } from '@angular/material/form-field/testing';
 import { MatInputHarness } from '@angular/material/input/testing';
+import { MatSelectHarness } from '@angular/material/select/testing';
+import { TestBed } from '@angular/core/testing';
 import type { Material, Role } from '@batchproof/shared';
+import { MaterialsApi } from '../../materials/materials-api';
 import {
   aFormula,
+  aMaterial,
   aVersion,
   BICARB,
   BLUE_BLEND,
@@ -161,6 +165,65 @@ describe('FormulaPage', () => {
     expect(us()).toContain('Ultramarines');
     expect(us()).toContain('21 CFR 73.2725');
     expect(text(page, 'bp-live-checks h3')).toMatch(/Blocks\s*1/);
+  });
+
+  it('when a line’s material is saved in the materials screens, checks the draft against the saved record', async () => {
+    const mica = aMaterial('1b7f0c52-5a43-4d7e-8a51-6f0d2f4a0004', {
+      tradeName: 'Harbour mica',
+      inci: 'Mica',
+      category: 'colourant',
+      components: [{ inci: 'Mica', percent: 100, colourIndex: 'CI 77019' }],
+    });
+    const draft = aVersion([
+      { material: BICARB, grams: 200 },
+      { material: mica, grams: 1 },
+    ]);
+    const page = await openAs('formulator', ROUTES, URL, FormulaPage);
+    page.backend.expectOne(`/api/formulas/${FORMULA_ID}`).flush(aFormula([draft]));
+    page.backend.expectOne(`/api/formulas/${FORMULA_ID}/versions/1`).flush(draft);
+    await flushMaterials(page, [BICARB, mica]);
+    await page.harness.fixture.whenStable();
+    const us = () => text(page, '[aria-label="US · United States findings"]');
+    expect(us()).not.toContain('Ultramarines');
+
+    // The supplier's corrected certificate: the mica also holds ultramarines (CI 77007).
+    const corrected: Material = {
+      ...mica,
+      components: [
+        { inci: 'Mica', percent: 85, colourIndex: 'CI 77019' },
+        { inci: 'Ultramarines', percent: 15, colourIndex: 'CI 77007' },
+      ],
+    };
+    const saving = TestBed.inject(MaterialsApi)
+      .update(mica.id, { ...corrected, supplierId: null })
+      .subscribe();
+    page.backend
+      .expectOne((r) => r.method === 'PUT' && r.url === `/api/materials/${mica.id}`)
+      .flush(corrected);
+    saving.unsubscribe();
+    await page.harness.fixture.whenStable();
+
+    // The saved record replaces the editor's copy: no second read, and the live check follows it.
+    page.backend.expectNone((r) => r.method === 'GET' && r.url === `/api/materials/${mica.id}`);
+    expect(us()).toContain('Ultramarines');
+    expect(us()).toContain('21 CFR 73.2725');
+  });
+
+  it('offers “Sold as soap” only for a soap, with what it means in the US', async () => {
+    const page = await openDraft();
+    expect(page.el.textContent).not.toContain('Sold as soap');
+
+    const type = await page.loader.getHarness(
+      MatSelectHarness.with({ selector: 'bp-profile-fields mat-select' }),
+    );
+    await type.clickOptions({ text: 'Soap' });
+    await page.harness.fixture.whenStable();
+    const box = page.el.querySelector('bp-profile-fields .sold-as-soap');
+    expect(box?.textContent).toContain('Sold as soap');
+    // 21 CFR 701.20
+    expect(text(page, '#sold-as-soap-hint')).toBe(
+      'Labelled and sold only as soap: in the US such a soap is not a cosmetic (21 CFR 701.20)',
+    );
   });
 
   it('on a 400 puts the server messages beside their fields and keeps everything typed', async () => {

@@ -76,6 +76,17 @@ import type { FormulaForm } from './formula-form';
       </div>
     </fieldset>
 
+    @if (isSoap()) {
+      <div class="sold-as-soap">
+        <mat-checkbox [formControl]="p.controls.soldAsSoap" aria-describedby="sold-as-soap-hint"
+          >Sold as soap</mat-checkbox
+        >
+        <p id="sold-as-soap-hint" class="check-hint">
+          Labelled and sold only as soap: in the US such a soap is not a cosmetic (21 CFR 701.20)
+        </p>
+      </div>
+    }
+
     <fieldset>
       <legend>Markets</legend>
       <mat-button-toggle-group [formControl]="p.controls.markets" multiple aria-label="Markets">
@@ -142,6 +153,14 @@ import type { FormulaForm } from './formula-form';
       flex-wrap: wrap;
       gap: 0 16px;
     }
+    .sold-as-soap {
+      margin: 0 0 8px;
+    }
+    .check-hint {
+      margin: 0 0 0 40px;
+      color: var(--mat-sys-on-surface-variant);
+      font: var(--mat-sys-body-small);
+    }
     .unit {
       font-weight: 300;
       color: var(--mat-sys-on-surface-variant);
@@ -156,10 +175,15 @@ import type { FormulaForm } from './formula-form';
 })
 export class ProfileFields {
   readonly form = input.required<FormulaForm>();
-  /** The form's value revision, so the markets message follows edits. */
+  /** The form's value revision, so the markets message and the soap box follow edits. */
   readonly revision = input(0);
 
   protected readonly profile = computed(() => this.form().controls.profile);
+  /** Whether the product is a soap, the only type "sold as soap" applies to (21 CFR 701.20). */
+  protected readonly isSoap = computed(() => {
+    this.revision();
+    return this.form().controls.productType.value === 'soap';
+  });
   protected readonly marketsError = computed(() => {
     this.revision();
     return errorMessage(this.profile().controls.markets);

@@ -15,6 +15,7 @@ import { MatInput } from '@angular/material/input';
 import { type ComplianceFinding, releaseSchema } from '@batchproof/shared';
 import { errorMessage } from '../../forms/form-errors';
 import { validateContract } from '../form-paths';
+import { InterpretationNote } from '../live-checks/interpretation-note';
 import { SeverityLabel } from '../severity/severity-label';
 
 /** What the override dialog shows. */
@@ -47,6 +48,7 @@ const mapPath = (path: string) => path.replace(/^override\./, '');
     MatIcon,
     MatInput,
     MatLabel,
+    InterpretationNote,
     SeverityLabel,
   ],
   template: `
@@ -61,6 +63,9 @@ const mapPath = (path: string) => path.replace(/^override\./, '');
                 <bp-severity-label severity="block" />
                 <strong>{{ f.market ?? 'Every market' }} · {{ f.subject }}</strong>
                 <span class="source">{{ f.source }}</span>
+                @if (f.status === 'interpretation') {
+                  <bp-interpretation-note class="interpretation" />
+                }
               </li>
             }
           </ul>
@@ -100,7 +105,8 @@ const mapPath = (path: string) => path.replace(/^override\./, '');
       gap: 4px 8px;
       align-items: center;
     }
-    .source {
+    .source,
+    .interpretation {
       flex-basis: 100%;
       font: var(--mat-sys-body-small);
       color: var(--mat-sys-on-surface-variant);

@@ -4,9 +4,11 @@ import {
   type ComplianceFinding,
   type ComplianceMarket,
   DEFER_TO_ASSESSOR,
+  INTERPRETATION_NOTE as ENGINE_INTERPRETATION_NOTE,
 } from '@batchproof/shared';
 import { MARKETS } from '../product-types';
 import { SeverityLabel } from '../severity/severity-label';
+import { InterpretationNote } from './interpretation-note';
 
 /** A group of findings under one market (or every market), most serious first. */
 interface MarketGroup {
@@ -19,12 +21,13 @@ const MARKET_NAMES = new Map(MARKETS.map((m) => [m.code, m.name]));
 
 /**
  * Findings grouped by market, each with its severity as icon + word, what it is about, the
- * message and the rule it rests on. The assessor sentence the engine appends to findings that
+ * message and the rule it rests on (with a note when the rule is only remembered, or is
+ * Batchproof's own reading of it). The assessor sentence the engine appends to findings that
  * could hurt someone is set apart, so it is read rather than skimmed.
  */
 @Component({
   selector: 'bp-finding-list',
-  imports: [MatIcon, SeverityLabel],
+  imports: [InterpretationNote, MatIcon, SeverityLabel],
   template: `
     @for (group of groups(); track group.key) {
       <section class="group" [attr.aria-label]="group.title + ' findings'">
@@ -48,6 +51,9 @@ const MARKET_NAMES = new Map(MARKETS.map((m) => [m.code, m.name]));
                   <span class="weak">(from memory, not yet confirmed)</span>
                 }
               </p>
+              @if (f.finding.status === 'interpretation') {
+                <bp-interpretation-note />
+              }
             </li>
           }
         </ul>
@@ -142,7 +148,10 @@ export class FindingList {
           .filter((f) => f.market === market)
           .map((finding) => ({
             finding,
-            text: finding.message.replace(DEFER_TO_ASSESSOR, '').trim(),
+            text: finding.message
+              .replace(DEFER_TO_ASSESSOR, '')
+              .replace(ENGINE_INTERPRETATION_NOTE, '')
+              .trim(),
             harm: finding.message.includes(DEFER_TO_ASSESSOR),
           })),
       }))

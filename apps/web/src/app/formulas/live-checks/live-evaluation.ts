@@ -1,15 +1,14 @@
 import {
   evaluateFormula,
-  evaluationInputSchema,
   type EvaluationResult,
   type FizzBalance,
   fizzBalance,
   fizzReactants,
   type Material,
-  materialToEngineInput,
+  prepareEvaluation,
   type ProductType,
 } from '@batchproof/shared';
-import { type FormulaFormValue, lineGrams } from '../formula-editor/formula-form';
+import { type FormulaFormValue, lineGrams, profileOf } from '../formula-editor/formula-form';
 import { isEffervescent } from '../product-types';
 
 /** One line of the composition, as typed. */
@@ -37,8 +36,8 @@ export interface LiveEvaluation {
 export const today = (now = new Date()) => now.toISOString().slice(0, 10);
 
 /**
- * Runs the shared compliance engine on the editor's current value, with each line's material
- * mapped exactly as the server maps it on save. Lines without a chosen material are left out
+ * Runs the shared compliance engine on the editor's current value through `prepareEvaluation`,
+ * the same builder the server uses on save, with the profile as it would be saved. Lines without a chosen material are left out
  * (and said so); nothing here throws on half-typed input.
  */
 export function evaluateDraft(
@@ -71,27 +70,25 @@ export function evaluateDraft(
   }));
   const fizz = fizzFor(value.productType, lines);
 
-  const parsed = evaluationInputSchema.safeParse({
+  const prepared = prepareEvaluation({
     asOf,
-    markets: value.profile.markets,
-    product: {
-      name: value.name.trim() || 'Untitled formula',
-      use: value.profile.use,
-      contact: value.profile.contact,
-      inBath: value.profile.inBath,
-      adultsOnly: value.profile.adultsOnly,
-      ifraCategory: value.profile.ifraCategory,
-      ...(value.profile.netQuantity.amount
-        ? { netQuantity: value.profile.netQuantity as { amount: number; unit: 'g' | 'mL' } }
-        : {}),
-    },
-    lines: lines.map((l) => ({ grams: l.grams, material: materialToEngineInput(l.material) })),
+    productName: value.name,
+    productType: value.productType,
+    profile: profileOf(value),
+    lines,
   });
-  if (!parsed.success) {
-    problems.push(...new Set(parsed.error.issues.map((issue) => issue.message)));
+  if (!prepared.ok) {
+    problems.push(...prepared.problems);
     return { result: null, problems, pending, fizz, composition, totalGrams };
   }
-  return { result: evaluateFormula(parsed.data), problems, pending, fizz, composition, totalGrams };
+  return {
+    result: evaluateFormula(prepared.input),
+    problems,
+    pending,
+    fizz,
+    composition,
+    totalGrams,
+  };
 }
 
 function fizzFor(

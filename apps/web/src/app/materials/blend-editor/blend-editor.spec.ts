@@ -26,6 +26,7 @@ const MICA_BLEND: Material = {
   supplierName: null,
   notes: null,
   colourIndex: null,
+  nano: false,
   components: [
     { inci: 'Mica', colourIndex: 'CI 77019', percent: 70 },
     { inci: 'Ultramarines', colourIndex: 'CI 77007', percent: 30 },

@@ -1,6 +1,7 @@
 import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
 import { type FormArray, NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
+import { MatCheckbox } from '@angular/material/checkbox';
 import { MatError, MatFormField, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
@@ -14,7 +15,7 @@ const round = (n: number) => Math.round(n * 1000) / 1000;
 
 /**
  * The components of a blend (a mica blend, a pre-made base) as rows of INCI name, US name,
- * Colour Index and percent, with a running sum that must reach 100 %.
+ * Colour Index, percent and whether it is a nanomaterial, with a running sum that must reach 100 %.
  */
 @Component({
   selector: 'bp-blend-editor',
@@ -22,6 +23,7 @@ const round = (n: number) => Math.round(n * 1000) / 1000;
     EditableRow,
     ReactiveFormsModule,
     MatButton,
+    MatCheckbox,
     MatError,
     MatFormField,
     MatIcon,

@@ -43,6 +43,7 @@ export class MaterialFormModel {
       supplierId: m?.supplierId ?? '',
       notes: m?.notes ?? '',
       colourIndex: m?.colourIndex ?? '',
+      nano: m?.nano ?? false,
       components: fb.array((m?.components ?? []).map((c) => this.component(c))),
       ifraCertificate: fb.group({
         limits: fb.array(
@@ -72,7 +73,9 @@ export class MaterialFormModel {
       usName: c?.usName ?? '',
       colourIndex: c?.colourIndex ?? '',
       percent: this.fb.control<number | null>(c?.percent ?? null),
+      nano: c?.nano ?? false,
       // Kept as they came so a save does not drop them; the editor does not show them yet.
+      cas: c?.cas ?? '',
       functions: this.fb.control<string[]>(c?.functions ?? []),
       incidental: c?.incidental ?? false,
     });
@@ -134,11 +137,14 @@ export function toMaterialInput(raw: MaterialFormValue): MaterialCreate {
     supplierId: raw.supplierId || null,
     notes: raw.notes,
     colourIndex: raw.colourIndex,
+    nano: raw.nano,
     components: raw.components.map((c) => ({
       inci: c.inci,
       usName: given(c.usName),
       colourIndex: given(c.colourIndex),
+      cas: given(c.cas),
       percent: num(c.percent) as number,
+      ...(c.nano ? { nano: true } : {}),
       ...(c.functions.length ? { functions: c.functions } : {}),
       ...(c.incidental ? { incidental: true } : {}),
     })),

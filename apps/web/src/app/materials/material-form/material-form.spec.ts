@@ -132,6 +132,7 @@ describe('MaterialForm', () => {
       supplierName: null,
       notes: null,
       colourIndex: null,
+      nano: false,
       components: [],
       ifraCertificate: null,
       allergenDeclaration: null,

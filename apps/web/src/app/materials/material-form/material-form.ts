@@ -10,6 +10,7 @@ import {
 } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
+import { MatCheckbox } from '@angular/material/checkbox';
 import {
   MatChipGrid,
   MatChipInput,
@@ -62,6 +63,7 @@ import {
     ReactiveFormsModule,
     RouterLink,
     MatButton,
+    MatCheckbox,
     MatChipGrid,
     MatChipInput,
     MatChipRemove,
