@@ -226,7 +226,7 @@ describe('nano', () => {
 
 describe('names that change meaning', () => {
   it('keeps the lake designation when the US name comes from the matched listing', () => {
-    // 21 CFR 82.51 and 82.1051: a lake is named by its straight colour and the salt
+    // from memory: 21 CFR 82.51 and 82.1051 name a lake by its straight colour and the salt
     const { result } = check(
       'US',
       aBodyLotion(),

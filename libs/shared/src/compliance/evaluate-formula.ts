@@ -47,7 +47,7 @@ export function evaluateFormula(input: EvaluationInput): EvaluationResult {
     for (const ingredient of ingredients) {
       if (!ingredient.isColourant || ingredient.usName !== undefined) continue;
       const match = matchUsColourant(ingredient, asOf);
-      // 21 CFR 82.51: a lake is named by its straight colour followed by the lake designation.
+      // from memory: 21 CFR 82.51 names a lake by its straight colour followed by the lake designation.
       if (match.kind === 'listed')
         usListedNames.set(
           ingredient,
