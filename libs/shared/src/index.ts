@@ -19,3 +19,4 @@ export * from './formulas/evaluation-input-builder';
 export * from './formulas/formula-scaling-schema';
 export * from './compliance/index';
 export * from './materials/material-csv-schema';
+export * from './dates/calendar-day';

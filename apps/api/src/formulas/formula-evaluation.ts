@@ -1,6 +1,7 @@
 import {
   evaluateFormula,
   prepareEvaluation,
+  todayIso,
   type ProductProfile,
   type ProductType,
 } from '@batchproof/shared';
@@ -16,7 +17,7 @@ export interface GramLine {
 }
 
 /** Today as YYYY-MM-DD: rules with effective dates are checked as of the day of saving. */
-export const today = (now = new Date()) => now.toISOString().slice(0, 10);
+export const today = (now = new Date()) => todayIso(now);
 
 /**
  * Loads the lines' materials from the caller's workshop. A material id that is unknown here

@@ -1,5 +1,7 @@
 import { and, count, eq } from 'drizzle-orm';
 import {
+  addDays,
+  todayIso,
   formulaCreateSchema,
   lotCreateSchema,
   materialCreateSchema,
@@ -23,8 +25,7 @@ import { insertSupplier } from '../suppliers/suppliers-repository';
 
 /** Audit action that marks the demo workspace as seeded, so it is never seeded twice. */
 const SEEDED = 'demo.workspace-seeded';
-const daysBefore = (now: Date, days: number) =>
-  new Date(now.getTime() - days * 86_400_000).toISOString().slice(0, 10);
+const daysBefore = (now: Date, days: number) => addDays(todayIso(now), -days);
 
 /**
  * Seeds the demo workshop's suppliers, materials, lots and formulas once. Safe on every start:

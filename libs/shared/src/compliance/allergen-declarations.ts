@@ -5,6 +5,7 @@ import {
   EU_ALLERGEN_PLACING_DEADLINE,
   type EuAnnexIiiAllergen,
 } from '../reference-data/eu-annex-iii-allergens';
+import { addDays } from '../dates/calendar-day';
 import type { ComplianceMarket, ReferenceStatus } from '../reference-data/reference-row';
 import { matchAnnexIiiAllergen } from './allergen-matching';
 import { matchRestricted } from './restricted-substances';
@@ -102,12 +103,8 @@ const UK_SOURCE = 'UK Cosmetics Regulation (retained Regulation (EC) No 1223/200
 const CA_SOURCE =
   'Cosmetic Regulations as amended by SOR/2024-63 (EU Annex III incorporated by reference)';
 
-function dayAfter(isoDate: string): string {
-  const [y, m, d] = isoDate.split('-').map(Number) as [number, number, number];
-  return new Date(Date.UTC(y, m - 1, d + 1)).toISOString().slice(0, 10);
-}
 /** First day labels of products placed on the EU market must name the 2023/1545 allergens. */
-const EU_NEW_ALLERGENS_FROM = dayAfter(EU_ALLERGEN_PLACING_DEADLINE);
+const EU_NEW_ALLERGENS_FROM = addDays(EU_ALLERGEN_PLACING_DEADLINE, 1);
 
 /** Whether, and from when, a market requires naming an allergen entry. */
 function requirementFor(

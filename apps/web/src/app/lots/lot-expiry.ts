@@ -1,3 +1,5 @@
+import { addDays as addCalendarDays, calendarDayOf } from '@batchproof/shared';
+
 /**
  * How close to its expiry date a lot counts as expiring soon.
  * // common practice, no published source: a month is the usual reorder and use-up window.
@@ -20,18 +22,14 @@ export const EXPIRY_FILTERS = [
   { value: '90', label: 'Expired or expiring within 90 days' },
 ] as const;
 
-/** A local calendar day as YYYY-MM-DD (the form the API and date inputs use). */
+/** The calendar day of `date` as YYYY-MM-DD: Batchproof's one "today" (shared with the server). */
 export function isoDay(date: Date): string {
-  const y = date.getFullYear();
-  const m = String(date.getMonth() + 1).padStart(2, '0');
-  const d = String(date.getDate()).padStart(2, '0');
-  return `${y}-${m}-${d}`;
+  return calendarDayOf(date);
 }
 
 /** The day `days` after `today` (negative for before), as YYYY-MM-DD. */
 export function addDays(today: Date, days: number): string {
-  const next = new Date(today.getFullYear(), today.getMonth(), today.getDate() + days);
-  return isoDay(next);
+  return addCalendarDays(calendarDayOf(today), days);
 }
 
 /** Where a lot expiring on `expiresOn` stands on `today`. */

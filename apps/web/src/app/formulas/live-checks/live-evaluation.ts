@@ -6,6 +6,7 @@ import {
   fizzReactants,
   type Material,
   prepareEvaluation,
+  todayIso,
   type ProductType,
 } from '@batchproof/shared';
 import { type FormulaFormValue, lineGrams, profileOf } from '../formula-editor/formula-form';
@@ -33,7 +34,7 @@ export interface LiveEvaluation {
 }
 
 /** Today as YYYY-MM-DD, the date the server also checks against when saving. */
-export const today = (now = new Date()) => now.toISOString().slice(0, 10);
+export const today = (now = new Date()) => todayIso(now);
 
 /**
  * Runs the shared compliance engine on the editor's current value through `prepareEvaluation`,
