@@ -39,7 +39,8 @@ export const passwordResets = pgTable('password_resets', {
 
 /**
  * Refresh sessions: a long-lived opaque token held in an httpOnly cookie, rotated on every
- * refresh; only its SHA-256 is kept, and sign-out or reuse revokes it.
+ * refresh; only its SHA-256 is kept, and sign-out or reuse revokes it. Every token rotated from
+ * one sign-in shares its `familyId`, so a spent token presented again revokes the whole family.
  */
 export const refreshSessions = pgTable(
   'refresh_sessions',
@@ -51,10 +52,36 @@ export const refreshSessions = pgTable(
     userId: uuid()
       .notNull()
       .references(() => users.id, { onDelete: 'cascade' }),
+    familyId: uuid().notNull().defaultRandom(),
     tokenHash: text().notNull().unique(),
     expiresAt: timestamp({ withTimezone: true }).notNull(),
     revokedAt: timestamp({ withTimezone: true }),
     ...timestamps,
   },
-  (t) => [index('refresh_sessions_user_idx').on(t.userId)],
+  (t) => [
+    index('refresh_sessions_user_idx').on(t.userId),
+    index('refresh_sessions_family_idx').on(t.familyId),
+  ],
+);
+
+/**
+ * A sign-up waiting for its e-mail to be confirmed. The workshop and its owner are created only
+ * when the link is opened, so the sign-up answer is the same whether or not the address already
+ * has an account. Holds no workshop data yet, hence no workshop id; only the token's SHA-256 and
+ * the password's bcrypt hash are kept.
+ */
+export const signUpRequests = pgTable(
+  'sign_up_requests',
+  {
+    id: id(),
+    email: text().notNull(),
+    name: text().notNull(),
+    workshopName: text().notNull(),
+    passwordHash: text().notNull(),
+    tokenHash: text().notNull().unique(),
+    expiresAt: timestamp({ withTimezone: true }).notNull(),
+    usedAt: timestamp({ withTimezone: true }),
+    ...timestamps,
+  },
+  (t) => [index('sign_up_requests_email_idx').on(t.email)],
 );
