@@ -1,13 +1,18 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { complianceMarketSchema } from '../reference-data/reference-row';
 import { parseColourIndex } from './ingredient-names';
+import { casCheckDigit, isValidCas } from '../materials/cas-number';
 import { productTypeSchema } from './product-types';
 
 /** A CAS Registry Number as written, e.g. 122-99-6. */
 const casSchema = z
   .string()
   .trim()
-  .regex(/^\d{2,7}-\d{2}-\d$/, { error: 'Enter a CAS number such as 122-99-6' });
+  .regex(/^\d{2,7}-\d{2}-\d$/, { error: 'Enter a CAS number such as 122-99-6' })
+  .refine(isValidCas, {
+    error: (issue) =>
+      `CAS ${String(issue.input)} fails its check digit (the other digits call for ${casCheckDigit(String(issue.input))}): check the number`,
+  });
 
 /** Largest line weight the engine accepts: 1,000 tonnes, far above any small batch, keeps sums finite. */
 const MAX_GRAMS = 1e9;
@@ -55,11 +60,7 @@ export const blendComponentSchema = z.object({
 /** A fragrance allergen as the supplier declares it: percent of the neat fragrance or essential oil. */
 export const fragranceAllergenInputSchema = z.object({
   inci: text('Allergen name'),
-  cas: z
-    .string()
-    .trim()
-    .regex(/^\d{2,7}-\d{2}-\d$/, { error: 'Enter a CAS number such as 78-70-6' })
-    .optional(),
+  cas: casSchema.optional(),
   percent: percentSchema,
 });
 

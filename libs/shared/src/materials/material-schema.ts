@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import {
   BLEND_TOLERANCE_PERCENT,
   blendComponentSchema,
@@ -15,6 +15,7 @@ import {
   storedRecordFields,
 } from '../records/record-fields';
 import { calibrationSummarySchema } from './calibration-summary';
+import { casProblems } from './cas-number';
 
 /** Kinds of raw material; decides which extra data a material carries. */
 export const MATERIAL_CATEGORIES = [
@@ -92,7 +93,10 @@ export const materialCreateSchema = z
     tradeName: requiredText('Trade name'),
     inci: requiredText('INCI name', 500),
     usName: optionalText('US label name', 500),
-    cas: optionalText('CAS number', 100),
+    cas: optionalText('CAS number', 100).superRefine((value, ctx) => {
+      for (const message of value === null ? [] : casProblems(value))
+        ctx.addIssue({ code: 'custom', message });
+    }),
     ec: optionalText('EC number', 100),
     functions: z
       .array(z.string().trim().min(1, { error: 'A function cannot be empty' }).max(100))
