@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import {
   complianceFindingSchema,
   type ComplianceFinding,
@@ -15,6 +15,11 @@ export const lineChangeSchema = z.object({
   toGrams: z.number().nullable(),
   fromPercent: z.number().nullable(),
   toPercent: z.number().nullable(),
+  /**
+   * Whether the line's share of the batch moved although its own grams did not (another line
+   * changed): shown beside the line, never flagged as a change.
+   */
+  percentMoved: z.boolean(),
 });
 export type LineChange = z.infer<typeof lineChangeSchema>;
 
@@ -61,7 +66,8 @@ const findingKey = (f: ComplianceFinding) => `${f.code}|${f.market ?? '*'}|${f.s
 const round = (n: number) => Math.round(n * 10_000) / 10_000;
 
 /**
- * Compares two versions: which lines were added, removed or changed (grams and percent), and per
+ * Compares two versions: which lines were added, removed or changed (a line changed when its grams
+ * did; a share that moved only because another line changed is reported as `percentMoved`), and per
  * market how the declaration and the findings moved. Findings without a market (IFRA maxima) are
  * reported under every market compared.
  */
@@ -76,7 +82,7 @@ export function compareVersions(from: Comparable, to: Comparable): VersionCompar
       ? 'added'
       : !y
         ? 'removed'
-        : round(x.grams) === round(y.grams) && round(x.percent) === round(y.percent)
+        : round(x.grams) === round(y.grams)
           ? 'unchanged'
           : 'changed';
     lines.push({
@@ -87,6 +93,7 @@ export function compareVersions(from: Comparable, to: Comparable): VersionCompar
       toGrams: y ? round(y.grams) : null,
       fromPercent: x ? round(x.percent) : null,
       toPercent: y ? round(y.percent) : null,
+      percentMoved: change === 'unchanged' && round(x!.percent) !== round(y!.percent),
     });
   }
 

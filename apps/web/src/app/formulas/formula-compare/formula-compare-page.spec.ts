@@ -39,6 +39,7 @@ const COMPARISON: VersionComparison = {
       toGrams: 180,
       fromPercent: 66.6667,
       toPercent: 64.2857,
+      percentMoved: false,
     },
     {
       materialId: CITRIC.id,
@@ -48,6 +49,7 @@ const COMPARISON: VersionComparison = {
       toGrams: 100,
       fromPercent: 33.3333,
       toPercent: 35.7143,
+      percentMoved: true,
     },
     {
       materialId: BLUE_BLEND.id,
@@ -57,6 +59,7 @@ const COMPARISON: VersionComparison = {
       toGrams: null,
       fromPercent: 0.3311,
       toPercent: null,
+      percentMoved: false,
     },
   ],
   markets: [
