@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { notFound } from './app-error';
 
 const idParam = z.uuid();

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { roleSchema } from './roles';
 
 const trimmed = (label: string, max: number) =>

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 
 /** The roles a workshop member can hold; see the product brief for what each may do. */
 export const ROLES = ['owner', 'formulator', 'production', 'assessor', 'viewer'] as const;

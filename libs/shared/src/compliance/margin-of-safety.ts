@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 
 /** MoS at or above which a margin is generally considered adequate (10 inter-species × 10 intra-species). */
 export const MINIMUM_MARGIN_OF_SAFETY = 100; // from memory (SCCS Notes of Guidance)

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import type { ReferenceStatus } from '../reference-data/reference-row';
 import { US_UNITS } from './us-customary-units';
 

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 
 /**
  * Kinds of product a formula makes, in the order they are offered. The engine reads the type for

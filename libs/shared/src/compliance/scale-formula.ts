@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 
 /** Options of {@link scaleFormula}. */
 export const scaleFormulaOptionsSchema = z.object({

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { US_UNITS } from './us-customary-units';
 
 /** Kitchen and lab measures {@link volumeToGrams} converts. US customary measures per NIST. */

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 
 /** Machine-readable error codes the API sends inside the error envelope. */
 export const errorCodeSchema = z.enum([

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 
 const loss = z
   .number({ error: 'Enter the loss allowance as a percentage' })

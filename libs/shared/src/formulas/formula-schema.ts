@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { evaluationResultSchema } from '../compliance/evaluation-result-schema';
 import { listQuerySchema, pageSchema } from '../lists/list-query-schema';
 import { complianceMarketSchema } from '../reference-data/reference-row';

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 
 /** Largest page a list route serves; bigger pages are refused rather than silently cut. */
 export const MAX_PAGE_SIZE = 100;

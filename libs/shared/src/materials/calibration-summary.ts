@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import type { KitchenMeasure } from '../compliance/volume-to-grams';
 import { kitchenMeasureSchema } from '../compliance/volume-to-grams';
 

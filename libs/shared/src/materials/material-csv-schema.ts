@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 
 /** Columns of the materials CSV, in export order; import accepts them in any order. */
 export const MATERIAL_CSV_COLUMNS = [

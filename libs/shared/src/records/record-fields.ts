@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 
 /** A required one-line text field, trimmed, with a plain message naming the field. */
 export const requiredText = (label: string, max = 200) =>

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 
 /**
  * How sure Batchproof is of a reference value, as tagged beside each row:

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 
 /** A reference list as the "Reference lists" page shows it in its index. */
 export const referenceListSummarySchema = z.object({

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { listQuerySchema, pageSchema } from '../lists/list-query-schema';
 import { optionalText, requiredText, storedRecordFields } from '../records/record-fields';
 

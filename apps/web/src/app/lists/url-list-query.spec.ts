@@ -3,7 +3,7 @@ import { TestBed } from '@angular/core/testing';
 import { provideRouter, Router } from '@angular/router';
 import { RouterTestingHarness } from '@angular/router/testing';
 import { listQuerySchema } from '@batchproof/shared';
-import { z } from 'zod';
+import * as z from 'zod';
 import { injectUrlListQuery, type UrlListQueryOptions } from './url-list-query';
 
 const schema = listQuerySchema(['name', 'updatedAt'], 'name').extend({
