@@ -11,6 +11,7 @@ import { checkFragranceMaximums } from './fragrance-maximums';
 import { checkRequiredWarnings } from './required-warning-checks';
 import { checkRestrictedSubstances } from './restricted-substances';
 import { allergenDataFindings } from './scent-materials';
+import { labelDetailFindings } from './label-details';
 import { soapFindings } from './soap-rules';
 
 const SEVERITY_ORDER = { block: 0, warn: 1, info: 2 } as const;
@@ -104,6 +105,7 @@ export function evaluateFormula(input: EvaluationInput): EvaluationResult {
     }
   }
 
+  findings.push(...labelDetailFindings(product));
   const checked = soapFindings(product, markets, findings);
   checked.sort((a, b) => SEVERITY_ORDER[a.severity] - SEVERITY_ORDER[b.severity]);
   return {

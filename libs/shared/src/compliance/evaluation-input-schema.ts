@@ -149,6 +149,12 @@ export const productInputSchema = z.object({
       unit: z.enum(['g', 'mL']),
     })
     .optional(),
+  /** Mass of one unit as made, grams (a label and a batch need it). */
+  unitMassGrams: z
+    .number()
+    .gt(0, { error: 'Unit mass must be more than 0 g' })
+    .max(MAX_GRAMS)
+    .optional(),
 });
 
 /** Input of {@link evaluateFormula}: a formula by weight, the product and the markets to check. */

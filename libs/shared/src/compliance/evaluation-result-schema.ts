@@ -42,6 +42,7 @@ export const findingCodeSchema = z.enum([
   'PROHIBITED_UPCOMING',
   'WARNING_FOAMING_BATH_DIRECTIONS',
   'SOAP_NOT_A_COSMETIC',
+  'LABEL_DETAILS_MISSING',
 ]);
 /** A finding code. */
 export type FindingCode = z.infer<typeof findingCodeSchema>;

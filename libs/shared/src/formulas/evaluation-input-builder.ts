@@ -20,6 +20,7 @@ export interface ProfileSource {
   readonly ifraCategory: string;
   readonly markets: readonly ComplianceMarket[];
   readonly netQuantity?: { amount: number | null; unit: 'g' | 'mL' } | null | undefined;
+  readonly unitMassGrams?: number | null | undefined;
 }
 
 /** Everything a check of one formula version needs. */
@@ -54,6 +55,7 @@ export function toEvaluationInput(source: EvaluationSource): EvaluationInputDraf
       adultsOnly: profile.adultsOnly,
       ifraCategory: profile.ifraCategory,
       ...(amount ? { netQuantity: { amount, unit: profile.netQuantity!.unit } } : {}),
+      ...(profile.unitMassGrams ? { unitMassGrams: profile.unitMassGrams } : {}),
     },
     lines: source.lines.map((l) => ({
       grams: l.grams,
