@@ -15,11 +15,30 @@ export const emailSchema = z
   .toLowerCase()
   .pipe(z.email({ error: 'Enter a valid e-mail address.' }).max(254));
 
-/** A new password: long enough to resist guessing, short enough for bcrypt (72 bytes). */
+/** bcrypt reads only the first 72 bytes of a password; anything after them would be ignored. */
+export const PASSWORD_MAX_BYTES = 72;
+
+/** Length of a string in UTF-8 bytes (a lone surrogate counts as the 3-byte replacement). */
+export function utf8ByteLength(text: string): number {
+  let bytes = 0;
+  for (const char of text) {
+    const code = char.codePointAt(0)!;
+    bytes += code < 0x80 ? 1 : code < 0x800 ? 2 : code < 0x10000 ? 3 : 4;
+  }
+  return bytes;
+}
+
+/**
+ * A new password: long enough to resist guessing, and within bcrypt's 72 bytes, counted in
+ * bytes because an accented letter takes two and an emoji four.
+ */
 export const newPasswordSchema = z
   .string({ error: 'Password is required.' })
   .min(10, 'Use at least 10 characters.')
-  .max(72, 'Use at most 72 characters.');
+  .refine(
+    (password) => utf8ByteLength(password) <= PASSWORD_MAX_BYTES,
+    `Use a shorter password: at most ${PASSWORD_MAX_BYTES} bytes, which is 72 plain letters and digits, fewer with accented letters or emoji.`,
+  );
 
 export const personNameSchema = trimmed('Name', 120);
 
@@ -75,6 +94,14 @@ export const acceptInvitationSchema = z.object({
   password: newPasswordSchema,
 });
 export type AcceptInvitation = z.infer<typeof acceptInvitationSchema>;
+
+/** `POST /api/auth/sign-up/confirm`: the token from the confirmation e-mail. */
+export const signUpConfirmSchema = z.object({ token: tokenSchema });
+export type SignUpConfirm = z.infer<typeof signUpConfirmSchema>;
+
+/** The answer to a sign-up or reset request: the same whether or not the address has an account. */
+export const emailSentSchema = z.object({ message: z.string() });
+export type EmailSent = z.infer<typeof emailSentSchema>;
 
 export const passwordResetRequestSchema = z.object({ email: emailSchema });
 export type PasswordResetRequest = z.infer<typeof passwordResetRequestSchema>;
