@@ -23,6 +23,16 @@ export default tseslint.config(
         { argsIgnorePattern: '^_', varsIgnorePattern: '^_' },
       ],
       '@typescript-eslint/no-non-null-assertion': 'off',
+      'no-restricted-syntax': [
+        'error',
+        {
+          // The named export is one object holding every locale, so the web bundle keeps them all.
+          selector:
+            "ImportDeclaration[source.value='zod'][importKind='value'] > ImportSpecifier[imported.name='z']",
+          message:
+            "Import zod as `import * as z from 'zod'`, which lets the build drop what is unused.",
+        },
+      ],
     },
   },
   {
