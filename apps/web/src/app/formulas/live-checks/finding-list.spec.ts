@@ -44,3 +44,36 @@ describe('FindingList', () => {
     expect(el.textContent).toContain('(from memory, not yet confirmed)');
   });
 });
+
+describe('FindingList across markets', () => {
+  it('shows a finding raised alike for the EU, UK and Canada once, under those markets, with each source', async () => {
+    TestBed.configureTestingModule({ providers: [provideZonelessChangeDetection()] });
+    const fixture = TestBed.createComponent(FindingList);
+    const missing = (market: 'EU' | 'UK' | 'CA', source: string) =>
+      aFinding({
+        code: 'FRAGRANCE_ALLERGEN_DATA_MISSING',
+        market,
+        subject: 'Lavender oil',
+        message: `Lavender oil has no allergen declaration, so the ${market} ingredient list cannot name the allergens.`,
+        source,
+      });
+    fixture.componentRef.setInput('findings', [
+      missing('EU', 'EU Annex III'),
+      missing('UK', 'UK Annex III'),
+      missing('CA', 'SOR/2024-63'),
+      aFinding({ market: 'EU' }),
+    ]);
+    fixture.componentRef.setInput('markets', ['US', 'EU', 'UK', 'CA']);
+    await fixture.whenStable();
+    const el = fixture.nativeElement as HTMLElement;
+    const titles = [...el.querySelectorAll('h4')].map((h) => h.textContent?.trim());
+    expect(titles).toEqual([
+      'EU · European Union, UK · United Kingdom and CA · Canada',
+      'EU · European Union',
+    ]);
+    const items = el.querySelectorAll('li');
+    expect(items.length).toBe(2);
+    expect(items[0]!.textContent).toContain('the EU/UK/CA ingredient list');
+    expect(items[0]!.textContent).toContain('EU Annex III; UK Annex III; SOR/2024-63');
+  });
+});

@@ -10,11 +10,29 @@ import { MARKETS } from '../product-types';
 import { SeverityLabel } from '../severity/severity-label';
 import { InterpretationNote } from './interpretation-note';
 
-/** A group of findings under one market (or every market), most serious first. */
+/** One finding as shown: the same finding for several markets is shown once, with their sources. */
+interface ShownFinding {
+  finding: ComplianceFinding;
+  text: string;
+  harm: boolean;
+  sources: string[];
+}
+
+/** Findings under one market, under several markets they share, or under every market. */
 interface MarketGroup {
   key: string;
   title: string;
-  findings: { finding: ComplianceFinding; text: string; harm: boolean }[];
+  findings: ShownFinding[];
+}
+
+const MARKET_CODE = /\b(US|EU|UK|CA)\b/g;
+
+/** Market codes and names in the engine's order, joined: "EU, UK and Canada". */
+function joinMarkets(markets: readonly ComplianceMarket[]): string {
+  const names = markets.map((m) => `${m} · ${MARKET_NAMES.get(m)}`);
+  return names.length < 2
+    ? (names[0] ?? '')
+    : `${names.slice(0, -1).join(', ')} and ${names.at(-1)}`;
 }
 
 const MARKET_NAMES = new Map(MARKETS.map((m) => [m.code, m.name]));
@@ -46,7 +64,7 @@ const MARKET_NAMES = new Map(MARKETS.map((m) => [m.code, m.name]));
                 </p>
               }
               <p class="source">
-                Source: {{ f.finding.source }}
+                Source: {{ f.sources.join('; ') }}
                 @if (f.finding.status === 'M') {
                   <span class="weak">(from memory, not yet confirmed)</span>
                 }
@@ -138,23 +156,67 @@ export class FindingList {
   readonly markets = input.required<readonly ComplianceMarket[]>();
 
   protected readonly assessorNote = DEFER_TO_ASSESSOR;
+  /**
+   * Groups findings by the markets they apply to. A finding the engine raises alike for several
+   * markets (same rule, subject, severity and words but for the market's code) is shown once under
+   * those markets together, e.g. "EU, UK and Canada", with each market's source.
+   */
   protected readonly groups = computed<MarketGroup[]>(() => {
-    const keys: (ComplianceMarket | null)[] = [null, ...this.markets()];
-    return keys
-      .map((market) => ({
-        key: market ?? 'all',
-        title: market ? `${market} · ${MARKET_NAMES.get(market)}` : 'Every market',
-        findings: this.findings()
-          .filter((f) => f.market === market)
-          .map((finding) => ({
-            finding,
-            text: finding.message
-              .replace(DEFER_TO_ASSESSOR, '')
-              .replace(ENGINE_INTERPRETATION_NOTE, '')
-              .trim(),
-            harm: finding.message.includes(DEFER_TO_ASSESSOR),
-          })),
-      }))
-      .filter((g) => g.findings.length > 0);
+    const order = this.markets();
+    const byFinding = new Map<
+      string,
+      { markets: ComplianceMarket[]; items: ComplianceFinding[] }
+    >();
+    const everyMarket: ComplianceFinding[] = [];
+    for (const finding of this.findings()) {
+      if (finding.market === null) {
+        everyMarket.push(finding);
+        continue;
+      }
+      const key = [
+        finding.code,
+        finding.severity,
+        finding.status,
+        finding.subject,
+        finding.message.replace(MARKET_CODE, '·'),
+      ].join('|');
+      const entry = byFinding.get(key) ?? { markets: [], items: [] };
+      entry.markets.push(finding.market);
+      entry.items.push(finding);
+      byFinding.set(key, entry);
+    }
+    const shown = (items: ComplianceFinding[], markets: ComplianceMarket[]): ShownFinding => {
+      const finding = items[0]!;
+      const message =
+        markets.length > 1
+          ? finding.message.replace(MARKET_CODE, markets.join('/'))
+          : finding.message;
+      return {
+        finding,
+        text: message.replace(DEFER_TO_ASSESSOR, '').replace(ENGINE_INTERPRETATION_NOTE, '').trim(),
+        harm: finding.message.includes(DEFER_TO_ASSESSOR),
+        sources: [...new Set(items.map((f) => f.source))],
+      };
+    };
+    const groups = new Map<string, MarketGroup>();
+    if (everyMarket.length > 0)
+      groups.set('all', {
+        key: 'all',
+        title: 'Every market',
+        findings: everyMarket.map((f) => shown([f], [])),
+      });
+    const sorted = [...byFinding.values()].sort(
+      (a, b) =>
+        order.indexOf(a.markets[0]!) - order.indexOf(b.markets[0]!) ||
+        b.markets.length - a.markets.length,
+    );
+    for (const { markets, items } of sorted) {
+      markets.sort((a, b) => order.indexOf(a) - order.indexOf(b));
+      const key = markets.join('+');
+      const group = groups.get(key) ?? { key, title: joinMarkets(markets), findings: [] };
+      group.findings.push(shown(items, markets));
+      groups.set(key, group);
+    }
+    return [...groups.values()];
   });
 }
