@@ -1,4 +1,4 @@
-import type { ErrorCode } from '@batchproof/shared';
+import type { ComplianceFinding, ErrorCode } from '@batchproof/shared';
 
 /** An error the API turns into the error envelope with the given status. */
 export class AppError extends Error {
@@ -7,6 +7,8 @@ export class AppError extends Error {
     readonly code: ErrorCode,
     message: string,
     readonly fieldErrors?: Record<string, string[]>,
+    /** The engine's findings behind a refusal, sent as the envelope's `findings`. */
+    readonly findings?: ComplianceFinding[],
   ) {
     super(message);
     this.name = 'AppError';

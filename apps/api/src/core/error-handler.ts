@@ -16,7 +16,12 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
 function toEnvelope(err: unknown) {
   if (err instanceof AppError) {
     return send(err.status, {
-      error: { code: err.code, message: err.message, fieldErrors: err.fieldErrors },
+      error: {
+        code: err.code,
+        message: err.message,
+        fieldErrors: err.fieldErrors,
+        findings: err.findings,
+      },
     });
   }
   if (err instanceof ZodError) {

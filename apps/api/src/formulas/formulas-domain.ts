@@ -2,12 +2,14 @@ import type { z } from 'zod';
 import {
   formulaVersionInputSchema,
   linesInGrams,
+  type ComplianceFinding,
+  type FormulaVersion,
   type FormulaVersionFields,
 } from '@batchproof/shared';
 import type { formulaCreateSchema, formulaUpdateSchema, releaseSchema } from '@batchproof/shared';
 import { recordAudit } from '../audit/audit-log';
 import type { AuthUser } from '../auth/authenticate';
-import { conflict, forbidden, notFound } from '../core/app-error';
+import { AppError, conflict, forbidden, notFound } from '../core/app-error';
 import { parse } from '../core/validate';
 import type { Database } from '../db/database';
 import { evaluateLines } from './formula-evaluation';
@@ -150,9 +152,31 @@ export async function newDraft(
   return versionView(db, actor.workshopId, row);
 }
 
+/** Why a release was refused once the fresh evaluation was stored. */
+type ReleaseRefusal =
+  { problems: string[] } | { blocks: ComplianceFinding[] } | { forbidden: true };
+
+/** The refusal as the error the client reads: `release_blocked` carries the blocking findings. */
+function refusalError(n: number, refusal: ReleaseRefusal) {
+  if ('problems' in refusal) {
+    return conflict(`Version ${n} cannot be checked yet: ${refusal.problems.join('; ')}`);
+  }
+  if ('forbidden' in refusal) return forbidden();
+  const { blocks } = refusal;
+  const list = blocks.map((f) => `${f.market ?? 'all markets'}: ${f.subject}`).join('; ');
+  return new AppError(
+    409,
+    'release_blocked',
+    `Version ${n} has ${blocks.length} blocking finding(s) (${list}). Resolve them, or the owner may override with a reason.`,
+    undefined,
+    blocks,
+  );
+}
+
 /**
- * Releases a draft. It is re-evaluated first with the materials as they are now; blocking
- * findings refuse the release (409) unless the owner overrides with a reason, which is kept on
+ * Releases a draft. It is re-evaluated first with the materials as they are now, and that fresh
+ * evaluation is stored whatever follows; blocking findings refuse the release (409
+ * `release_blocked` with the findings) unless the owner overrides with a reason, which is kept on
  * the version and in the audit log. The previously released version becomes superseded.
  */
 export async function release(
@@ -162,7 +186,7 @@ export async function release(
   n: number,
   request: z.output<typeof releaseSchema>,
 ) {
-  const row = await db.transaction(async (tx) => {
+  const outcome = await db.transaction(async (tx): Promise<FormulaVersion | ReleaseRefusal> => {
     const formula = await repo.findFormula(tx, actor.workshopId, formulaId, true);
     if (!formula) throw notFound('That formula');
     const version = await repo.findVersion(tx, actor.workshopId, formulaId, n, true);
@@ -174,20 +198,12 @@ export async function release(
     }));
     const evaluation = await evaluateLines(tx, actor.workshopId, formula, lines, version.profile);
     await repo.updateVersion(tx, actor.workshopId, version.id, evaluation);
-    if (!evaluation.evaluation) {
-      throw conflict(
-        `Version ${n} cannot be checked yet: ${evaluation.evaluationProblems.join('; ')}`,
-      );
-    }
+    // A refusal is returned, not thrown, so the transaction commits the fresh evaluation.
+    if (!evaluation.evaluation) return { problems: evaluation.evaluationProblems };
     const blocks = evaluation.evaluation.findings.filter((f) => f.severity === 'block');
-    if (blocks.length > 0 && !request.override) {
-      const list = blocks.map((f) => `${f.market ?? 'all markets'}: ${f.subject}`).join('; ');
-      throw conflict(
-        `Version ${n} has ${blocks.length} blocking finding(s) (${list}). Resolve them, or the owner may override with a reason.`,
-      );
-    }
+    if (blocks.length > 0 && !request.override) return { blocks };
     // Only the owner, usually the legally responsible person, may release over a block.
-    if (blocks.length > 0 && actor.role !== 'owner') throw forbidden();
+    if (blocks.length > 0 && actor.role !== 'owner') return { forbidden: true };
     const previous = await repo.findVersionInState(tx, actor.workshopId, formulaId, 'released');
     if (previous)
       await repo.updateVersion(tx, actor.workshopId, previous.id, { state: 'superseded' });
@@ -212,7 +228,12 @@ export async function release(
         blocking: blocks.map((f) => ({ code: f.code, market: f.market, subject: f.subject })),
       },
     });
-    return (await repo.findVersion(tx, actor.workshopId, formulaId, n))!;
+    return versionView(
+      tx,
+      actor.workshopId,
+      (await repo.findVersion(tx, actor.workshopId, formulaId, n))!,
+    );
   });
-  return versionView(db, actor.workshopId, row);
+  if ('id' in outcome) return outcome;
+  throw refusalError(n, outcome);
 }

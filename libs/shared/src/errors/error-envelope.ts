@@ -1,4 +1,5 @@
 import * as z from 'zod';
+import { complianceFindingSchema } from '../compliance/evaluation-result-schema';
 
 /** Machine-readable error codes the API sends inside the error envelope. */
 export const errorCodeSchema = z.enum([
@@ -10,20 +11,26 @@ export const errorCodeSchema = z.enum([
   'rate_limited',
   'payload_too_large',
   'unsupported_media_type',
+  /** A release refused for blocking findings; the envelope's `findings` lists them. */
+  'release_blocked',
+  /** An `Idempotency-Key` already used for a different request. */
+  'idempotency_key_reused',
   'internal',
 ]);
 export type ErrorCode = z.infer<typeof errorCodeSchema>;
 
 /**
  * The one error envelope every API error response carries:
- * `{ error: { code, message, fieldErrors? } }`. `fieldErrors` maps a dotted field path
- * (`email`, `lines.0.grams`) to its messages.
+ * `{ error: { code, message, fieldErrors?, findings? } }`. `fieldErrors` maps a dotted field path
+ * (`email`, `lines.0.grams`) to its messages; `findings` carries the engine's findings behind a
+ * refusal (`release_blocked`), so a client never reads them out of the message text.
  */
 export const errorEnvelopeSchema = z.object({
   error: z.object({
     code: errorCodeSchema,
     message: z.string(),
     fieldErrors: z.record(z.string(), z.array(z.string())).optional(),
+    findings: z.array(complianceFindingSchema).optional(),
   }),
 });
 export type ErrorEnvelope = z.infer<typeof errorEnvelopeSchema>;

@@ -1,4 +1,4 @@
-import type { ErrorCode } from '@batchproof/shared';
+import type { ComplianceFinding, ErrorCode } from '@batchproof/shared';
 
 /** What the client knows about a failed request: the API's envelope, or why there was none. */
 export class ApiError extends Error {
@@ -9,6 +9,8 @@ export class ApiError extends Error {
     message: string,
     /** Messages per field path, as the API's envelope sends them. */
     readonly fieldErrors: Record<string, string[]> = {},
+    /** The engine's findings behind a refusal (`release_blocked`), as the envelope sends them. */
+    readonly findings: ComplianceFinding[] = [],
   ) {
     super(message);
     this.name = 'ApiError';

@@ -4,7 +4,7 @@ import { errorEnvelopeSchema } from '@batchproof/shared';
 import { ApiError } from './api-error';
 
 /**
- * Reads the API's one error envelope (`{ error: { code, message, fieldErrors? } }`) and turns
+ * Reads the API's one error envelope (`{ error: { code, message, fieldErrors?, findings? } }`) and turns
  * every failed request into an {@link ApiError}, so pages handle a single shape.
  */
 export const errorInterceptor: HttpInterceptorFn = (req, next) =>
@@ -25,8 +25,8 @@ export function toApiError(err: unknown): ApiError {
   }
   const envelope = errorEnvelopeSchema.safeParse(err.error);
   if (envelope.success) {
-    const { code, message, fieldErrors } = envelope.data.error;
-    return new ApiError(err.status, code, message, fieldErrors);
+    const { code, message, fieldErrors, findings } = envelope.data.error;
+    return new ApiError(err.status, code, message, fieldErrors, findings);
   }
   return new ApiError(
     err.status,

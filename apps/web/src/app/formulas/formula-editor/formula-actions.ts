@@ -5,6 +5,7 @@ import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router } from '@angular/router';
 import { type Observable, of, switchMap } from 'rxjs';
 import {
+  type ComplianceFinding,
   type Formula,
   formulaUpdateSchema,
   type FormulaVersion,
@@ -30,6 +31,8 @@ export interface Refusal {
   message: string;
   /** Whether it was refused for blocking findings (rather than, say, an unchecked draft). */
   blocked: boolean;
+  /** The blocking findings of the server's fresh check, as the refusal carried them. */
+  findings: ComplianceFinding[];
 }
 
 const SNACK = { duration: 5000 };
@@ -127,7 +130,7 @@ export class FormulaActions {
     const data: ReleaseOverrideData = {
       version: version.number,
       refusal: refusal.message,
-      blocking: (version.evaluation?.findings ?? []).filter((f) => f.severity === 'block'),
+      blocking: refusal.findings,
     };
     this.dialog
       .open<ReleaseDialog, ReleaseOverrideData, string>(ReleaseDialog, { data, width: '36rem' })
@@ -183,10 +186,10 @@ export class FormulaActions {
       error: (err: unknown) => {
         this.busy.set(null);
         if (err instanceof ApiError && err.status === 409) {
-          const blocked =
-            (valueOf(this.source.version)?.counts?.block ?? 0) > 0 ||
-            /blocking finding/i.test(err.message);
-          this.refusal.set({ message: err.message, blocked });
+          const blocked = err.code === 'release_blocked';
+          this.refusal.set({ message: err.message, blocked, findings: err.findings });
+          // The server stored its fresh check even though it refused: show that one.
+          this.source.version.reload();
         } else {
           this.snackBar.open(messageOf(err), 'OK', { duration: 8000 });
         }

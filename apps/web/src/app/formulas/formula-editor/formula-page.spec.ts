@@ -4,7 +4,7 @@ import { MatFormFieldHarness } from '@angular/material/form-field/testing';
 import { MatInputHarness } from '@angular/material/input/testing';
 import { MatSelectHarness } from '@angular/material/select/testing';
 import { TestBed } from '@angular/core/testing';
-import type { Material, Role } from '@batchproof/shared';
+import type { ComplianceFinding, ErrorEnvelope, Material, Role } from '@batchproof/shared';
 import { MaterialsApi } from '../../materials/materials-api';
 import {
   aFormula,
@@ -45,8 +45,41 @@ async function flushMaterials(page: Page, materials: Material[]) {
   }
 }
 
-const text = (page: Page, selector: string) =>
-  (page.el.querySelector(selector)?.textContent ?? '').replace(/\s+/g, ' ').trim();
+const squash = (t: string | null | undefined) => (t ?? '').replace(/\s+/g, ' ').trim();
+const text = (page: Page, selector: string) => squash(page.el.querySelector(selector)?.textContent);
+
+/** A blocking finding as the server's release refusal carries it. */
+const ULTRAMARINE_BLOCK: ComplianceFinding = {
+  code: 'COLOURANT_NOT_PERMITTED',
+  severity: 'block',
+  market: 'US',
+  subject: 'Ultramarines (CI 77007)',
+  message: 'Ultramarines are not permitted in products used in the bath.',
+  source: '21 CFR 73.2725',
+  status: 'C',
+  lines: [2],
+};
+
+/** After a refusal the page reads the version again: the server stored its fresh check. */
+async function flushStoredCheck(page: Page, version = DRAFT) {
+  (
+    await nextRequest(page.backend, (r) => r.url === `/api/formulas/${FORMULA_ID}/versions/1`)
+  ).flush({ ...version, counts: { block: 1, warn: 0, info: 0 } });
+  await page.harness.fixture.whenStable();
+}
+
+/** Clicks Release and answers with a 409 carrying `error`, then answers the version's re-read. */
+async function refuseRelease(page: Page, error: ErrorEnvelope['error']) {
+  const clicked = (await releaseButton(page)).click();
+  const refused = await nextRequest(page.backend, (r) => r.url.endsWith('/versions/1/release'));
+  refused.flush({ error }, { status: 409, statusText: 'Conflict' });
+  await clicked;
+  await flushStoredCheck(page);
+  return refused;
+}
+
+const overrideButtons = (page: Page) =>
+  page.loader.getAllHarnesses(MatButtonHarness.with({ text: /recorded reason/ }));
 
 function releaseButton(page: Page) {
   return page.loader.getHarness(MatButtonHarness.with({ text: /^\S*\s*Release$/ }));
@@ -260,25 +293,21 @@ describe('FormulaPage', () => {
 
   it('on a refused release, offers the owner an override with a recorded reason', async () => {
     const page = await openDraft('owner', { ...DRAFT, counts: { block: 1, warn: 0, info: 0 } });
-    const clicked = (await releaseButton(page)).click();
-    const refused = await nextRequest(page.backend, (r) => r.url.endsWith('/versions/1/release'));
+    const refused = await refuseRelease(page, {
+      code: 'release_blocked',
+      message: 'Version 1 has 1 blocking finding(s). Resolve them, or the owner may override.',
+      findings: [ULTRAMARINE_BLOCK],
+    });
     expect(refused.request.body).toEqual({});
-    refused.flush(
-      {
-        error: {
-          code: 'conflict',
-          message: 'Version 1 has 1 blocking finding(s) (US: Ultramarines (CI 77007)).',
-        },
-      },
-      { status: 409, statusText: 'Conflict' },
-    );
-    await clicked;
-    await page.harness.fixture.whenStable();
     expect(text(page, '.refusal')).toContain('Not released.');
 
     await (
       await page.loader.getHarness(MatButtonHarness.with({ text: /recorded reason/ }))
     ).click();
+    // The dialog lists the findings the refusal carried, not the draft's older stored check.
+    expect(squash(document.querySelector('bp-release-dialog .blocks')?.textContent)).toContain(
+      'US · Ultramarines (CI 77007)',
+    );
     const reason = await page.root.getHarness(
       MatInputHarness.with({ selector: 'bp-release-dialog textarea' }),
     );
@@ -307,22 +336,26 @@ describe('FormulaPage', () => {
   });
 
   it('on a refused release, tells a formulator only the owner may override, with no override button', async () => {
-    const page = await openDraft('formulator', {
-      ...DRAFT,
-      counts: { block: 1, warn: 0, info: 0 },
+    const page = await openDraft('formulator');
+    await refuseRelease(page, {
+      code: 'release_blocked',
+      message: 'Version 1 has 1 blocking finding(s).',
+      findings: [ULTRAMARINE_BLOCK],
     });
-    const clicked = (await releaseButton(page)).click();
-    (await nextRequest(page.backend, (r) => r.url.endsWith('/release'))).flush(
-      { error: { code: 'conflict', message: 'Version 1 has 1 blocking finding(s).' } },
-      { status: 409, statusText: 'Conflict' },
-    );
-    await clicked;
-    await page.harness.fixture.whenStable();
 
     expect(text(page, '.refusal')).toContain("Only the workshop's owner may release");
-    expect(
-      await page.loader.getAllHarnesses(MatButtonHarness.with({ text: /recorded reason/ })),
-    ).toHaveLength(0);
+    expect(await overrideButtons(page)).toHaveLength(0);
+  });
+
+  it('reads a refusal from its error code: a 409 conflict naming blocking findings offers no override', async () => {
+    const page = await openDraft('owner', { ...DRAFT, counts: { block: 1, warn: 0, info: 0 } });
+    await refuseRelease(page, {
+      code: 'conflict',
+      message: 'Version 1 cannot be checked yet: no blocking finding could be computed',
+    });
+
+    expect(text(page, '.refusal')).toContain('cannot be checked yet');
+    expect(await overrideButtons(page)).toHaveLength(0);
   });
 
   it('shows a released version read-only to its writers, with a new draft action instead', async () => {
