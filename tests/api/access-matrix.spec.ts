@@ -6,7 +6,7 @@ import {
   buildWorkshop,
   uniqueEmail,
   type BuiltWorkshop,
-} from '../../fixtures/builders/workshop-builder';
+} from '../support/workshop-builder';
 import { invitations } from '../../apps/api/src/db/schema';
 import { startApiHarness, TEST_JWT_SECRET, type ApiHarness } from '../support/api-harness';
 import { workspaceAccessCases, type WorkspaceRequest } from './workspace-access-cases';

@@ -1,11 +1,7 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { sessionSchema, userSchema } from '@batchproof/shared';
-import {
-  BUILT_PASSWORD,
-  buildWorkshop,
-  uniqueEmail,
-} from '../../fixtures/builders/workshop-builder';
+import { BUILT_PASSWORD, buildWorkshop, uniqueEmail } from '../support/workshop-builder';
 import { firstLink } from '../support/mail-catcher';
 import { startApiHarness, TEST_JWT_SECRET, type ApiHarness } from '../support/api-harness';
 

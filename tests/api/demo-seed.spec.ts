@@ -2,8 +2,8 @@ import { count, eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { formulas, formulaVersions, lots, materials } from '../../apps/api/src/db/schema';
 import { seedDemoWorkspace } from '../../apps/api/src/seed/demo-workspace-seed';
-import { buildMaterial } from '../../fixtures/builders/material-builder';
-import { buildWorkshop } from '../../fixtures/builders/workshop-builder';
+import { buildMaterial } from '../support/row-builders';
+import { buildWorkshop } from '../support/workshop-builder';
 import { startApiHarness, TEST_JWT_SECRET, type ApiHarness } from '../support/api-harness';
 
 let h: ApiHarness;

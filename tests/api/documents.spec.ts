@@ -9,9 +9,9 @@ import {
   pngBytes,
   windowsExecutableBytes,
 } from '../../fixtures/builders/document-files';
-import { buildLot } from '../../fixtures/builders/lot-builder';
-import { aFragrance, buildMaterial } from '../../fixtures/builders/material-builder';
-import { buildWorkshop, type BuiltWorkshop } from '../../fixtures/builders/workshop-builder';
+import { buildLot, buildMaterial } from '../support/row-builders';
+import { aFragrance } from '../../fixtures/builders/material-builder';
+import { buildWorkshop, type BuiltWorkshop } from '../support/workshop-builder';
 import { startApiHarness, TEST_JWT_SECRET, type ApiHarness } from '../support/api-harness';
 import { bearer } from '../support/auth-header';
 
@@ -75,7 +75,9 @@ describe('POST /api/documents', () => {
       });
     expect(file.status).toBe(200);
     expect(file.headers['content-type']).toBe('application/pdf');
-    expect(file.headers['content-disposition']).toMatch(/^attachment; filename="?sds\.pdf"?$/);
+    expect(file.headers['content-disposition']).toBe(
+      `attachment; filename="sds.pdf"; filename*=UTF-8''sds.pdf`,
+    );
     expect(Buffer.compare(file.body as Buffer, bytes)).toBe(0);
   });
 

@@ -1,7 +1,7 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { evaluationResultSchema, type EvaluationInputDraft } from '@batchproof/shared';
-import { buildWorkshop, type BuiltWorkshop } from '../../fixtures/builders/workshop-builder';
+import { buildWorkshop, type BuiltWorkshop } from '../support/workshop-builder';
 import { startApiHarness, TEST_JWT_SECRET, type ApiHarness } from '../support/api-harness';
 
 let h: ApiHarness;

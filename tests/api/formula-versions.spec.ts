@@ -4,7 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { formulaSchema, versionComparisonSchema } from '@batchproof/shared';
 import { auditEvents } from '../../apps/api/src/db/schema';
 import { aDraft } from '../../fixtures/builders/formula-builder';
-import type { BuiltWorkshop } from '../../fixtures/builders/workshop-builder';
+import type { BuiltWorkshop } from '../support/workshop-builder';
 import type { ApiHarness } from '../support/api-harness';
 import { startFormulaWorkspace, type FormulaMaterials } from '../support/formula-workspace';
 import { bearer } from '../support/auth-header';

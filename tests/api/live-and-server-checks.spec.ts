@@ -16,7 +16,8 @@ import {
 import type { FormulaFormValue } from '../../apps/web/src/app/formulas/formula-editor/formula-form';
 import { evaluateDraft } from '../../apps/web/src/app/formulas/live-checks/live-evaluation';
 import { aBathProfile, aDraft, aFormula } from '../../fixtures/builders/formula-builder';
-import { aMaterial, buildMaterial } from '../../fixtures/builders/material-builder';
+import { aMaterial } from '../../fixtures/builders/material-builder';
+import { buildMaterial } from '../support/row-builders';
 import type { ApiHarness } from '../support/api-harness';
 import { bearer } from '../support/auth-header';
 import { startFormulaWorkspace } from '../support/formula-workspace';

@@ -1,9 +1,10 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { lotPageSchema, lotSchema } from '@batchproof/shared';
-import { aMaterial, buildMaterial, buildSupplier } from '../../fixtures/builders/material-builder';
-import { aLot, buildLot, consumeFromLot } from '../../fixtures/builders/lot-builder';
-import { buildWorkshop, type BuiltWorkshop } from '../../fixtures/builders/workshop-builder';
+import { aMaterial } from '../../fixtures/builders/material-builder';
+import { buildLot, buildMaterial, buildSupplier, consumeFromLot } from '../support/row-builders';
+import { aLot } from '../../fixtures/builders/lot-builder';
+import { buildWorkshop, type BuiltWorkshop } from '../support/workshop-builder';
 import { startApiHarness, TEST_JWT_SECRET, type ApiHarness } from '../support/api-harness';
 import { bearer } from '../support/auth-header';
 

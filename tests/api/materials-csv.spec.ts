@@ -4,13 +4,9 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { materialImportPreviewSchema, materialImportResultSchema } from '@batchproof/shared';
 import { materials } from '../../apps/api/src/db/schema';
-import {
-  aFragrance,
-  anUltramarineBlend,
-  buildMaterial,
-  buildSupplier,
-} from '../../fixtures/builders/material-builder';
-import { buildWorkshop, type BuiltWorkshop } from '../../fixtures/builders/workshop-builder';
+import { aFragrance, anUltramarineBlend } from '../../fixtures/builders/material-builder';
+import { buildMaterial, buildSupplier } from '../support/row-builders';
+import { buildWorkshop, type BuiltWorkshop } from '../support/workshop-builder';
 import { startApiHarness, TEST_JWT_SECRET, type ApiHarness } from '../support/api-harness';
 import { bearer } from '../support/auth-header';
 

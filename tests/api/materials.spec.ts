@@ -5,11 +5,9 @@ import {
   aFragrance,
   aMaterial,
   anUltramarineBlend,
-  buildMaterial,
-  buildSupplier,
 } from '../../fixtures/builders/material-builder';
-import { buildLot } from '../../fixtures/builders/lot-builder';
-import { buildWorkshop, type BuiltWorkshop } from '../../fixtures/builders/workshop-builder';
+import { buildLot, buildMaterial, buildSupplier } from '../support/row-builders';
+import { buildWorkshop, type BuiltWorkshop } from '../support/workshop-builder';
 import { startApiHarness, TEST_JWT_SECRET, type ApiHarness } from '../support/api-harness';
 import { bearer } from '../support/auth-header';
 

@@ -1,7 +1,7 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { memberListSchema } from '@batchproof/shared';
-import { addMember, buildWorkshop } from '../../fixtures/builders/workshop-builder';
+import { addMember, buildWorkshop } from '../support/workshop-builder';
 import { startApiHarness, TEST_JWT_SECRET, type ApiHarness } from '../support/api-harness';
 
 let h: ApiHarness;

@@ -5,7 +5,7 @@ import {
   referenceLists,
   referenceRowsPageSchema,
 } from '@batchproof/shared';
-import { buildWorkshop, type BuiltWorkshop } from '../../fixtures/builders/workshop-builder';
+import { buildWorkshop, type BuiltWorkshop } from '../support/workshop-builder';
 import { startApiHarness, TEST_JWT_SECRET, type ApiHarness } from '../support/api-harness';
 
 let h: ApiHarness;

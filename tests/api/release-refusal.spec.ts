@@ -1,12 +1,9 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { errorEnvelopeSchema } from '@batchproof/shared';
-import {
-  aMaterial,
-  anUltramarineBlend,
-  buildMaterial,
-} from '../../fixtures/builders/material-builder';
-import type { BuiltWorkshop } from '../../fixtures/builders/workshop-builder';
+import { aMaterial, anUltramarineBlend } from '../../fixtures/builders/material-builder';
+import { buildMaterial } from '../support/row-builders';
+import type { BuiltWorkshop } from '../support/workshop-builder';
 import type { ApiHarness } from '../support/api-harness';
 import { bearer } from '../support/auth-header';
 import { startFormulaWorkspace } from '../support/formula-workspace';

@@ -1,13 +1,9 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { supplierPageSchema, supplierSchema } from '@batchproof/shared';
-import {
-  aMaterial,
-  aSupplier,
-  buildMaterial,
-  buildSupplier,
-} from '../../fixtures/builders/material-builder';
-import { buildWorkshop, type BuiltWorkshop } from '../../fixtures/builders/workshop-builder';
+import { aMaterial, aSupplier } from '../../fixtures/builders/material-builder';
+import { buildMaterial, buildSupplier } from '../support/row-builders';
+import { buildWorkshop, type BuiltWorkshop } from '../support/workshop-builder';
 import { startApiHarness, TEST_JWT_SECRET, type ApiHarness } from '../support/api-harness';
 import { bearer } from '../support/auth-header';
 

@@ -2,14 +2,10 @@ import request from 'supertest';
 import { ROLE_SETS, ROLES, type Role } from '@batchproof/shared';
 import { pdfBytes } from '../../fixtures/builders/document-files';
 import { aFormula, aDraft } from '../../fixtures/builders/formula-builder';
-import { aLot, buildLot } from '../../fixtures/builders/lot-builder';
-import {
-  aMaterial,
-  aSupplier,
-  buildMaterial,
-  buildSupplier,
-} from '../../fixtures/builders/material-builder';
-import type { BuiltWorkshop } from '../../fixtures/builders/workshop-builder';
+import { aLot } from '../../fixtures/builders/lot-builder';
+import { buildLot, buildMaterial, buildSupplier } from '../support/row-builders';
+import { aMaterial, aSupplier } from '../../fixtures/builders/material-builder';
+import type { BuiltWorkshop } from '../support/workshop-builder';
 import type { ApiHarness } from '../support/api-harness';
 import { bearer } from '../support/auth-header';
 
@@ -41,6 +37,7 @@ const expect = (
 });
 const read = (ok: number, other: number) => expect(ROLE_SETS.members, ok, other);
 const write = (ok: number, other: number) => expect(ROLE_SETS.writers, ok, other);
+const goodsIn = (ok: number, other: number) => expect(ROLE_SETS.goodsIn, ok, other);
 
 /**
  * The formulator's workspace routes for the access matrix. Records belong to workshop A; each
@@ -84,6 +81,11 @@ export function workspaceAccessCases(ctx: () => { h: ApiHarness; a: BuiltWorksho
     prepare: () => Promise<WorkspaceRequest>;
     expected: Record<Caller, number>;
   }[] = [
+    {
+      route: 'GET /api/attention (whatever the role may see)',
+      prepare: async () => ({ method: 'get', path: '/api/attention' }),
+      expected: expect(ROLES, 200, 200),
+    },
     {
       route: 'GET /api/suppliers',
       prepare: async () => ({ method: 'get', path: '/api/suppliers' }),
@@ -224,7 +226,7 @@ export function workspaceAccessCases(ctx: () => { h: ApiHarness; a: BuiltWorksho
     {
       route: 'POST /api/lots (of a material of workshop A)',
       prepare: async () => ({ method: 'post', path: '/api/lots', body: aLot(await material()) }),
-      expected: write(201, 400),
+      expected: goodsIn(201, 400),
     },
     {
       route: 'GET /api/lots/:id',
@@ -238,7 +240,7 @@ export function workspaceAccessCases(ctx: () => { h: ApiHarness; a: BuiltWorksho
         const l = await buildLot(db(), wid(), m);
         return { method: 'put', path: `/api/lots/${l.id}`, body: aLot(m, { quantity: 30 }) };
       },
-      expected: write(200, 404),
+      expected: goodsIn(200, 404),
     },
     {
       route: 'DELETE /api/lots/:id',

@@ -1,4 +1,4 @@
-import type { BuiltMember } from '../../fixtures/builders/workshop-builder';
+import type { BuiltMember } from './workshop-builder';
 
 /** The Authorization header of a built member. */
 export const bearer = (member: Pick<BuiltMember, 'token'>) => ({

@@ -6,13 +6,9 @@ import {
   aFragrance,
   aMaterial,
   anUltramarineBlend,
-  buildMaterial,
 } from '../../fixtures/builders/material-builder';
-import {
-  buildWorkshop,
-  type BuiltMember,
-  type BuiltWorkshop,
-} from '../../fixtures/builders/workshop-builder';
+import { buildMaterial } from './row-builders';
+import { buildWorkshop, type BuiltMember, type BuiltWorkshop } from './workshop-builder';
 import { startApiHarness, TEST_JWT_SECRET, type ApiHarness } from './api-harness';
 import { bearer } from './auth-header';
 

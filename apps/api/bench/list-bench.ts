@@ -6,7 +6,7 @@ import { execFileSync } from 'node:child_process';
 import type { AddressInfo } from 'node:net';
 import path from 'node:path';
 import { sql } from 'drizzle-orm';
-import { buildWorkshop } from '../../../fixtures/builders/workshop-builder';
+import { buildWorkshop } from '../../../tests/support/workshop-builder';
 import { createApp } from '../src/app';
 import { applyMigrations, openDatabase } from '../src/db/database';
 

@@ -1,6 +1,6 @@
 import bcrypt from 'bcryptjs';
 import { inArray } from 'drizzle-orm';
-import { demoMembers, demoWorkshop } from '../../../../fixtures/demo/hollowmere';
+import { demoMembers, demoWorkshop } from './hollowmere';
 import { BCRYPT_COST } from '../auth/auth-domain';
 import type { Database } from '../db/database';
 import { users, workshops } from '../db/schema';

@@ -7,13 +7,13 @@ import {
   materialCreateSchema,
   supplierCreateSchema,
 } from '@batchproof/shared';
-import { demoFormulas } from '../../../../fixtures/demo/hollowmere-formulas';
+import { demoFormulas } from './hollowmere-formulas';
 import {
   demoLots,
   demoMaterials,
   demoSuppliers,
   type DemoMaterialKey,
-} from '../../../../fixtures/demo/hollowmere-materials';
+} from './hollowmere-materials';
 import { recordAudit } from '../audit/audit-log';
 import type { AuthUser } from '../auth/authenticate';
 import type { Database } from '../db/database';
