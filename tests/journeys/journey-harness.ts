@@ -56,7 +56,7 @@ export async function startJourneyHarness(): Promise<JourneyHarness> {
     jwtSecret: 'journey-secret-that-is-at-least-32-characters',
     appUrl: baseUrl,
     webDist: WEB_DIST,
-    signInLimit: 1000,
+    rateLimits: { signInPerAccount: 1000, signInPerAddress: 1000, signUpPerAddress: 1000 },
   });
   server.on('request', app);
 

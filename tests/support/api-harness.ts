@@ -1,5 +1,6 @@
 import type { Express } from 'express';
-import { createApp } from '../../apps/api/src/app';
+import { createApp, type AppDeps } from '../../apps/api/src/app';
+import type { RateLimitPolicy } from '../../apps/api/src/auth/rate-limits';
 import type { DatabaseHandle } from '../../apps/api/src/db/database';
 import { startMailCatcher } from './mail-catcher';
 import { openMigratedTestDatabase } from './test-database';
@@ -15,7 +16,20 @@ export interface ApiHarness {
   close(): Promise<void>;
 }
 
-export async function startApiHarness(options: { signInLimit?: number } = {}): Promise<ApiHarness> {
+/** Limits high enough that no spec meets them unless it sets its own. */
+const GENEROUS_LIMITS = {
+  signInPerAccount: 1000,
+  signInPerAddress: 1000,
+  passwordResetPerAccount: 1000,
+  passwordResetPerAddress: 1000,
+  signUpPerAddress: 1000,
+  linkTokenPerAddress: 1000,
+  refreshPerAddress: 1000,
+} satisfies RateLimitPolicy;
+
+export async function startApiHarness(
+  options: Pick<AppDeps, 'rateLimits' | 'trustProxy'> = {},
+): Promise<ApiHarness> {
   const handle = await openMigratedTestDatabase();
   const mail = await startMailCatcher();
   const app = createApp({
@@ -23,7 +37,8 @@ export async function startApiHarness(options: { signInLimit?: number } = {}): P
     mailer: mail.mailer,
     jwtSecret: TEST_JWT_SECRET,
     appUrl: TEST_APP_URL,
-    signInLimit: options.signInLimit ?? 1000,
+    rateLimits: { ...GENEROUS_LIMITS, ...options.rateLimits },
+    trustProxy: options.trustProxy,
   });
   return {
     app,

@@ -4,7 +4,10 @@ import cookieParser from 'cookie-parser';
 import express, { type Express } from 'express';
 import { authRouter, meRouter } from './auth/auth-router';
 import { createAuthenticator } from './auth/authenticate';
+import { createRateLimits, type RateLimitPolicy } from './auth/rate-limits';
 import { apiNotFound, errorHandler } from './core/error-handler';
+import { securityHeaders } from './core/security-headers';
+import { webApp } from './core/web-app';
 import type { Database } from './db/database';
 import { healthRouter } from './health/health-router';
 import type { Mailer } from './mail/mailer';
@@ -16,6 +19,7 @@ import { lotsRouter } from './lots/lots-router';
 import { materialsRouter } from './materials/materials-router';
 import { suppliersRouter } from './suppliers/suppliers-router';
 import { evaluationsRouter } from './evaluations/evaluations-router';
+import { attentionRouter } from './attention/attention-router';
 
 /** Everything the app needs from outside; tests pass their own. */
 export interface AppDeps {
@@ -25,7 +29,13 @@ export interface AppDeps {
   appUrl: string;
   accessTokenSeconds?: number;
   refreshTokenDays?: number;
-  signInLimit?: number;
+  /** Overrides of the rate-limit policy's numbers (auth/rate-limits.ts). */
+  rateLimits?: Partial<RateLimitPolicy>;
+  /**
+   * Express's `trust proxy`: which proxy's X-Forwarded-For to believe for the client address.
+   * Off unless configured, so a client cannot pick its own address for the rate limits.
+   */
+  trustProxy?: boolean | number | string;
   /** Folder of the built web app to serve with an SPA fallback; omitted in API-only tests. */
   webDist?: string;
   version?: string;
@@ -35,7 +45,7 @@ export interface AppDeps {
 export function createApp(deps: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
-  app.set('trust proxy', 'loopback');
+  app.set('trust proxy', deps.trustProxy ?? false);
   app.set('query parser', 'extended');
 
   const authn = createAuthenticator(deps.db, deps.jwtSecret);
@@ -44,9 +54,10 @@ export function createApp(deps: AppDeps): Express {
     accessTokenSeconds: deps.accessTokenSeconds ?? 900,
     refreshTokenDays: deps.refreshTokenDays ?? 14,
     appUrl: deps.appUrl,
-    signInLimit: deps.signInLimit ?? 10,
     secureCookies: deps.appUrl.startsWith('https:'),
   };
+
+  app.use(securityHeaders({ https: config.secureCookies }));
 
   const api = express.Router();
   api.use(express.json({ limit: '1mb' }));
@@ -56,7 +67,16 @@ export function createApp(deps: AppDeps): Express {
     next();
   });
   api.use('/health', healthRouter(deps.db, deps.version ?? '0.1.0'));
-  api.use('/auth', authRouter({ db: deps.db, mailer: deps.mailer, authn, config }));
+  api.use(
+    '/auth',
+    authRouter({
+      db: deps.db,
+      mailer: deps.mailer,
+      authn,
+      limits: createRateLimits(deps.rateLimits),
+      config,
+    }),
+  );
   api.use('/me', meRouter({ db: deps.db, authn }));
   api.use(
     '/members',
@@ -70,17 +90,13 @@ export function createApp(deps: AppDeps): Express {
   api.use('/documents', documentsRouter({ db: deps.db, authn }));
   api.use('/lots', lotsRouter({ db: deps.db, authn }));
   api.use('/formulas', formulasRouter({ db: deps.db, authn }));
+  api.use('/attention', attentionRouter({ db: deps.db, authn }));
   api.use(apiNotFound);
   api.use(errorHandler);
   app.use('/api', api);
 
   if (deps.webDist && existsSync(path.join(deps.webDist, 'index.html'))) {
-    const root = path.resolve(deps.webDist);
-    app.use(express.static(root, { index: false, maxAge: '1h' }));
-    app.get('/{*splat}', (_req, res) => {
-      res.set('Cache-Control', 'no-cache');
-      res.sendFile(path.join(root, 'index.html'));
-    });
+    app.use(webApp(deps.webDist));
   }
   app.use(errorHandler);
   return app;

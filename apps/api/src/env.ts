@@ -5,6 +5,12 @@ const envSchema = z.object({
   PORT: z.coerce.number().int().min(0).max(65535).default(3000),
   HOST: z.string().default('127.0.0.1'),
   DATABASE_URL: z.string().url(),
+  /**
+   * Connections the API keeps to PostgreSQL. Each request holds one while it queries, so fewer
+   * than the concurrent requests makes them queue; 20 serves 20 concurrent clients and stays far
+   * below PostgreSQL's default 100 connections.
+   */
+  DATABASE_POOL_SIZE: z.coerce.number().int().min(1).max(100).default(20),
   JWT_SECRET: z.string().min(32, 'JWT_SECRET must be at least 32 characters'),
   ACCESS_TOKEN_SECONDS: z.coerce.number().int().positive().default(900),
   REFRESH_TOKEN_DAYS: z.coerce.number().int().positive().default(14),
@@ -13,6 +19,21 @@ const envSchema = z.object({
   SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(2525),
   MAIL_FROM: z.string().default('Batchproof <no-reply@batchproof.example>'),
   SIGN_IN_LIMIT: z.coerce.number().int().positive().default(10),
+  /**
+   * The proxy in front of the API whose X-Forwarded-For to believe: a hop count or addresses and
+   * subnets (Express's `trust proxy`, e.g. `1` or `loopback` or `10.0.0.1`). Unset: none, and the
+   * socket's address is the client's. `true` (believe anyone) is refused: any client could then
+   * choose its own address and slip past the rate limits.
+   */
+  TRUST_PROXY: z
+    .string()
+    .trim()
+    .optional()
+    .refine(
+      (v) => v !== 'true',
+      'TRUST_PROXY=true would let any client forge its address; name the proxy or a hop count',
+    )
+    .transform((v) => (!v || v === 'false' ? false : /^\d+$/.test(v) ? Number(v) : v)),
   WEB_DIST: z.string().optional(),
   MIGRATIONS_DIR: z.string().default('drizzle'),
 });

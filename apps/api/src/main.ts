@@ -8,7 +8,7 @@ import { syncReferenceData } from './reference/reference-sync';
 /** Starts the API (and the built web app) on HOST:PORT after applying migrations. */
 async function main() {
   const env = loadEnv();
-  const handle = openDatabase(env.DATABASE_URL);
+  const handle = openDatabase(env.DATABASE_URL, env.DATABASE_POOL_SIZE);
   await applyMigrations(handle.db, path.resolve(env.MIGRATIONS_DIR));
   const referenceRowCount = await syncReferenceData(handle.db);
   console.log(`[api] reference lists synced (${referenceRowCount} rows)`);
@@ -24,7 +24,8 @@ async function main() {
     appUrl: env.APP_URL,
     accessTokenSeconds: env.ACCESS_TOKEN_SECONDS,
     refreshTokenDays: env.REFRESH_TOKEN_DAYS,
-    signInLimit: env.SIGN_IN_LIMIT,
+    rateLimits: { signInPerAccount: env.SIGN_IN_LIMIT },
+    trustProxy: env.TRUST_PROXY,
     webDist: env.WEB_DIST,
   });
   const server = app.listen(env.PORT, env.HOST, () => {

@@ -11,11 +11,13 @@ export interface AccessClaims {
   sub: string;
   wid: string;
   role: Role;
+  /** The user's token version when it was signed; a later sign-out everywhere raises it. */
+  ver?: number;
 }
 
 /** Signs a short-lived access token with the fixed algorithm, issuer and audience. */
 export function signAccessToken(claims: AccessClaims, secret: string, seconds: number): string {
-  return jwt.sign({ wid: claims.wid, role: claims.role }, secret, {
+  return jwt.sign({ wid: claims.wid, role: claims.role, ver: claims.ver ?? 0 }, secret, {
     algorithm: JWT_ALGORITHM,
     issuer: JWT_ISSUER,
     audience: JWT_AUDIENCE,

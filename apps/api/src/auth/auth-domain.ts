@@ -1,8 +1,9 @@
+import { randomUUID } from 'node:crypto';
 import bcrypt from 'bcryptjs';
 import type { SignIn, SignUp, User } from '@batchproof/shared';
 import { AppError, conflict } from '../core/app-error';
 import type { Database } from '../db/database';
-import { passwordResetMail } from '../mail/mail-templates';
+import { accountExistsMail, confirmSignUpMail, passwordResetMail } from '../mail/mail-templates';
 import type { Mailer } from '../mail/mailer';
 import { hashToken, newOpaqueToken, signAccessToken } from './access-tokens';
 import * as repo from './auth-repository';
@@ -11,6 +12,7 @@ import type { AuthUser } from './authenticate';
 /** bcrypt cost factor for stored passwords. */
 export const BCRYPT_COST = 12;
 const RESET_MINUTES = 60;
+const SIGN_UP_HOURS = 24;
 
 /** A hash to compare against when the e-mail is unknown, so timing does not reveal accounts. */
 const decoyHash = bcrypt.hashSync('decoy-password-never-used', BCRYPT_COST);
@@ -29,10 +31,18 @@ export async function toUser(db: Database, u: AuthUser): Promise<User> {
   return { id: u.id, name: u.name, email: u.email, role: u.role, workshop: workshop! };
 }
 
-/** Issues an access token and a fresh refresh token for a user. */
-export async function issueSession(db: Database, config: AuthConfig, u: AuthUser) {
+/**
+ * Issues an access token and a fresh refresh token for a user. A refresh continues its token's
+ * family; a sign-in starts a new one. A member created a moment ago has token version 0.
+ */
+export async function issueSession(
+  db: Database,
+  config: AuthConfig,
+  u: AuthUser & { tokenVersion?: number },
+  familyId: string = randomUUID(),
+) {
   const accessToken = signAccessToken(
-    { sub: u.id, wid: u.workshopId, role: u.role },
+    { sub: u.id, wid: u.workshopId, role: u.role, ver: u.tokenVersion ?? 0 },
     config.jwtSecret,
     config.accessTokenSeconds,
   );
@@ -41,6 +51,7 @@ export async function issueSession(db: Database, config: AuthConfig, u: AuthUser
   await repo.insertRefreshSession(db, {
     userId: u.id,
     workshopId: u.workshopId,
+    familyId,
     tokenHash: hashToken(refreshToken),
     expiresAt: refreshExpires,
   });
@@ -51,17 +62,57 @@ export async function issueSession(db: Database, config: AuthConfig, u: AuthUser
   };
 }
 
-export async function signUp(db: Database, input: SignUp): Promise<AuthUser> {
-  if (await repo.findUserByEmail(db, input.email)) {
-    throw conflict('An account with this e-mail already exists. Sign in instead.', {
-      email: ['An account with this e-mail already exists.'],
-    });
+/**
+ * Starts a sign-up. A new address gets a confirmation link (the workshop is created when it is
+ * opened); an address that already has an account gets a note to its owner instead. The caller
+ * answers before this runs, so neither the answer nor its timing says which happened.
+ */
+export async function requestSignUp(db: Database, mailer: Mailer, appUrl: string, input: SignUp) {
+  const existing = await repo.findUserByEmail(db, input.email);
+  if (existing) {
+    await mailer.send(
+      accountExistsMail({ to: existing.email, resetLink: `${appUrl}/reset-password` }),
+    );
+    return;
   }
-  return repo.createWorkshopWithOwner(db, {
-    workshopName: input.workshopName,
-    name: input.name,
+  const token = newOpaqueToken();
+  await repo.insertSignUpRequest(db, {
     email: input.email,
+    name: input.name,
+    workshopName: input.workshopName,
     passwordHash: await hashPassword(input.password),
+    tokenHash: hashToken(token),
+    expiresAt: new Date(Date.now() + SIGN_UP_HOURS * 3_600_000),
+  });
+  await mailer.send(
+    confirmSignUpMail({
+      to: input.email,
+      workshopName: input.workshopName,
+      link: `${appUrl}/confirm-sign-up/${encodeURIComponent(token)}`,
+      hours: SIGN_UP_HOURS,
+    }),
+  );
+}
+
+const spentLink = (what: string) =>
+  new AppError(400, 'validation_failed', `This ${what} link has expired or was already used.`, {
+    token: [`This ${what} link has expired or was already used. Ask for a new one.`],
+  });
+
+/**
+ * Creates the workshop and its owner from a confirmed sign-up link, once. Whoever holds the link
+ * owns the address, so telling them it already has an account reveals nothing.
+ */
+export async function confirmSignUp(db: Database, token: string) {
+  return db.transaction(async (tx) => {
+    const request = await repo.spendSignUpRequest(tx, hashToken(token));
+    if (!request) throw spentLink('sign-up');
+    if (await repo.findUserByEmail(tx, request.email)) {
+      throw conflict('An account with this e-mail already exists. Sign in instead.', {
+        email: ['An account with this e-mail already exists.'],
+      });
+    }
+    return repo.createWorkshopWithOwner(tx, request);
   });
 }
 
@@ -75,21 +126,38 @@ export async function verifyCredentials(db: Database, input: SignIn): Promise<Au
   return user;
 }
 
-/** Spends a refresh token and returns its user; a reused or unknown token is refused. */
-export async function refresh(db: Database, token: string | undefined): Promise<AuthUser> {
-  const spent = token ? await repo.spendRefreshSession(db, hashToken(token)) : undefined;
-  const user = spent ? await repo.findUserById(db, spent.userId) : undefined;
-  if (!user || user.workshopId !== spent!.workshopId) {
-    throw new AppError(401, 'unauthenticated', 'Your session has ended. Sign in again.');
+const sessionEnded = () =>
+  new AppError(401, 'unauthenticated', 'Your session has ended. Sign in again.');
+
+/**
+ * Spends a refresh token and returns its user and token family. A token that was already spent
+ * is refused and ends every session of its family (whoever replays it holds a copy).
+ */
+export async function refresh(db: Database, token: string | undefined) {
+  if (!token) throw sessionEnded();
+  const spent = await repo.spendRefreshSession(db, hashToken(token));
+  if (!spent) {
+    await repo.revokeFamilyOfSpentToken(db, hashToken(token));
+    throw sessionEnded();
   }
-  return user;
+  const user = await repo.findUserById(db, spent.userId);
+  if (!user || user.workshopId !== spent.workshopId) throw sessionEnded();
+  return { user, familyId: spent.familyId };
 }
 
 export async function signOut(db: Database, token: string | undefined) {
   if (token) await repo.revokeRefreshSession(db, hashToken(token));
 }
 
-/** Sends a reset link when the account exists; answers the same either way. */
+/** Ends every session of the user on every device, access tokens included. */
+export async function signOutEverywhere(db: Database, userId: string) {
+  await db.transaction((tx) => repo.endAllSessionsOfUser(tx, userId));
+}
+
+/**
+ * Sends a reset link when the account exists. The caller answers before this runs, so the
+ * answer and its timing are the same either way.
+ */
 export async function requestPasswordReset(
   db: Database,
   mailer: Mailer,
@@ -109,16 +177,8 @@ export async function requestPasswordReset(
   await mailer.send(passwordResetMail({ to: user.email, link, minutes: RESET_MINUTES }));
 }
 
+/** Sets the new password; spends this and every other reset link and ends all sessions. */
 export async function completePasswordReset(db: Database, token: string, password: string) {
   const done = await repo.completePasswordReset(db, hashToken(token), await hashPassword(password));
-  if (!done) {
-    throw new AppError(
-      400,
-      'validation_failed',
-      'This reset link has expired or was already used.',
-      {
-        token: ['This reset link has expired or was already used. Ask for a new one.'],
-      },
-    );
-  }
+  if (!done) throw spentLink('reset');
 }

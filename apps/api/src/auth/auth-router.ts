@@ -1,20 +1,22 @@
 import { Router, type CookieOptions, type Response } from 'express';
-import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
 import {
   acceptInvitationSchema,
+  type EmailSent,
   passwordResetCompleteSchema,
   passwordResetRequestSchema,
   signInSchema,
+  signUpConfirmSchema,
   signUpSchema,
   tokenSchema,
 } from '@batchproof/shared';
-import { AppError } from '../core/app-error';
+import { runAfterAnswer } from '../core/after-answer';
 import { parse } from '../core/validate';
 import type { Database } from '../db/database';
 import type { Mailer } from '../mail/mailer';
 import { acceptInvitation, previewInvitation } from '../members/members-domain';
 import * as auth from './auth-domain';
 import type { Authenticator } from './authenticate';
+import type { RateLimits } from './rate-limits';
 
 /** Name and path of the httpOnly cookie that carries the refresh token. */
 export const REFRESH_COOKIE = 'bp_refresh';
@@ -24,10 +26,11 @@ export interface AuthRouterDeps {
   db: Database;
   mailer: Mailer;
   authn: Authenticator;
-  config: auth.AuthConfig & { signInLimit: number; secureCookies: boolean };
+  limits: RateLimits;
+  config: auth.AuthConfig & { secureCookies: boolean };
 }
 
-export function authRouter({ db, mailer, config }: AuthRouterDeps): Router {
+export function authRouter({ db, mailer, authn, limits, config }: AuthRouterDeps): Router {
   const router = Router();
   const cookieOptions = (expires?: Date): CookieOptions => ({
     httpOnly: true,
@@ -40,72 +43,78 @@ export function authRouter({ db, mailer, config }: AuthRouterDeps): Router {
     res: Response,
     user: Parameters<typeof auth.issueSession>[2],
     status = 200,
+    familyId?: string,
   ) => {
-    const { session, refreshToken, refreshExpires } = await auth.issueSession(db, config, user);
+    const { session, refreshToken, refreshExpires } = await auth.issueSession(
+      db,
+      config,
+      user,
+      familyId,
+    );
     res.cookie(REFRESH_COOKIE, refreshToken, cookieOptions(refreshExpires));
     res.status(status).json(session);
   };
 
-  // Counts failed and successful attempts per address and e-mail, so guessing one account's
-  // password is slow without locking out a whole shared workshop network.
-  const signInLimiter = rateLimit({
-    windowMs: 15 * 60_000,
-    limit: config.signInLimit,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    keyGenerator: (req) =>
-      `${ipKeyGenerator(req.ip ?? '')}|${String(req.body?.email ?? '')
-        .trim()
-        .toLowerCase()}`,
-    handler: (_req, _res, next) =>
-      next(
-        new AppError(
-          429,
-          'rate_limited',
-          'Too many sign-in attempts. Wait a few minutes and try again.',
-        ),
-      ),
-  });
+  const clearRefreshCookie = (res: Response) => res.clearCookie(REFRESH_COOKIE, cookieOptions());
 
-  router.post('/sign-up', async (req, res) => {
+  // Answers at once and sends the confirmation (or, for a known address, a note to its owner)
+  // afterwards, so the answer and its timing never say whether the address has an account.
+  router.post('/sign-up', ...limits.signUp, async (req, res) => {
     const input = parse(signUpSchema, req.body);
-    await respondWithSession(res, await auth.signUp(db, input), 201);
+    res.status(202).json({
+      message: `We sent a link to ${input.email}. Open it to confirm the address and set up your workshop.`,
+    } satisfies EmailSent);
+    runAfterAnswer('sign-up mail', () => auth.requestSignUp(db, mailer, config.appUrl, input));
   });
 
-  router.post('/sign-in', signInLimiter, async (req, res) => {
+  router.post('/sign-up/confirm', ...limits.linkToken, async (req, res) => {
+    const { token } = parse(signUpConfirmSchema, req.body);
+    await respondWithSession(res, await auth.confirmSignUp(db, token), 201);
+  });
+
+  router.post('/sign-in', ...limits.signIn, async (req, res) => {
     const input = parse(signInSchema, req.body);
     await respondWithSession(res, await auth.verifyCredentials(db, input));
   });
 
-  router.post('/refresh', async (req, res) => {
-    const user = await auth.refresh(db, req.cookies?.[REFRESH_COOKIE]);
-    await respondWithSession(res, user);
+  router.post('/refresh', ...limits.refresh, async (req, res) => {
+    const { user, familyId } = await auth.refresh(db, req.cookies?.[REFRESH_COOKIE]);
+    await respondWithSession(res, user, 200, familyId);
   });
 
   router.post('/sign-out', async (req, res) => {
     await auth.signOut(db, req.cookies?.[REFRESH_COOKIE]);
-    res.clearCookie(REFRESH_COOKIE, cookieOptions());
+    clearRefreshCookie(res);
     res.status(204).end();
   });
 
-  router.get('/invitations/:token', async (req, res) => {
+  router.post('/sign-out-everywhere', authn.authenticate, async (req, res) => {
+    await auth.signOutEverywhere(db, req.user!.id);
+    clearRefreshCookie(res);
+    res.status(204).end();
+  });
+
+  router.get('/invitations/:token', ...limits.linkToken, async (req, res) => {
     res.json(await previewInvitation(db, parse(tokenSchema, req.params.token)));
   });
 
-  router.post('/invitations/accept', async (req, res) => {
+  router.post('/invitations/accept', ...limits.linkToken, async (req, res) => {
     const input = parse(acceptInvitationSchema, req.body);
     await respondWithSession(res, await acceptInvitation(db, input), 201);
   });
 
-  router.post('/password-reset/request', async (req, res) => {
+  // Answers before looking the address up: the same answer in the same time either way.
+  router.post('/password-reset/request', ...limits.passwordReset, async (req, res) => {
     const { email } = parse(passwordResetRequestSchema, req.body);
-    await auth.requestPasswordReset(db, mailer, config.appUrl, email);
-    res
-      .status(202)
-      .json({ message: 'If an account uses that e-mail, a reset link is on its way.' });
+    res.status(202).json({
+      message: 'If an account uses that e-mail, a reset link is on its way.',
+    } satisfies EmailSent);
+    runAfterAnswer('password-reset mail', () =>
+      auth.requestPasswordReset(db, mailer, config.appUrl, email),
+    );
   });
 
-  router.post('/password-reset/complete', async (req, res) => {
+  router.post('/password-reset/complete', ...limits.linkToken, async (req, res) => {
     const input = parse(passwordResetCompleteSchema, req.body);
     await auth.completePasswordReset(db, input.token, input.password);
     res.status(204).end();

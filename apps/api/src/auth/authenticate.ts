@@ -1,8 +1,10 @@
+import { createSecretKey } from 'node:crypto';
 import type { RequestHandler } from 'express';
 import passport from 'passport';
 import { ExtractJwt, Strategy as JwtStrategy } from 'passport-jwt';
 import type { Role } from '@batchproof/shared';
 import { AppError, forbidden } from '../core/app-error';
+import { isRecordId } from '../core/record-id';
 import type { Database } from '../db/database';
 import { JWT_ALGORITHM, JWT_AUDIENCE, JWT_ISSUER } from './access-tokens';
 import { findUserById } from './auth-repository';
@@ -26,21 +28,34 @@ declare global {
 
 /**
  * Builds the bearer-token authenticator. The user is loaded from the database on every request,
- * so a removed member or a changed role takes effect at once, not when the token expires.
+ * so a removed member, a changed role or a raised token version (password reset, sign out
+ * everywhere) takes effect at once, not when the token expires.
  */
 export function createAuthenticator(db: Database, secret: string) {
   const strategy = new JwtStrategy(
     {
       jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
-      secretOrKey: secret,
+      // A key object prepared once: given the string, jsonwebtoken would first try to read it as
+      // a PEM public key and then derive a secret key from it on every request (about 0.5 ms
+      // against 0.01 ms). passport-jwt passes the key through; its types predate key objects.
+      secretOrKey: createSecretKey(Buffer.from(secret, 'utf8')) as unknown as string,
       algorithms: [JWT_ALGORITHM],
       issuer: JWT_ISSUER,
       audience: JWT_AUDIENCE,
     },
-    (payload: { sub?: string; wid?: string }, done: (e: unknown, u?: AuthUser | false) => void) => {
-      if (!payload.sub || !payload.wid) return done(null, false);
+    (
+      payload: { sub?: string; wid?: string; ver?: number },
+      done: (e: unknown, u?: AuthUser | false) => void,
+    ) => {
+      // A subject that is not a record id is no one: refused before it reaches a uuid column.
+      if (!isRecordId(payload.sub) || !isRecordId(payload.wid)) return done(null, false);
+      // A token signed before the user's last password reset or sign-out everywhere is refused.
       findUserById(db, payload.sub).then(
-        (u) => done(null, u && u.workshopId === payload.wid ? u : false),
+        (u) =>
+          done(
+            null,
+            u && u.workshopId === payload.wid && u.tokenVersion === (payload.ver ?? 0) ? u : false,
+          ),
         (err) => done(err),
       );
     },

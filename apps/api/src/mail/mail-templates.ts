@@ -50,3 +50,39 @@ export function passwordResetMail(input: {
     html: wrap(lines, { href: input.link, label: 'Choose a new password' }),
   };
 }
+
+/** The link that confirms a new workshop's e-mail; the workshop is created when it is opened. */
+export function confirmSignUpMail(input: {
+  to: string;
+  workshopName: string;
+  link: string;
+  hours: number;
+}): OutgoingMail {
+  const lines = [
+    `Someone asked to set up ${input.workshopName} on Batchproof with this e-mail address.`,
+    `Open the link below within ${input.hours} hours to confirm the address and start using your workshop. If it was not you, ignore this e-mail and nothing is created.`,
+  ];
+  return {
+    to: input.to,
+    subject: `Confirm your e-mail to set up ${input.workshopName}`,
+    text: `${lines.join('\n\n')}\n\n${input.link}\n`,
+    html: wrap(lines, { href: input.link, label: 'Confirm and open Batchproof' }),
+  };
+}
+
+/**
+ * Sent instead of a confirmation when someone signs up with an address that already has an
+ * account: the owner of the address learns of it, the person signing up learns nothing.
+ */
+export function accountExistsMail(input: { to: string; resetLink: string }): OutgoingMail {
+  const lines = [
+    'Someone tried to set up a new Batchproof workshop with this e-mail address, which already has an account. No new workshop was created.',
+    'If it was you, sign in with your password as usual; if you have forgotten it, choose a new one with the link below. If it was not you, ignore this e-mail; your account is unchanged.',
+  ];
+  return {
+    to: input.to,
+    subject: 'Your Batchproof account already exists',
+    text: `${lines.join('\n\n')}\n\n${input.resetLink}\n`,
+    html: wrap(lines, { href: input.resetLink, label: 'Choose a new password' }),
+  };
+}
