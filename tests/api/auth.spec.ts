@@ -1,21 +1,31 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { sessionSchema, userSchema } from '@batchproof/shared';
+import { emailSentSchema, sessionSchema, userSchema } from '@batchproof/shared';
 import { BUILT_PASSWORD, buildWorkshop, uniqueEmail } from '../support/workshop-builder';
 import { firstLink } from '../support/mail-catcher';
-import { startApiHarness, TEST_JWT_SECRET, type ApiHarness } from '../support/api-harness';
+import {
+  startApiHarness,
+  TEST_APP_URL,
+  TEST_JWT_SECRET,
+  type ApiHarness,
+} from '../support/api-harness';
 
 let h: ApiHarness;
 beforeAll(async () => {
-  h = await startApiHarness({ signInLimit: 5 });
+  h = await startApiHarness({ rateLimits: { signInPerAccount: 5 } });
 });
 afterAll(() => h.close());
 
 const refreshCookie = (res: request.Response) =>
   ([] as string[]).concat(res.headers['set-cookie'] ?? []).find((c) => c.startsWith('bp_refresh='));
 
-describe('POST /api/auth/sign-up', () => {
-  it('creates a workshop and its owner, and answers with a session the contract accepts', async () => {
+/** The token of the first link in the newest mail to `email` after `path` (e.g. '/confirm-sign-up/'). */
+async function linkToken(email: string, path: string) {
+  return decodeURIComponent(firstLink(await h.mail.waitFor(email)).split(path)[1]!);
+}
+
+describe('POST /api/auth/sign-up and /sign-up/confirm', () => {
+  it('e-mails a link; the link creates the workshop and its owner and answers with a session', async () => {
     const email = uniqueEmail('founder');
     const res = await request(h.app).post('/api/auth/sign-up').send({
       workshopName: 'Saltmarsh Soapery',
@@ -23,18 +33,30 @@ describe('POST /api/auth/sign-up', () => {
       email: email.toUpperCase(),
       password: 'long-enough-pass',
     });
-    expect(res.status).toBe(201);
-    const session = sessionSchema.parse(res.body);
+    expect(res.status).toBe(202);
+    expect(emailSentSchema.parse(res.body).message).toContain(email);
+    expect(refreshCookie(res)).toBeUndefined();
+
+    const mail = await h.mail.waitFor(email);
+    expect(mail.subject).toContain('Saltmarsh Soapery');
+    const token = await linkToken(email, '/confirm-sign-up/');
+    const confirmed = await request(h.app).post('/api/auth/sign-up/confirm').send({ token });
+    expect(confirmed.status).toBe(201);
+    const session = sessionSchema.parse(confirmed.body);
     expect(session.user).toMatchObject({
       email,
       role: 'owner',
       workshop: { name: 'Saltmarsh Soapery' },
     });
-    expect(refreshCookie(res)).toMatch(/HttpOnly/i);
+    expect(refreshCookie(confirmed)).toMatch(/HttpOnly/i);
     const me = await request(h.app)
       .get('/api/me')
       .set('Authorization', `Bearer ${session.accessToken}`);
     expect(userSchema.parse(me.body).id).toBe(session.user.id);
+
+    const again = await request(h.app).post('/api/auth/sign-up/confirm').send({ token });
+    expect(again.status).toBe(400);
+    expect(again.body.error.fieldErrors.token).toBeDefined();
   });
 
   it('when the body is empty, responds 400 with a message for every field', async () => {
@@ -58,20 +80,57 @@ describe('POST /api/auth/sign-up', () => {
     expect(res.body.error.fieldErrors.password[0]).toMatch(/at least 10/i);
   });
 
-  it('when the e-mail is taken, responds 409 with fieldErrors.email and keeps the first account', async () => {
-    const email = uniqueEmail('dup');
-    const body = { workshopName: 'One', name: 'First', email, password: 'long-enough-pass' };
-    expect((await request(h.app).post('/api/auth/sign-up').send(body)).status).toBe(201);
-    const res = await request(h.app)
+  it('when the e-mail is taken, answers exactly as for a new address and e-mails the owner instead', async () => {
+    const w = await buildWorkshop(h.handle.db, TEST_JWT_SECRET, { roles: ['owner'] });
+    const taken = w.members.owner.email;
+    const fresh = uniqueEmail('fresh');
+    const body = { workshopName: 'Two', name: 'Second', password: 'another-password' };
+    const forTaken = await request(h.app)
       .post('/api/auth/sign-up')
-      .send({ ...body, workshopName: 'Two', password: 'another-password' });
-    expect(res.status).toBe(409);
-    expect(res.body.error.fieldErrors.email).toBeDefined();
+      .send({ ...body, email: taken });
+    const forFresh = await request(h.app)
+      .post('/api/auth/sign-up')
+      .send({ ...body, email: fresh });
+    expect(forTaken.status).toBe(forFresh.status);
+    expect(forTaken.body.message.replace(taken, '<e-mail>')).toBe(
+      forFresh.body.message.replace(fresh, '<e-mail>'),
+    );
+    expect(Object.keys(forTaken.headers).sort()).toEqual(Object.keys(forFresh.headers).sort());
+
+    const note = await h.mail.waitFor(taken);
+    expect(note.subject).toMatch(/already exists/i);
+    expect(firstLink(note)).toBe(`${TEST_APP_URL}/reset-password`);
     const signIn = await request(h.app)
       .post('/api/auth/sign-in')
-      .send({ email, password: 'long-enough-pass' });
+      .send({ email: taken, password: BUILT_PASSWORD });
     expect(signIn.status).toBe(200);
-    expect(signIn.body.user.workshop.name).toBe('One');
+    expect(signIn.body.user.workshop.name).toBe(w.name);
+  });
+
+  it('when two confirmed links name one e-mail, the second answers 409 and keeps the first account', async () => {
+    const email = uniqueEmail('twice');
+    const body = { workshopName: 'First', name: 'Ada', email, password: 'long-enough-pass' };
+    await request(h.app).post('/api/auth/sign-up').send(body);
+    const first = await linkToken(email, '/confirm-sign-up/');
+    h.mail.received.splice(0, h.mail.received.length);
+    await request(h.app)
+      .post('/api/auth/sign-up')
+      .send({ ...body, workshopName: 'Second' });
+    const second = await linkToken(email, '/confirm-sign-up/');
+    expect(
+      (await request(h.app).post('/api/auth/sign-up/confirm').send({ token: first })).status,
+    ).toBe(201);
+    const res = await request(h.app).post('/api/auth/sign-up/confirm').send({ token: second });
+    expect(res.status).toBe(409);
+    expect(res.body.error.fieldErrors.email).toBeDefined();
+  });
+
+  it('refuses a password of 40 accented letters: 40 characters, but 80 bytes past bcrypt’s 72', async () => {
+    const res = await request(h.app)
+      .post('/api/auth/sign-up')
+      .send({ workshopName: 'W', name: 'N', email: uniqueEmail(), password: 'é'.repeat(40) });
+    expect(res.status).toBe(400);
+    expect(res.body.error.fieldErrors.password[0]).toMatch(/at most 72 bytes/);
   });
 
   it('when the body is not JSON, responds 400 in the error envelope', async () => {

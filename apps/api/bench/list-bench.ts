@@ -49,7 +49,7 @@ const app = createApp({
   mailer: { send: async () => undefined, close: () => undefined },
   jwtSecret: SECRET,
   appUrl: 'http://127.0.0.1',
-  signInLimit: 1_000_000,
+  rateLimits: { signInPerAccount: 1_000_000, signInPerAddress: 1_000_000 },
 });
 const server = app.listen(0, '127.0.0.1');
 await new Promise((resolve) => server.once('listening', resolve));
