@@ -11,7 +11,9 @@ import {
   log,
   persistentSecret,
   root,
+  stopClusterOnExit,
 } from './lib/provision.mjs';
+import { superviseChildren } from './lib/shutdown.mjs';
 
 const apiPort = 3000; // the dev server's proxy (apps/web/proxy.conf.json) points here
 const webPort = Number(process.env.PORT ?? 4200);
@@ -19,6 +21,9 @@ const smtpPort = Number(process.env.SMTP_PORT ?? 2525);
 
 ensureNodeModules();
 const cluster = ensureCluster(Number(process.env.DATABASE_PORT ?? 54329));
+// Every way this script ends (Ctrl-C, a crash, a failed seed, a server that dies) stops the
+// cluster if this script started it.
+stopClusterOnExit(cluster);
 const demoPassword = process.env.DEMO_PASSWORD || persistentSecret('demo-password', 9);
 const env = {
   ...process.env,
@@ -44,27 +49,18 @@ if (seed.status !== 0) fail('Seeding the demo workshop failed (see above).');
 const children = [
   spawn(tsx, ['apps/api/src/dev-mail/mail-server-main.ts'], { cwd: root, env, stdio: 'inherit' }),
   spawn(tsx, ['watch', 'apps/api/src/main.ts'], { cwd: root, env, stdio: 'inherit' }),
-  spawn('npx', ['ng', 'serve', '--host', '127.0.0.1', '--port', String(webPort)], {
-    cwd: root,
-    env,
-    stdio: 'inherit',
-  }),
+  spawn(
+    path.join(root, 'node_modules', '.bin', 'ng'),
+    ['serve', '--host', '127.0.0.1', '--port', String(webPort)],
+    {
+      cwd: root,
+      env,
+      stdio: 'inherit',
+    },
+  ),
 ];
 log(
   `dev servers starting: web http://127.0.0.1:${webPort}, API :${apiPort}; demo password ${demoPassword}`,
 );
 
-let stopping = false;
-function stop() {
-  if (stopping) return;
-  stopping = true;
-  for (const child of children) if (child.exitCode === null) child.kill('SIGTERM');
-  Promise.all(
-    children.map((c) => (c.exitCode !== null ? null : new Promise((r) => c.once('exit', r)))),
-  ).then(() => {
-    if (cluster.startedHere) cluster.stop();
-    process.exit(0);
-  });
-}
-process.on('SIGINT', stop);
-process.on('SIGTERM', stop);
+superviseChildren(children, { log });

@@ -11,14 +11,19 @@ import {
   log,
   persistentSecret,
   root,
+  stopClusterOnExit,
 } from './lib/provision.mjs';
+import { superviseChildren } from './lib/shutdown.mjs';
 
 const port = Number(process.env.PORT ?? 3000);
 const dbPort = Number(process.env.DATABASE_PORT ?? 54329);
 const smtpPort = Number(process.env.SMTP_PORT ?? 2525);
 
 ensureNodeModules();
+// From here on, every way this script ends (Ctrl-C, a crash, a failed build or seed, a server
+// that dies) stops the cluster if this script started it.
 const cluster = ensureCluster(dbPort);
+stopClusterOnExit(cluster);
 const databaseUrl = ensureDatabase(cluster, 'batchproof');
 ensureBuilt();
 
@@ -46,31 +51,7 @@ const children = [
   spawn('node', ['--enable-source-maps', 'dist/api/main.js'], { cwd: root, env, stdio: 'inherit' }),
 ];
 
-let stopping = false;
-function stopAll(code = 0) {
-  if (stopping) return;
-  stopping = true;
-  log('stopping…');
-  for (const child of children) if (child.exitCode === null) child.kill('SIGTERM');
-  const waitAll = children.map((c) =>
-    c.exitCode !== null ? Promise.resolve() : new Promise((r) => c.once('exit', r)),
-  );
-  Promise.all(waitAll).then(() => {
-    if (cluster.startedHere) cluster.stop();
-    log('stopped.');
-    process.exit(code);
-  });
-}
-process.on('SIGINT', () => stopAll(0));
-process.on('SIGTERM', () => stopAll(0));
-for (const child of children) {
-  child.on('exit', (code) => {
-    if (!stopping) {
-      console.error(`[batchproof] a server process exited (code ${code}); shutting down.`);
-      stopAll(code ?? 1);
-    }
-  });
-}
+const supervisor = superviseChildren(children, { log });
 
 // Print the sign-in details once the API answers.
 const deadline = Date.now() + 30_000;
@@ -96,6 +77,6 @@ async function announce() {
   } catch {
     // Not listening yet; try again shortly.
   }
-  if (Date.now() < deadline && !stopping) setTimeout(announce, 300);
+  if (Date.now() < deadline && !supervisor.isStopping()) setTimeout(announce, 300);
 }
 announce();

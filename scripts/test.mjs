@@ -1,88 +1,117 @@
-// `npm test`: provisions a fresh test database (and Chromium), builds the web app, runs every
-// suite one after another (each uses both cores), and ends with one line `N passed, N failed`.
-import { spawnSync } from 'node:child_process';
+// `npm test [suite…]`: runs the chosen suites (all when none is named) one after another (each
+// uses both cores) and ends with one line `N passed, N failed`. The suites are chosen first and
+// only what they need is provisioned: `npm test -- shared` starts no database, installs no
+// browser and builds nothing. Ctrl-C stops the running suite and the cluster if this started it.
+import { spawn } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import path from 'node:path';
 import {
-  ensureBuilt,
   ensureChromium,
   ensureCluster,
   ensureDatabase,
   ensureNodeModules,
+  ensureWebBuilt,
+  fail,
   log,
   root,
+  stopClusterOnExit,
 } from './lib/provision.mjs';
+import { handleSignals, signalExitCode } from './lib/shutdown.mjs';
+import { chooseSuites } from './lib/test-suites.mjs';
 
 const dbPort = Number(process.env.DATABASE_PORT ?? 54329);
 const outDir = path.join(root, 'test-output');
 
+let selection;
+try {
+  selection = chooseSuites(process.argv.slice(2));
+} catch (error) {
+  // An unknown suite name: say which ones exist.
+  fail(error.message);
+}
+const { chosen, needs } = selection;
+
 ensureNodeModules();
-const chromium = ensureChromium();
-const cluster = ensureCluster(dbPort);
-const testDatabaseUrl = ensureDatabase(cluster, 'batchproof_test', { fresh: true });
-ensureBuilt();
+const env = { ...process.env, FORCE_COLOR: '0' };
+if (needs.has('chromium')) env.CHROMIUM_PATH = ensureChromium();
+if (needs.has('database')) {
+  const cluster = ensureCluster(dbPort);
+  // Every way this script ends, Ctrl-C included, stops the cluster if this script started it.
+  stopClusterOnExit(cluster);
+  env.TEST_DATABASE_URL = ensureDatabase(cluster, 'batchproof_test', { fresh: true });
+}
+if (needs.has('webBuild')) ensureWebBuilt();
 rmSync(outDir, { recursive: true, force: true });
 mkdirSync(outDir, { recursive: true });
 
-const env = {
-  ...process.env,
-  TEST_DATABASE_URL: testDatabaseUrl,
-  CHROMIUM_PATH: chromium,
-  FORCE_COLOR: '0',
-};
-const vitest = (config, name) => ({
-  name,
-  cmd: 'npx',
-  args: [
-    'vitest',
-    'run',
-    '--config',
-    config,
-    '--reporter=default',
-    '--reporter=json',
-    `--outputFile.json=${path.join(outDir, `${name}.json`)}`,
-  ],
-  report: `${name}.json`,
+// Ctrl-C reaches the running suite too (same process group); wait for it to end, then exit,
+// which stops the cluster. A second Ctrl-C exits at once.
+let current;
+let interrupted;
+handleSignals((signal) => {
+  if (interrupted || !current) process.exit(signalExitCode(signal));
+  interrupted = signal;
+  log(`${signal}: stopping suite ${current.name}…`);
+  current.child.kill(signal);
 });
-const suites = [
-  vitest('libs/shared/vitest.config.ts', 'shared'),
-  vitest('tests/api/vitest.config.ts', 'api'),
-  { name: 'web', cmd: 'npx', args: ['ng', 'test', '--watch=false'], report: 'web.json' },
-  vitest('tests/journeys/vitest.config.ts', 'journeys'),
-];
 
-const only = process.argv.slice(2);
+/** Runs one suite to its end; resolves with its exit code. */
+function runSuite(suite) {
+  const args = suite.ng
+    ? ['ng', 'test', '--watch=false']
+    : [
+        'vitest',
+        'run',
+        '--config',
+        suite.config,
+        '--reporter=default',
+        '--reporter=json',
+        `--outputFile.json=${path.join(outDir, `${suite.name}.json`)}`,
+      ];
+  const child = spawn('npx', args, { cwd: root, env, stdio: 'inherit' });
+  current = { name: suite.name, child };
+  return new Promise((resolve) => {
+    child.once('error', () => resolve(1));
+    child.once('exit', (code) => resolve(code ?? 1));
+  });
+}
+
+/** Passed and failed counts from a suite's JSON report. */
+function countsOf(suite, exitCode) {
+  const reportFile = path.join(outDir, `${suite.name}.json`);
+  let passed = 0;
+  let failed = 0;
+  if (existsSync(reportFile)) {
+    const report = JSON.parse(readFileSync(reportFile, 'utf8'));
+    passed = report.numPassedTests ?? 0;
+    failed = report.numFailedTests ?? 0;
+    // A file that fails to load has no tests counted; count it once so it cannot pass silently.
+    failed += (report.testResults ?? []).filter(
+      (t) => t.status === 'failed' && (t.assertionResults ?? []).length === 0,
+    ).length;
+  }
+  if (exitCode !== 0 && failed === 0) failed = 1; // the runner failed without a report
+  if (passed + failed === 0) failed = 1; // a suite that ran no test is a failure, not a pass
+  return { passed, failed };
+}
+
 let passed = 0;
 let failed = 0;
 const lines = [];
-for (const suite of suites) {
-  if (only.length && !only.includes(suite.name)) continue;
+for (const suite of chosen) {
   log(`suite ${suite.name}…`);
   const started = Date.now();
-  const result = spawnSync(suite.cmd, suite.args, { cwd: root, env, stdio: 'inherit' });
-  const reportFile = path.join(outDir, suite.report);
-  let p = 0;
-  let f = 0;
-  if (existsSync(reportFile)) {
-    const report = JSON.parse(readFileSync(reportFile, 'utf8'));
-    p = report.numPassedTests ?? 0;
-    f = report.numFailedTests ?? 0;
-    // A file that fails to load has no tests counted; count it once so it cannot pass silently.
-    const brokenFiles = (report.testResults ?? []).filter(
-      (t) => t.status === 'failed' && (t.assertionResults ?? []).length === 0,
-    ).length;
-    f += brokenFiles;
-  }
-  if (result.status !== 0 && f === 0) f = 1; // the runner failed without a report
-  if (p + f === 0) f = 1; // a suite that ran no test is a failure, not a pass
-  passed += p;
-  failed += f;
+  const exitCode = await runSuite(suite);
+  if (interrupted) process.exit(signalExitCode(interrupted));
+  const counts = countsOf(suite, exitCode);
+  passed += counts.passed;
+  failed += counts.failed;
+  const seconds = ((Date.now() - started) / 1000).toFixed(1);
   lines.push(
-    `  ${suite.name.padEnd(9)} ${String(p).padStart(4)} passed ${String(f).padStart(3)} failed  (${((Date.now() - started) / 1000).toFixed(1)} s)`,
+    `  ${suite.name.padEnd(9)} ${String(counts.passed).padStart(4)} passed ${String(counts.failed).padStart(3)} failed  (${seconds} s)`,
   );
 }
 
-if (cluster.startedHere) cluster.stop();
 console.log(`\n${lines.join('\n')}\n`);
 console.log(`${passed} passed, ${failed} failed`);
 process.exit(failed === 0 ? 0 : 1);
