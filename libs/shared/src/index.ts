@@ -20,3 +20,4 @@ export * from './formulas/formula-scaling-schema';
 export * from './compliance/index';
 export * from './materials/material-csv-schema';
 export * from './dates/calendar-day';
+export * from './idempotency/idempotency-key';

@@ -7,6 +7,7 @@ import {
   ROLE_SETS,
 } from '@batchproof/shared';
 import type { Authenticator } from '../auth/authenticate';
+import { idempotentCreate } from '../core/idempotency';
 import { recordId } from '../core/record-id';
 import { parse } from '../core/validate';
 import type { Database } from '../db/database';
@@ -30,10 +31,14 @@ export function documentsRouter(deps: { db: Database; authn: Authenticator }) {
     const owner = parse(documentListQuerySchema, req.query);
     res.json(await domain.listDocuments(db, req.user!, owner));
   });
-  router.post('/', ...write, upload.single('file'), async (req, res) => {
-    const input = parse(documentUploadSchema, req.body);
-    res.status(201).json(await domain.uploadDocument(db, req.user!, input, req.file));
-  });
+  router.post(
+    '/',
+    ...write,
+    upload.single('file'),
+    idempotentCreate(db, (req, tx) =>
+      domain.uploadDocument(tx, req.user!, parse(documentUploadSchema, req.body), req.file),
+    ),
+  );
   router.get('/:id', ...read, async (req, res) => {
     res.json(await domain.getDocument(db, req.user!, recordId(req.params.id, 'That document')));
   });

@@ -21,7 +21,10 @@ const immutable = (n: number, state: string) =>
     `Version ${n} is ${state} and can no longer change. Start a new draft from it to make changes.`,
   );
 
-/** Creates a formula with its first draft, evaluated by the shared engine. */
+/**
+ * Creates a formula with its first draft, evaluated by the shared engine. The read-back shares
+ * the inserts' transaction, so a failure there leaves no formula behind an error.
+ */
 export async function createFormula(
   db: Database,
   actor: AuthUser,
@@ -29,7 +32,7 @@ export async function createFormula(
 ) {
   const lines = linesInGrams(input.draft);
   const evaluation = await evaluateLines(db, actor.workshopId, input, lines, input.draft.profile);
-  const id = await db.transaction(async (tx) => {
+  return db.transaction(async (tx) => {
     const formulaId = await repo.insertFormula(tx, actor.workshopId, {
       name: input.name,
       productType: input.productType,
@@ -44,9 +47,8 @@ export async function createFormula(
       ...evaluation,
     });
     await repo.replaceLines(tx, actor.workshopId, versionId, lines);
-    return formulaId;
+    return getFormula(tx, actor, formulaId);
   });
-  return getFormula(db, actor, id);
 }
 
 export async function updateFormula(
@@ -74,7 +76,7 @@ export async function saveDraft(
   if (!formula) throw notFound('That formula');
   const lines = linesInGrams(input);
   const evaluation = await evaluateLines(db, actor.workshopId, formula, lines, input.profile);
-  const row = await db.transaction(async (tx) => {
+  return db.transaction(async (tx) => {
     const version = await repo.findVersion(tx, actor.workshopId, formulaId, n, true);
     if (!version) throw notFound(`Version ${n} of that formula`);
     if (version.state !== 'draft') throw immutable(n, version.state);
@@ -85,9 +87,9 @@ export async function saveDraft(
     });
     await repo.replaceLines(tx, actor.workshopId, version.id, lines);
     await repo.updateFormula(tx, actor.workshopId, formulaId, {});
-    return (await repo.findVersion(tx, actor.workshopId, formulaId, n))!;
+    const row = (await repo.findVersion(tx, actor.workshopId, formulaId, n))!;
+    return versionView(tx, actor.workshopId, row);
   });
-  return versionView(db, actor.workshopId, row);
 }
 
 /** PATCH: merges the given parts into the stored draft, then saves it like PUT. */
@@ -123,7 +125,7 @@ export async function newDraft(
   formulaId: string,
   fromVersion: number | undefined,
 ) {
-  const row = await db.transaction(async (tx) => {
+  return db.transaction(async (tx) => {
     // Locking the formula serialises version numbering between concurrent requests.
     const formula = await repo.findFormula(tx, actor.workshopId, formulaId, true);
     if (!formula) throw notFound('That formula');
@@ -147,9 +149,9 @@ export async function newDraft(
     });
     await repo.replaceLines(tx, actor.workshopId, versionId, lines);
     await repo.updateFormula(tx, actor.workshopId, formulaId, {});
-    return (await repo.findVersion(tx, actor.workshopId, formulaId, latest + 1))!;
+    const row = (await repo.findVersion(tx, actor.workshopId, formulaId, latest + 1))!;
+    return versionView(tx, actor.workshopId, row);
   });
-  return versionView(db, actor.workshopId, row);
 }
 
 /** Why a release was refused once the fresh evaluation was stored. */

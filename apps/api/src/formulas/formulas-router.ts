@@ -13,6 +13,7 @@ import {
 } from '@batchproof/shared';
 import type { Authenticator } from '../auth/authenticate';
 import { notFound } from '../core/app-error';
+import { idempotentCreate } from '../core/idempotency';
 import { recordId } from '../core/record-id';
 import { parse } from '../core/validate';
 import type { Database } from '../db/database';
@@ -39,10 +40,13 @@ export function formulasRouter(deps: { db: Database; authn: Authenticator }) {
   router.get('/', ...read, async (req, res) => {
     res.json(await views.listFormulas(db, req.user!, parse(formulaListQuerySchema, req.query)));
   });
-  router.post('/', ...write, async (req, res) => {
-    const input = parse(formulaCreateSchema, req.body);
-    res.status(201).json(await domain.createFormula(db, req.user!, input));
-  });
+  router.post(
+    '/',
+    ...write,
+    idempotentCreate(db, (req, tx) =>
+      domain.createFormula(tx, req.user!, parse(formulaCreateSchema, req.body)),
+    ),
+  );
   router.get('/:id', ...read, async (req, res) => {
     res.json(await views.getFormula(db, req.user!, formulaId(req.params.id)));
   });
@@ -55,11 +59,15 @@ export function formulasRouter(deps: { db: Database; authn: Authenticator }) {
     const { from, to } = parse(compareQuerySchema, req.query);
     res.json(await views.compare(db, req.user!, id, from, to));
   });
-  router.post('/:id/versions', ...write, async (req, res) => {
-    const id = formulaId(req.params.id);
-    const { fromVersion } = parse(newVersionSchema, req.body);
-    res.status(201).json(await domain.newDraft(db, req.user!, id, fromVersion));
-  });
+  router.post(
+    '/:id/versions',
+    ...write,
+    idempotentCreate(db, (req, tx) => {
+      const id = formulaId(req.params['id']);
+      const { fromVersion } = parse(newVersionSchema, req.body);
+      return domain.newDraft(tx, req.user!, id, fromVersion);
+    }),
+  );
   router.get('/:id/versions/:n', ...read, async (req, res) => {
     const id = formulaId(req.params.id);
     res.json(await views.getVersion(db, req.user!, id, versionParam(req.params.n)));

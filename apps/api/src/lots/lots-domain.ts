@@ -26,9 +26,12 @@ async function checkMaterial(db: Database, workshopId: string, input: LotFields)
   }
 }
 
+/** Records goods-in. The read-back shares the insert's transaction: if it fails, no lot is left. */
 export async function createLot(db: Database, actor: AuthUser, input: LotFields) {
-  await checkMaterial(db, actor.workshopId, input);
-  return getLot(db, actor, await repo.insertLot(db, actor.workshopId, input));
+  return db.transaction(async (tx) => {
+    await checkMaterial(tx, actor.workshopId, input);
+    return getLot(tx, actor, await repo.insertLot(tx, actor.workshopId, input));
+  });
 }
 
 /**

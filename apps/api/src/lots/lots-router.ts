@@ -6,6 +6,7 @@ import {
   ROLE_SETS,
 } from '@batchproof/shared';
 import type { Authenticator } from '../auth/authenticate';
+import { idempotentCreate } from '../core/idempotency';
 import { recordId } from '../core/record-id';
 import { parse } from '../core/validate';
 import type { Database } from '../db/database';
@@ -24,9 +25,13 @@ export function lotsRouter(deps: { db: Database; authn: Authenticator }) {
   router.get('/:id', ...read, async (req, res) => {
     res.json(await domain.getLot(db, req.user!, recordId(req.params.id, 'That lot')));
   });
-  router.post('/', ...write, async (req, res) => {
-    res.status(201).json(await domain.createLot(db, req.user!, parse(lotCreateSchema, req.body)));
-  });
+  router.post(
+    '/',
+    ...write,
+    idempotentCreate(db, (req, tx) =>
+      domain.createLot(tx, req.user!, parse(lotCreateSchema, req.body)),
+    ),
+  );
   router.put('/:id', ...write, async (req, res) => {
     const id = recordId(req.params.id, 'That lot');
     res.json(await domain.updateLot(db, req.user!, id, parse(lotUpdateSchema, req.body)));

@@ -8,3 +8,4 @@ export * from './materials';
 export * from './lots';
 export * from './documents';
 export * from './formulas';
+export * from './idempotency';
