@@ -1,6 +1,12 @@
-import { and, asc, count, eq, ilike, max, sql, type SQL } from 'drizzle-orm';
+import { and, asc, eq, ilike, max, sql, type SQL } from 'drizzle-orm';
 import type { FormulaListQuery, ProductProfile, ProductType } from '@batchproof/shared';
-import { containsPattern, listOrder, pageWindow } from '../core/list-paging';
+import {
+  containsPattern,
+  listOrder,
+  pageWindow,
+  totalColumn,
+  withTotal,
+} from '../core/list-paging';
 import type { Database } from '../db/database';
 import { formulaLines, formulas, formulaVersions, materials } from '../db/schema';
 
@@ -49,26 +55,24 @@ export async function pageFormulas(db: Database, workshopId: string, q: FormulaL
   if (q.productType) conditions.push(eq(formulas.productType, q.productType));
   const where = and(...conditions);
   const { limit, offset } = pageWindow(q);
-  const [items, [total]] = await Promise.all([
-    db
-      .select({
-        id: formulas.id,
-        name: formulas.name,
-        productType: formulas.productType,
-        updatedAt: formulas.updatedAt,
-        latestVersion: latestNumber,
-        latestState: latestState.mapWith(String),
-        releasedVersion: releasedNumber,
-        latestCounts,
-      })
-      .from(formulas)
-      .where(where)
-      .orderBy(...listOrder(sortColumns[q.sort], q.dir, formulas.id))
-      .limit(limit)
-      .offset(offset),
-    db.select({ n: count() }).from(formulas).where(where),
-  ]);
-  return { items, total: total?.n ?? 0 };
+  const rows = await db
+    .select({
+      id: formulas.id,
+      name: formulas.name,
+      productType: formulas.productType,
+      updatedAt: formulas.updatedAt,
+      latestVersion: latestNumber,
+      latestState: latestState.mapWith(String),
+      releasedVersion: releasedNumber,
+      latestCounts,
+      total: totalColumn(formulas, where),
+    })
+    .from(formulas)
+    .where(where)
+    .orderBy(...listOrder(sortColumns[q.sort], q.dir, formulas.id))
+    .limit(limit)
+    .offset(offset);
+  return withTotal(db, rows, { table: formulas, where, page: q.page });
 }
 
 export async function findFormula(db: Database, workshopId: string, id: string, lock = false) {

@@ -1,6 +1,12 @@
-import { and, count, eq, lte, sql, type SQL } from 'drizzle-orm';
+import { and, eq, lte, sql, type SQL } from 'drizzle-orm';
 import type { LotFields, LotListQuery } from '@batchproof/shared';
-import { containsPattern, listOrder, pageWindow } from '../core/list-paging';
+import {
+  containsPattern,
+  listOrder,
+  pageWindow,
+  totalColumn,
+  withTotal,
+} from '../core/list-paging';
 import type { Database } from '../db/database';
 import { lotConsumptions, lots, materials, suppliers } from '../db/schema';
 
@@ -58,19 +64,16 @@ export async function pageLots(db: Database, workshopId: string, q: LotListQuery
   if (q.expiresBefore) conditions.push(lte(lots.expiresOn, q.expiresBefore));
   const where = and(...conditions);
   const { limit, offset } = pageWindow(q);
-  const [items, [total]] = await Promise.all([
-    db
-      .select(columns)
-      .from(lots)
-      .innerJoin(materials, eq(materials.id, lots.materialId))
-      .where(where)
-      .orderBy(...listOrder(sortColumns[q.sort], q.dir, lots.id))
-      .limit(limit)
-      .offset(offset),
-    // Every lot has its material (FK, not null), so the count needs no join.
-    db.select({ n: count() }).from(lots).where(where),
-  ]);
-  return { items, total: total?.n ?? 0 };
+  const rows = await db
+    // Every lot has its material (FK, not null), so the total needs no join.
+    .select({ ...columns, total: totalColumn(lots, where) })
+    .from(lots)
+    .innerJoin(materials, eq(materials.id, lots.materialId))
+    .where(where)
+    .orderBy(...listOrder(sortColumns[q.sort], q.dir, lots.id))
+    .limit(limit)
+    .offset(offset);
+  return withTotal(db, rows, { table: lots, where, page: q.page });
 }
 
 export async function findLot(db: Database, workshopId: string, id: string) {

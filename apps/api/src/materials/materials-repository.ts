@@ -1,6 +1,12 @@
-import { and, count, eq, ilike, inArray, or, sql, type SQL } from 'drizzle-orm';
+import { and, eq, ilike, inArray, or, sql, type SQL } from 'drizzle-orm';
 import type { MaterialFields, MaterialListQuery } from '@batchproof/shared';
-import { containsPattern, listOrder, pageWindow } from '../core/list-paging';
+import {
+  containsPattern,
+  listOrder,
+  pageWindow,
+  totalColumn,
+  withTotal,
+} from '../core/list-paging';
 import type { Database } from '../db/database';
 import { formulaLines, lots, materials, suppliers } from '../db/schema';
 
@@ -73,18 +79,15 @@ function listWhere(workshopId: string, q: MaterialListQuery) {
 export async function pageMaterials(db: Database, workshopId: string, q: MaterialListQuery) {
   const where = listWhere(workshopId, q);
   const { limit, offset } = pageWindow(q);
-  const [items, [total]] = await Promise.all([
-    db
-      .select(summaryColumns)
-      .from(materials)
-      .leftJoin(suppliers, eq(suppliers.id, materials.supplierId))
-      .where(where)
-      .orderBy(...listOrder(sortColumns[q.sort], q.dir, materials.id))
-      .limit(limit)
-      .offset(offset),
-    db.select({ n: count() }).from(materials).where(where),
-  ]);
-  return { items, total: total?.n ?? 0 };
+  const rows = await db
+    .select({ ...summaryColumns, total: totalColumn(materials, where) })
+    .from(materials)
+    .leftJoin(suppliers, eq(suppliers.id, materials.supplierId))
+    .where(where)
+    .orderBy(...listOrder(sortColumns[q.sort], q.dir, materials.id))
+    .limit(limit)
+    .offset(offset);
+  return withTotal(db, rows, { table: materials, where, page: q.page });
 }
 
 /** Materials of the workshop by id (all of them when `ids` is omitted), with supplier names. */

@@ -1,5 +1,6 @@
-import { and, asc, count, desc, eq, ilike, type SQL } from 'drizzle-orm';
+import { and, asc, desc, eq, ilike, type SQL } from 'drizzle-orm';
 import type { ReferenceRowsQuery } from '@batchproof/shared';
+import { totalColumn, withTotal } from '../core/list-paging';
 import type { Database } from '../db/database';
 import { referenceLists, referenceRows } from '../db/schema';
 
@@ -40,24 +41,22 @@ export async function pageReferenceRows(db: Database, key: string, q: ReferenceR
   if (q.status) conditions.push(eq(referenceRows.status, q.status));
   const where = and(...conditions);
   const order = q.dir === 'desc' ? desc : asc;
-  const [items, [totalRow]] = await Promise.all([
-    db
-      .select({
-        rowId: referenceRows.rowId,
-        label: referenceRows.label,
-        source: referenceRows.source,
-        status: referenceRows.status,
-        effectiveFrom: referenceRows.effectiveFrom,
-        effectiveTo: referenceRows.effectiveTo,
-        note: referenceRows.note,
-        data: referenceRows.data,
-      })
-      .from(referenceRows)
-      .where(where)
-      .orderBy(order(sortColumns[q.sort]), asc(referenceRows.position))
-      .limit(q.pageSize)
-      .offset((q.page - 1) * q.pageSize),
-    db.select({ n: count() }).from(referenceRows).where(where),
-  ]);
-  return { items, total: totalRow?.n ?? 0 };
+  const rows = await db
+    .select({
+      rowId: referenceRows.rowId,
+      label: referenceRows.label,
+      source: referenceRows.source,
+      status: referenceRows.status,
+      effectiveFrom: referenceRows.effectiveFrom,
+      effectiveTo: referenceRows.effectiveTo,
+      note: referenceRows.note,
+      data: referenceRows.data,
+      total: totalColumn(referenceRows, where),
+    })
+    .from(referenceRows)
+    .where(where)
+    .orderBy(order(sortColumns[q.sort]), asc(referenceRows.position))
+    .limit(q.pageSize)
+    .offset((q.page - 1) * q.pageSize);
+  return withTotal(db, rows, { table: referenceRows, where, page: q.page });
 }

@@ -1,6 +1,12 @@
-import { and, count, eq, ilike, or, sql, type SQL } from 'drizzle-orm';
+import { and, eq, ilike, or, sql, type SQL } from 'drizzle-orm';
 import type { SupplierListQuery } from '@batchproof/shared';
-import { containsPattern, listOrder, pageWindow } from '../core/list-paging';
+import {
+  containsPattern,
+  listOrder,
+  pageWindow,
+  totalColumn,
+  withTotal,
+} from '../core/list-paging';
 import type { Database } from '../db/database';
 import { materials, suppliers } from '../db/schema';
 
@@ -40,17 +46,14 @@ export async function pageSuppliers(db: Database, workshopId: string, q: Supplie
   }
   const where = and(...conditions);
   const { limit, offset } = pageWindow(q);
-  const [items, [total]] = await Promise.all([
-    db
-      .select(columns)
-      .from(suppliers)
-      .where(where)
-      .orderBy(...listOrder(sortColumns[q.sort], q.dir, suppliers.id))
-      .limit(limit)
-      .offset(offset),
-    db.select({ n: count() }).from(suppliers).where(where),
-  ]);
-  return { items, total: total?.n ?? 0 };
+  const rows = await db
+    .select({ ...columns, total: totalColumn(suppliers, where) })
+    .from(suppliers)
+    .where(where)
+    .orderBy(...listOrder(sortColumns[q.sort], q.dir, suppliers.id))
+    .limit(limit)
+    .offset(offset);
+  return withTotal(db, rows, { table: suppliers, where, page: q.page });
 }
 
 export async function findSupplier(db: Database, workshopId: string, id: string) {
