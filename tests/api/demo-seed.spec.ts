@@ -1,6 +1,8 @@
+import bcrypt from 'bcryptjs';
 import { count, eq } from 'drizzle-orm';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { formulas, formulaVersions, lots, materials } from '../../apps/api/src/db/schema';
+import { seedDemo } from '../../apps/api/src/seed/demo-seed';
 import { seedDemoWorkspace } from '../../apps/api/src/seed/demo-workspace-seed';
 import { buildMaterial } from '../support/row-builders';
 import { buildWorkshop } from '../support/workshop-builder';
@@ -60,5 +62,20 @@ describe('the demo workspace seed', () => {
     await buildMaterial(h.handle.db, w.id);
     expect(await seedDemoWorkspace(h.handle.db, w.id)).toBe('already-seeded');
     expect(await countOf(materials, w.id)).toBe(1);
+  });
+});
+
+describe('the demo seed on a later start', () => {
+  it('checks the stored demo password without hashing it again; a changed password is hashed once', async () => {
+    await seedDemo(h.handle.db, 'demo-password-as-started');
+    const hash = vi.spyOn(bcrypt, 'hash');
+    try {
+      expect(await seedDemo(h.handle.db, 'demo-password-as-started')).toBe('unchanged');
+      expect(hash).not.toHaveBeenCalled();
+      expect(await seedDemo(h.handle.db, 'a-changed-demo-password')).toBe('updated');
+      expect(hash).toHaveBeenCalledTimes(1);
+    } finally {
+      hash.mockRestore();
+    }
   });
 });

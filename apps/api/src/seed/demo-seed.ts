@@ -8,7 +8,8 @@ import { seedDemoWorkspace } from './demo-workspace-seed';
 
 /**
  * Seeds the demo workshop once. On later runs it only makes sure the demo users' passwords match
- * `password` (so a changed DEMO_PASSWORD takes effect), and otherwise leaves the data alone.
+ * `password` (so a changed DEMO_PASSWORD takes effect), and otherwise leaves the data alone. A
+ * password is hashed only when it is stored: a start with nothing changed costs one comparison.
  */
 export async function seedDemo(
   db: Database,
@@ -16,8 +17,8 @@ export async function seedDemo(
 ): Promise<'created' | 'updated' | 'unchanged'> {
   const emails = demoMembers.map((m) => m.email);
   const existing = await db.select().from(users).where(inArray(users.email, emails));
-  const passwordHash = await bcrypt.hash(password, BCRYPT_COST);
   if (existing.length === 0) {
+    const passwordHash = await bcrypt.hash(password, BCRYPT_COST);
     const workshopId = await db.transaction(async (tx) => {
       const [workshop] = await tx.insert(workshops).values({ name: demoWorkshop.name }).returning();
       await tx
@@ -32,6 +33,7 @@ export async function seedDemo(
   await seedDemoWorkspace(db, existing[0]!.workshopId);
   const owner = existing.find((u) => u.role === 'owner') ?? existing[0]!;
   if (await bcrypt.compare(password, owner.passwordHash)) return 'unchanged';
+  const passwordHash = await bcrypt.hash(password, BCRYPT_COST);
   await db.update(users).set({ passwordHash }).where(inArray(users.email, emails));
   return 'updated';
 }
