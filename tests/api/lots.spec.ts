@@ -130,3 +130,42 @@ describe('GET /api/lots', () => {
     expect(res.body.error.fieldErrors.expiresBefore).toBeDefined();
   });
 });
+
+// Production receives deliveries, so it records goods-in (DEVELOPERS.md, "Roles").
+describe('goods-in by a production member', () => {
+  it('records a lot receipt (201) and corrects it (200)', async () => {
+    const created = await request(h.app)
+      .post('/api/lots')
+      .set(bearer(w.members.production))
+      .send(aLot(materialId, { supplierLotNumber: 'PR-1', quantity: 10 }));
+    expect(created.status).toBe(201);
+    const lot = lotSchema.parse(created.body);
+    expect(lot).toMatchObject({ supplierLotNumber: 'PR-1', stockOnHand: 10 });
+
+    const corrected = await request(h.app)
+      .put(`/api/lots/${lot.id}`)
+      .set(bearer(w.members.production))
+      .send(aLot(materialId, { supplierLotNumber: 'PR-1', quantity: 12 }));
+    expect(corrected.status).toBe(200);
+    expect(lotSchema.parse(corrected.body).stockOnHand).toBe(12);
+  });
+
+  it('may not delete a lot (403): deleting stays with owner and formulator', async () => {
+    const created = await request(h.app)
+      .post('/api/lots')
+      .set(bearer(w.members.production))
+      .send(aLot(materialId));
+    const res = await request(h.app)
+      .delete(`/api/lots/${created.body.id}`)
+      .set(bearer(w.members.production));
+    expect(res.status).toBe(403);
+  });
+
+  it('a viewer still may not record goods-in (403)', async () => {
+    const res = await request(h.app)
+      .post('/api/lots')
+      .set(bearer(w.members.viewer))
+      .send(aLot(materialId));
+    expect(res.status).toBe(403);
+  });
+});

@@ -4,8 +4,9 @@ import { fileTypeFromBuffer } from 'file-type';
 import type { z } from 'zod';
 import {
   DOCUMENT_MIME_TYPES,
-  DOCUMENT_STALE_DAYS,
+  documentStatusEntries,
   expectedDocumentKinds,
+  todayIso,
   type documentUploadSchema,
   type DocumentStatus,
 } from '@batchproof/shared';
@@ -118,16 +119,10 @@ export async function deleteDocument(db: Database, actor: AuthUser, id: string) 
   if (!(await repo.deleteDocument(db, actor.workshopId, id))) throw notFound('That document');
 }
 
-const KIND_LABELS: Record<string, string> = {
-  sds: 'safety data sheet',
-  'ifra-certificate': 'IFRA certificate',
-  'allergen-declaration': 'allergen declaration',
-};
-
 /**
  * Which documents a material should have on file (a safety data sheet always; an IFRA
  * certificate and allergen declaration for fragrances and essential oils) and whether each is
- * missing or issued more than a year before `now`.
+ * missing, issued more than a year before `now`, or dated after it.
  */
 export async function documentStatus(
   db: Database,
@@ -139,28 +134,11 @@ export async function documentStatus(
   if (!category) throw notFound('That material');
   const kinds = expectedDocumentKinds(category);
   const docs = await repo.materialDocumentsOfKinds(db, actor.workshopId, materialId, kinds);
-  const cutoff = new Date(now.getTime() - DOCUMENT_STALE_DAYS * 86_400_000)
-    .toISOString()
-    .slice(0, 10);
-  const entries = kinds.map((kind) => {
-    const latest = docs.find((d) => d.kind === kind);
-    const label = KIND_LABELS[kind] ?? kind;
-    if (!latest) {
-      return { kind, state: 'missing' as const, latest: null, message: `No ${label} on file` };
-    }
-    const stale = latest.issuedOn < cutoff;
-    return {
-      kind,
-      state: stale ? ('out-of-date' as const) : ('current' as const),
-      latest: withIsoDates(latest),
-      message: stale
-        ? `The newest ${label} was issued on ${latest.issuedOn}, more than a year ago: ask the supplier for a current one`
-        : `${label[0]!.toUpperCase()}${label.slice(1)} issued on ${latest.issuedOn}`,
-    };
-  });
+  const today = todayIso(now);
+  const entries = documentStatusEntries(category, docs.map(withIsoDates), today);
   return {
     materialId,
-    asOf: now.toISOString().slice(0, 10),
+    asOf: today,
     entries,
     complete: entries.every((e) => e.state === 'current'),
   };

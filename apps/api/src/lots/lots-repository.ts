@@ -10,9 +10,12 @@ import {
 import type { Database } from '../db/database';
 import { lotConsumptions, lots, materials, suppliers } from '../db/schema';
 
-// Computed per returned row only: PostgreSQL evaluates select-list subqueries after LIMIT. The
-// outer id is spelled out so the subquery can never bind it to its own table's id.
-const stockOnHand = sql<number>`(${lots.quantity} - coalesce((select sum(${lotConsumptions.quantity}) from ${lotConsumptions} where ${lotConsumptions.lotId} = ${sql.raw('"lots"."id"')}), 0))::float8`;
+/**
+ * A lot's stock on hand: received minus what batches consumed, for a query over `lots`.
+ * Computed per returned row only: PostgreSQL evaluates select-list subqueries after LIMIT. The
+ * outer id is spelled out so the subquery can never bind it to its own table's id.
+ */
+export const stockOnHand = sql<number>`(${lots.quantity} - coalesce((select sum(${lotConsumptions.quantity}) from ${lotConsumptions} where ${lotConsumptions.lotId} = ${sql.raw('"lots"."id"')}), 0))::float8`;
 
 // The material's supplier, looked up per returned row like stock on hand (no join to page over).
 const supplierName = sql<

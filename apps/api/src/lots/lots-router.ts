@@ -12,11 +12,15 @@ import { parse } from '../core/validate';
 import type { Database } from '../db/database';
 import * as domain from './lots-domain';
 
-/** `/api/lots`: goods-in. Members read, owner and formulator write. */
+/**
+ * `/api/lots`: goods-in. Members read; owner, formulator and production record deliveries and
+ * correct them; only owner and formulator delete a lot.
+ */
 export function lotsRouter(deps: { db: Database; authn: Authenticator }) {
   const { db, authn } = deps;
   const router = Router();
   const read = authn.allow(ROLE_SETS.members);
+  const record = authn.allow(ROLE_SETS.goodsIn);
   const write = authn.allow(ROLE_SETS.writers);
 
   router.get('/', ...read, async (req, res) => {
@@ -27,12 +31,12 @@ export function lotsRouter(deps: { db: Database; authn: Authenticator }) {
   });
   router.post(
     '/',
-    ...write,
+    ...record,
     idempotentCreate(db, (req, tx) =>
       domain.createLot(tx, req.user!, parse(lotCreateSchema, req.body)),
     ),
   );
-  router.put('/:id', ...write, async (req, res) => {
+  router.put('/:id', ...record, async (req, res) => {
     const id = recordId(req.params.id, 'That lot');
     res.json(await domain.updateLot(db, req.user!, id, parse(lotUpdateSchema, req.body)));
   });

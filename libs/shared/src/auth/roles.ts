@@ -5,13 +5,20 @@ export const ROLES = ['owner', 'formulator', 'production', 'assessor', 'viewer']
 export const roleSchema = z.enum(ROLES, { error: 'Choose one of the workshop roles.' });
 export type Role = z.infer<typeof roleSchema>;
 
-/** Plain-language description of each role, shown beside role pickers. */
+/**
+ * Plain-language description of each role, shown beside role pickers and on the home page. Each
+ * says what the role can do in the app as it is today, nothing that is not built yet.
+ */
 export const ROLE_DESCRIPTIONS: Record<Role, string> = {
-  owner: 'Everything, including members, workshop settings, releases and recalls.',
-  formulator: 'Materials, supplier documents, formulas and their checks, labels.',
-  production: 'Batch records, weigh sheets, lot picks and label printing.',
-  assessor: 'Read-only access to the formula versions shared for safety assessment.',
-  viewer: 'Read-only access, for bookkeepers and auditors.',
+  owner:
+    'Everything a formulator does, plus members and their roles, and releasing a version over blocking findings with a recorded reason.',
+  formulator:
+    'Materials, suppliers, documents, lots and formulas: writes them, runs the checks and releases versions that pass.',
+  production:
+    'Records goods-in and corrects lots; reads formulas, materials and documents, and scales a formula to a batch size.',
+  assessor: 'Reads the reference lists the checks rest on. Nothing else is open to this role yet.',
+  viewer:
+    'Reads formulas, materials, documents, lots and members, and changes nothing. For bookkeepers and auditors.',
 };
 
 /** Sets of roles that routes and screens allow; one place so client and server agree. */
@@ -20,4 +27,6 @@ export const ROLE_SETS = {
   members: ['owner', 'formulator', 'production', 'viewer'],
   ownerOnly: ['owner'],
   writers: ['owner', 'formulator'],
+  /** Who records goods-in: production receives deliveries as well as the writers. */
+  goodsIn: ['owner', 'formulator', 'production'],
 } as const satisfies Record<string, readonly Role[]>;

@@ -89,15 +89,27 @@ export const documentListQuerySchema = z
     }
   });
 
+/**
+ * Where an expected document stands: none on file, older than a year, dated after today (never
+ * current), or current.
+ */
+export const documentStatusStateSchema = z.enum([
+  'missing',
+  'out-of-date',
+  'future-dated',
+  'current',
+]);
+export type DocumentStatusState = z.infer<typeof documentStatusStateSchema>;
+
 /** Whether an expected document is on file and current. */
 export const documentStatusEntrySchema = z.object({
   kind: documentKindSchema,
-  state: z.enum(['missing', 'out-of-date', 'current']),
+  state: documentStatusStateSchema,
   /** The newest document of this kind, when there is one. */
   latest: documentSchema.nullable(),
   message: z.string(),
 });
-/** Which of a material's expected documents are missing or older than a year. */
+/** Which of a material's expected documents are missing, older than a year or dated ahead. */
 export const documentStatusSchema = z.object({
   materialId: z.string(),
   asOf: z.string(),

@@ -9,10 +9,11 @@ type State = DocumentStatus['entries'][number]['state'];
 const STATES: Record<State, { icon: string; word: string }> = {
   current: { icon: 'check_circle', word: 'On file' },
   'out-of-date': { icon: 'history', word: 'Out of date' },
+  'future-dated': { icon: 'event_busy', word: 'Dated in the future' },
   missing: { icon: 'report', word: 'Missing' },
 };
 
-/** Which of a material's expected documents are on file, missing or older than a year. */
+/** A material's expected documents: on file, missing, out of date or dated ahead. */
 @Component({
   selector: 'bp-document-status-list',
   imports: [MatIcon],
@@ -70,7 +71,8 @@ const STATES: Record<State, { icon: string; word: string }> = {
     .current mat-icon {
       color: var(--mat-sys-primary);
     }
-    .out-of-date mat-icon {
+    .out-of-date mat-icon,
+    .future-dated mat-icon {
       color: var(--mat-sys-tertiary);
     }
     .missing mat-icon {

@@ -1,10 +1,15 @@
 import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
+import { MatButton } from '@angular/material/button';
 import { MatIcon } from '@angular/material/icon';
+import { MatProgressBar } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
-import { ROLE_DESCRIPTIONS, ROLE_SETS } from '@batchproof/shared';
+import { ROLE_DESCRIPTIONS, ROLE_SETS, type Attention } from '@batchproof/shared';
 import { Session } from '../../auth/session';
+import { messageOf } from '../../http/api-error';
+import { AttentionApi } from '../attention-api';
+import { AttentionList } from '../attention-list/attention-list';
 
-/** A first step on the home page. */
+/** A getting-started step on the home page. */
 interface NextStep {
   icon: string;
   title: string;
@@ -12,10 +17,13 @@ interface NextStep {
   link: string;
 }
 
-/** The home view: which workshop, which role, and what to do next. */
+/**
+ * The home view: which workshop and role, what needs attention (worked out by the API), and the
+ * getting-started steps that are not done yet.
+ */
 @Component({
   selector: 'bp-home-page',
-  imports: [MatIcon, RouterLink],
+  imports: [AttentionList, MatButton, MatIcon, MatProgressBar, RouterLink],
   templateUrl: './home-page.html',
   styleUrl: './home-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -28,9 +36,23 @@ export default class HomePage {
     return role ? ROLE_DESCRIPTIONS[role] : '';
   });
 
+  protected readonly attentionResource = inject(AttentionApi).attention();
+  protected readonly attention = computed<Attention | null>(() =>
+    this.attentionResource.hasValue() ? this.attentionResource.value() : null,
+  );
+  protected readonly loadError = computed(() => {
+    const error = this.attentionResource.error();
+    return error ? messageOf(error) : '';
+  });
+
+  /** The steps still to do; none until the API has said how far the workshop has got. */
   protected readonly steps = computed<NextStep[]>(() => {
+    const attention = this.attention();
+    if (!attention) return [];
+    const progress = attention.progress;
     const steps: NextStep[] = [];
-    if (this.session.hasRole(ROLE_SETS.ownerOnly)) {
+    const invited = (attention.counts['invitation-pending'] ?? 0) > 0;
+    if (this.session.hasRole(ROLE_SETS.ownerOnly) && progress?.members === 1 && !invited) {
       steps.push({
         icon: 'group_add',
         title: 'Invite the people you work with',
@@ -39,29 +61,32 @@ export default class HomePage {
         link: '/workshop',
       });
     }
-    if (this.session.hasRole(ROLE_SETS.writers)) {
-      steps.push(
-        {
-          icon: 'inventory_2',
-          title: 'Add your materials and their supplier papers',
-          detail:
-            'INCI names, blends, certificate maximums and allergen declarations, kept together.',
-          link: '/materials',
-        },
-        {
-          icon: 'move_to_inbox',
-          title: 'Record what arrives',
-          detail: 'Each supplier lot with its dates, quantity and certificate of analysis.',
-          link: '/lots',
-        },
-        {
-          icon: 'science',
-          title: 'Write your first formula',
-          detail: 'By weight or percent, checked live for each market you sell in.',
-          link: '/formulas',
-        },
-      );
-    } else if (this.session.hasRole(ROLE_SETS.members)) {
+    const writer = this.session.hasRole(ROLE_SETS.writers);
+    if (writer && progress?.materials === 0) {
+      steps.push({
+        icon: 'inventory_2',
+        title: 'Add your materials and their supplier papers',
+        detail:
+          'INCI names, blends, certificate maximums and allergen declarations, kept together.',
+        link: '/materials',
+      });
+    }
+    if (this.session.hasRole(ROLE_SETS.goodsIn) && progress?.lots === 0) {
+      steps.push({
+        icon: 'move_to_inbox',
+        title: 'Record what arrives',
+        detail: 'Each supplier lot with its dates and quantity.',
+        link: '/lots',
+      });
+    }
+    if (writer && progress?.formulas === 0) {
+      steps.push({
+        icon: 'science',
+        title: 'Write your first formula',
+        detail: 'By weight or percent, checked live for each market you sell in.',
+        link: '/formulas',
+      });
+    } else if (!writer && (progress?.formulas ?? 0) > 0) {
       steps.push({
         icon: 'science',
         title: 'Look through the formulas',

@@ -1,0 +1,137 @@
+import {
+  addDays,
+  ATTENTION_EXPIRY_DAYS,
+  ATTENTION_ROWS_PER_KIND,
+  daysBetween,
+  documentStatusEntries,
+  expectedDocumentKinds,
+  MATERIAL_CATEGORIES,
+  ROLE_SETS,
+  todayIso,
+  type Attention,
+  type AttentionItem,
+  type AttentionKind,
+  type Role,
+} from '@batchproof/shared';
+import type { AuthUser } from '../auth/authenticate';
+import type { Database } from '../db/database';
+import { listPendingInvitations } from '../members/members-repository';
+import * as repo from './attention-repository';
+
+/** The rows of one kind the caller is shown, and how many there are in all. */
+interface Collected {
+  items: AttentionItem[];
+  total: number;
+}
+
+/** One kind of attention item: who may see it and how it is found. */
+interface Collector {
+  kind: AttentionKind;
+  /** The roles that can open the records this kind links to. */
+  roles: readonly Role[];
+  collect(db: Database, workshopId: string, today: string): Promise<Collected>;
+}
+
+const limit = ATTENTION_ROWS_PER_KIND;
+
+/** Every kind the home page lists, most pressing first. A new kind is one more entry here. */
+const COLLECTORS: readonly Collector[] = [
+  {
+    kind: 'formula-blocked',
+    roles: ROLE_SETS.members,
+    async collect(db, workshopId) {
+      const rows = await repo.blockedVersions(db, workshopId, limit);
+      return {
+        total: rows[0]?.matched ?? 0,
+        items: rows.map(({ matched: _matched, state, blockCount, ...row }) => ({
+          kind: 'formula-blocked',
+          ...row,
+          // The query keeps only draft and released versions with a block count above zero.
+          state: state as 'draft' | 'released',
+          blockCount: blockCount ?? 0,
+        })),
+      };
+    },
+  },
+  {
+    kind: 'lot-expiring',
+    roles: ROLE_SETS.members,
+    async collect(db, workshopId, today) {
+      const cutoff = addDays(today, ATTENTION_EXPIRY_DAYS);
+      const rows = await repo.expiringLotsWithStock(db, workshopId, cutoff, limit);
+      return {
+        total: rows[0]?.matched ?? 0,
+        items: rows.map(({ matched: _matched, expiresOn, ...row }) => ({
+          kind: 'lot-expiring',
+          ...row,
+          // The query keeps only lots with an expiry date.
+          expiresOn: expiresOn!,
+          daysLeft: daysBetween(today, expiresOn!),
+        })),
+      };
+    },
+  },
+  {
+    kind: 'material-documents',
+    roles: ROLE_SETS.members,
+    async collect(db, workshopId, today) {
+      const kinds = [...new Set(MATERIAL_CATEGORIES.flatMap(expectedDocumentKinds))];
+      const [materials, docs] = await Promise.all([
+        repo.materialsByName(db, workshopId),
+        repo.newestMaterialDocuments(db, workshopId, kinds),
+      ]);
+      const docsOf = new Map<string | null, typeof docs>();
+      for (const d of docs) docsOf.set(d.materialId, [...(docsOf.get(d.materialId) ?? []), d]);
+      const items: AttentionItem[] = [];
+      for (const m of materials) {
+        const pending = documentStatusEntries(m.category, docsOf.get(m.id) ?? [], today).flatMap(
+          ({ kind, state, message }) => (state === 'current' ? [] : [{ kind, state, message }]),
+        );
+        if (pending.length > 0) {
+          items.push({
+            kind: 'material-documents',
+            materialId: m.id,
+            materialName: m.tradeName,
+            documents: pending,
+          });
+        }
+      }
+      return { items: items.slice(0, limit), total: items.length };
+    },
+  },
+  {
+    kind: 'invitation-pending',
+    roles: ROLE_SETS.ownerOnly,
+    async collect(db, workshopId) {
+      const rows = await listPendingInvitations(db, workshopId);
+      return {
+        total: rows.length,
+        items: rows.slice(0, limit).map((i) => ({
+          kind: 'invitation-pending',
+          invitationId: i.id,
+          email: i.email,
+          role: i.role,
+          expiresAt: i.expiresAt.toISOString(),
+        })),
+      };
+    },
+  },
+];
+
+/**
+ * What needs attention in the caller's workshop on `now`'s day, limited to the kinds the caller's
+ * role can open (an assessor sees none; only owners see invitations), with the workshop's
+ * progress for the getting-started steps.
+ */
+export async function attention(db: Database, actor: AuthUser, now: Date): Promise<Attention> {
+  const today = todayIso(now);
+  const visible = COLLECTORS.filter((c) => c.roles.includes(actor.role));
+  const collected = await Promise.all(visible.map((c) => c.collect(db, actor.workshopId, today)));
+  const mayReadRecords = (ROLE_SETS.members as readonly Role[]).includes(actor.role);
+  return {
+    asOf: today,
+    items: collected.flatMap((c) => c.items),
+    counts: Object.fromEntries(visible.map((c, i) => [c.kind, collected[i]!.total])),
+    progress: mayReadRecords ? await repo.workshopCounts(db, actor.workshopId) : null,
+  };
+}

@@ -1,0 +1,127 @@
+import { and, asc, count, desc, eq, gt, inArray, isNotNull, lte, sql } from 'drizzle-orm';
+import type { DocumentKind } from '@batchproof/shared';
+import type { Database } from '../db/database';
+import { documents, formulas, formulaVersions, lots, materials, users } from '../db/schema';
+import { stockOnHand } from '../lots/lots-repository';
+
+/** The number of rows the query matched before its LIMIT (every matching row is small here). */
+const matched = sql<number>`count(*) over ()`.mapWith(Number);
+
+/**
+ * Draft and released versions (never superseded history) whose last check found blocking
+ * findings: released ones first, since those are what the workshop sells.
+ */
+export async function blockedVersions(db: Database, workshopId: string, limit: number) {
+  return db
+    .select({
+      formulaId: formulaVersions.formulaId,
+      formulaName: formulas.name,
+      versionNumber: formulaVersions.number,
+      state: formulaVersions.state,
+      blockCount: formulaVersions.blockCount,
+      matched,
+    })
+    .from(formulaVersions)
+    .innerJoin(formulas, eq(formulas.id, formulaVersions.formulaId))
+    .where(
+      and(
+        eq(formulaVersions.workshopId, workshopId),
+        inArray(formulaVersions.state, ['draft', 'released']),
+        gt(formulaVersions.blockCount, 0),
+      ),
+    )
+    .orderBy(
+      desc(sql`${formulaVersions.state} = 'released'`),
+      asc(formulas.name),
+      asc(formulaVersions.number),
+    )
+    .limit(limit);
+}
+
+/** Lots with stock on hand whose expiry falls on or before `cutoff`, soonest first. */
+export async function expiringLotsWithStock(
+  db: Database,
+  workshopId: string,
+  cutoff: string,
+  limit: number,
+) {
+  return db
+    .select({
+      lotId: lots.id,
+      materialName: materials.tradeName,
+      supplierLotNumber: lots.supplierLotNumber,
+      expiresOn: lots.expiresOn,
+      stockOnHand: stockOnHand.mapWith(Number),
+      unit: lots.unit,
+      matched,
+    })
+    .from(lots)
+    .innerJoin(materials, eq(materials.id, lots.materialId))
+    .where(
+      and(
+        eq(lots.workshopId, workshopId),
+        isNotNull(lots.expiresOn),
+        lte(lots.expiresOn, cutoff),
+        gt(stockOnHand, 0),
+      ),
+    )
+    .orderBy(asc(lots.expiresOn), asc(lots.id))
+    .limit(limit);
+}
+
+/** Every material of the workshop with its category, by name. */
+export async function materialsByName(db: Database, workshopId: string) {
+  return db
+    .select({ id: materials.id, tradeName: materials.tradeName, category: materials.category })
+    .from(materials)
+    .where(eq(materials.workshopId, workshopId))
+    .orderBy(asc(materials.tradeName), asc(materials.id));
+}
+
+/** The newest document of each kind in `kinds` of every material of the workshop. */
+export async function newestMaterialDocuments(
+  db: Database,
+  workshopId: string,
+  kinds: DocumentKind[],
+) {
+  return db
+    .selectDistinctOn([documents.materialId, documents.kind], {
+      materialId: documents.materialId,
+      kind: documents.kind,
+      issuedOn: documents.issuedOn,
+    })
+    .from(documents)
+    .where(
+      and(
+        eq(documents.workshopId, workshopId),
+        isNotNull(documents.materialId),
+        inArray(documents.kind, kinds),
+      ),
+    )
+    .orderBy(
+      documents.materialId,
+      documents.kind,
+      desc(documents.issuedOn),
+      desc(documents.createdAt),
+    );
+}
+
+/** How many materials, lots, formulas and members the workshop has. */
+export async function workshopCounts(db: Database, workshopId: string) {
+  const countOf = async (
+    table: typeof materials | typeof lots | typeof formulas | typeof users,
+  ) => {
+    const [row] = await db
+      .select({ n: count() })
+      .from(table)
+      .where(eq(table.workshopId, workshopId));
+    return row?.n ?? 0;
+  };
+  const [m, l, f, u] = await Promise.all([
+    countOf(materials),
+    countOf(lots),
+    countOf(formulas),
+    countOf(users),
+  ]);
+  return { materials: m, lots: l, formulas: f, members: u };
+}

@@ -1,0 +1,147 @@
+import { formatDate, formatNumber } from '@angular/common';
+import {
+  ATTENTION_EXPIRY_DAYS,
+  type Attention,
+  type AttentionItem,
+  type AttentionKind,
+} from '@batchproof/shared';
+
+/** One row on the home page: an icon, a plain sentence and where it leads. */
+export interface AttentionRow {
+  key: string;
+  icon: string;
+  text: string;
+  link: string;
+}
+
+/** One kind's rows under a heading that counts them all, with a way to the full list. */
+export interface AttentionGroup {
+  kind: AttentionKind;
+  icon: string;
+  heading: string;
+  rows: AttentionRow[];
+  /** How many more exist than are listed (0 when all are). */
+  more: number;
+  all: { link: string; queryParams?: Record<string, string>; label: string };
+}
+
+/** A message as it reads after a colon: "No safety data sheet" → "no safety data sheet". */
+const inSentence = (message: string) =>
+  /^[A-Z][a-z]/.test(message) ? message[0]!.toLowerCase() + message.slice(1) : message;
+
+const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
+
+type Formats = { date(day: string): string; number(n: number): string };
+
+/** How each kind reads. A new kind of item gets its entry here and nowhere else on the page. */
+const KINDS: {
+  [K in AttentionKind]: {
+    icon: string;
+    heading(n: number): string;
+    /** What "none of these" means, for the empty state. */
+    clear: string;
+    all: AttentionGroup['all'];
+    row(item: Extract<AttentionItem, { kind: K }>, f: Formats): Omit<AttentionRow, 'key'>;
+  };
+} = {
+  'formula-blocked': {
+    icon: 'block',
+    heading: (n) =>
+      `${plural(n, 'formula version has', 'formula versions have')} blocking findings`,
+    clear: 'no draft or released version has blocking findings',
+    all: { link: '/formulas', label: 'Open the formulas' },
+    row: (i) => ({
+      icon: 'block',
+      link: `/formulas/${i.formulaId}/versions/${i.versionNumber}`,
+      text:
+        i.state === 'released'
+          ? `${i.formulaName}: version ${i.versionNumber} is released with ${plural(i.blockCount, 'blocking finding', 'blocking findings')}.`
+          : `${i.formulaName}: the draft, version ${i.versionNumber}, has ${plural(i.blockCount, 'blocking finding', 'blocking findings')}.`,
+    }),
+  },
+  'lot-expiring': {
+    icon: 'schedule',
+    heading: (n) =>
+      `${plural(n, 'lot with stock has', 'lots with stock have')} expired or expire within ${ATTENTION_EXPIRY_DAYS} days`,
+    clear: `no lot with stock expires within ${ATTENTION_EXPIRY_DAYS} days`,
+    all: {
+      link: '/lots',
+      queryParams: { expiry: String(ATTENTION_EXPIRY_DAYS), sort: 'expiresOn', dir: 'asc' },
+      label: 'Open the lots by expiry date',
+    },
+    row: (i, f) => {
+      const stock = `${f.number(i.stockOnHand)} ${i.unit}`;
+      const lot = `Lot ${i.supplierLotNumber} of ${i.materialName}`;
+      const when =
+        i.daysLeft < 0
+          ? `expired ${plural(-i.daysLeft, 'day', 'days')} ago, on ${f.date(i.expiresOn)}`
+          : i.daysLeft === 0
+            ? 'expires today'
+            : `expires in ${plural(i.daysLeft, 'day', 'days')}, on ${f.date(i.expiresOn)}`;
+      return {
+        icon: i.daysLeft < 0 ? 'event_busy' : 'schedule',
+        link: `/lots/${i.lotId}`,
+        text: `${lot} ${when}; ${stock} still in stock.`,
+      };
+    },
+  },
+  'material-documents': {
+    icon: 'description',
+    heading: (n) =>
+      `${plural(n, 'material is', 'materials are')} missing a supplier document or have one that is not current`,
+    clear: 'every material has its expected documents on file and current',
+    all: { link: '/materials', label: 'Open the materials' },
+    row: (i) => ({
+      icon: 'description',
+      link: `/materials/${i.materialId}`,
+      text: `${i.materialName}: ${i.documents.map((d) => inSentence(d.message)).join('; ')}.`,
+    }),
+  },
+  'invitation-pending': {
+    icon: 'mail',
+    heading: (n) => `${plural(n, 'invitation is', 'invitations are')} waiting to be accepted`,
+    clear: 'no invitation is waiting',
+    all: { link: '/workshop', label: 'Open the workshop members' },
+    row: (i, f) => ({
+      icon: 'mail',
+      link: '/workshop',
+      text: `${i.email} has not yet joined as ${i.role}; the link works until ${f.date(i.expiresAt)}.`,
+    }),
+  },
+};
+
+/** The attention answer as groups of rows, in the order the API ranks the kinds. */
+export function attentionGroups(attention: Attention, locale: string): AttentionGroup[] {
+  const f: Formats = {
+    date: (day) => formatDate(day, 'mediumDate', locale),
+    number: (n) => formatNumber(n, locale, '1.0-3'),
+  };
+  const groups = new Map<AttentionKind, AttentionRow[]>();
+  attention.items.forEach((item, index) => {
+    const kind = KINDS[item.kind] as (typeof KINDS)[AttentionKind];
+    const row = (kind.row as (i: AttentionItem, f: Formats) => Omit<AttentionRow, 'key'>)(item, f);
+    groups.set(item.kind, [
+      ...(groups.get(item.kind) ?? []),
+      { key: `${item.kind}-${index}`, ...row },
+    ]);
+  });
+  return [...groups].map(([kind, rows]) => {
+    const total = attention.counts[kind] ?? rows.length;
+    const { icon, heading, all } = KINDS[kind];
+    return { kind, icon, heading: heading(total), rows, more: total - rows.length, all };
+  });
+}
+
+/**
+ * The empty state in words: which kinds were checked and found clear, or that none is open to
+ * this role.
+ */
+export function allClearSentence(attention: Attention): string {
+  const checked = (Object.keys(attention.counts) as AttentionKind[]).map((k) => KINDS[k].clear);
+  if (checked.length === 0) {
+    return 'Nothing the home page tracks is open to your role yet; the reference lists are.';
+  }
+  const list =
+    checked.length === 1 ? checked[0] : `${checked.slice(0, -1).join(', ')} and ${checked.at(-1)}`;
+  return `Nothing needs attention today: ${list}.`;
+}

@@ -1,0 +1,105 @@
+import * as z from 'zod';
+import { documentKindSchema, documentStatusStateSchema } from '../documents/document-schema';
+import { lotUnitSchema } from '../lots/lot-schema';
+import { roleSchema } from '../auth/roles';
+
+/**
+ * Lots expiring within this many days (or already expired) while stock remains show on the home
+ * page. // common practice, no published source: two months leaves time to use up or reorder.
+ */
+export const ATTENTION_EXPIRY_DAYS = 60;
+
+/** At most this many rows of one kind are listed; `counts` holds the full number. */
+export const ATTENTION_ROWS_PER_KIND = 10;
+
+/** A formula's draft or released version whose last check found blocking findings. */
+export const formulaBlockedItemSchema = z.object({
+  kind: z.literal('formula-blocked'),
+  formulaId: z.string(),
+  formulaName: z.string(),
+  versionNumber: z.number().int(),
+  state: z.enum(['draft', 'released']),
+  blockCount: z.number().int(),
+});
+
+/** A material with an expected document missing, out of date or dated in the future. */
+export const materialDocumentsItemSchema = z.object({
+  kind: z.literal('material-documents'),
+  materialId: z.string(),
+  materialName: z.string(),
+  /** Only the documents that are not current, in the expected order. */
+  documents: z.array(
+    z.object({
+      kind: documentKindSchema,
+      state: documentStatusStateSchema.exclude(['current']),
+      message: z.string(),
+    }),
+  ),
+});
+
+/** A lot with stock on hand that expires within {@link ATTENTION_EXPIRY_DAYS} days or has expired. */
+export const lotExpiringItemSchema = z.object({
+  kind: z.literal('lot-expiring'),
+  lotId: z.string(),
+  materialName: z.string(),
+  supplierLotNumber: z.string(),
+  expiresOn: z.string(),
+  /** Days from today to the expiry date; negative once expired. */
+  daysLeft: z.number().int(),
+  stockOnHand: z.number(),
+  unit: lotUnitSchema,
+});
+
+/** An invitation sent and not yet accepted (owners only). */
+export const invitationPendingItemSchema = z.object({
+  kind: z.literal('invitation-pending'),
+  invitationId: z.string(),
+  email: z.string(),
+  role: roleSchema,
+  expiresAt: z.string(),
+});
+
+/**
+ * One thing on the home page that needs someone's attention. A new kind (batches, recalls) is
+ * one more member of this union, one collector in the API's attention domain and one row format
+ * on the home page.
+ */
+export const attentionItemSchema = z.discriminatedUnion('kind', [
+  formulaBlockedItemSchema,
+  materialDocumentsItemSchema,
+  lotExpiringItemSchema,
+  invitationPendingItemSchema,
+]);
+export type AttentionItem = z.infer<typeof attentionItemSchema>;
+export type AttentionKind = AttentionItem['kind'];
+export const ATTENTION_KINDS = attentionItemSchema.options.map(
+  (o) => o.shape.kind.value,
+) as AttentionKind[];
+
+/**
+ * How far the workshop has got, for the getting-started steps: a step shows only while its
+ * count is zero. Null for a role that cannot open those records.
+ */
+export const workshopProgressSchema = z.object({
+  materials: z.number().int(),
+  lots: z.number().int(),
+  formulas: z.number().int(),
+  /** Members of the workshop, the caller included. */
+  members: z.number().int(),
+});
+export type WorkshopProgress = z.infer<typeof workshopProgressSchema>;
+
+/** `GET /api/attention`: what needs attention in the caller's workshop, as their role may see. */
+export const attentionSchema = z.object({
+  /** The day (YYYY-MM-DD, UTC) the answer was worked out for. */
+  asOf: z.string(),
+  /** Up to {@link ATTENTION_ROWS_PER_KIND} items per kind, most pressing first. */
+  items: z.array(attentionItemSchema),
+  /** How many items of each kind there are in all; only the kinds the role may see. */
+  counts: z.partialRecord(
+    z.enum(ATTENTION_KINDS as [AttentionKind, ...AttentionKind[]]),
+    z.number().int(),
+  ),
+  progress: workshopProgressSchema.nullable(),
+});
+export type Attention = z.infer<typeof attentionSchema>;
