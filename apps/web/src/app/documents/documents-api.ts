@@ -2,6 +2,7 @@ import { HttpClient, type HttpEvent, httpResource } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
 import { map, type Observable } from 'rxjs';
 import { documentListSchema, documentStatusSchema, type DocumentUpload } from '@batchproof/shared';
+import { idempotencyHeaders } from '../http/submission-key';
 
 /** Whose documents: exactly one material or one lot. */
 export interface DocumentOwner {
@@ -42,15 +43,17 @@ export class DocumentsApi {
 
   /**
    * Uploads a file with its metadata as multipart form data. Emits the request's events so the
-   * caller can show progress; the last one is the response with the stored document.
+   * caller can show progress; the last one is the response with the stored document. `key` is
+   * the submission's Idempotency-Key, so a retried upload stores the file once.
    */
-  upload(fields: DocumentUpload, file: File): Observable<HttpEvent<unknown>> {
+  upload(fields: DocumentUpload, file: File, key?: string): Observable<HttpEvent<unknown>> {
     const body = new FormData();
     for (const [key, value] of Object.entries(fields)) {
       if (value !== undefined && value !== null) body.append(key, String(value));
     }
     body.append('file', file, file.name);
     return this.http.post<unknown>('/api/documents', body, {
+      headers: idempotencyHeaders(key),
       reportProgress: true,
       observe: 'events',
     });

@@ -21,6 +21,7 @@ import {
   type ScaledVersion,
   versionComparisonSchema,
 } from '@batchproof/shared';
+import { idempotencyHeaders } from '../http/submission-key';
 import { MaterialsApi } from '../materials/materials-api';
 
 const enc = encodeURIComponent;
@@ -148,9 +149,10 @@ export class FormulasApi {
     return cached;
   }
 
-  create(input: FormulaCreate): Observable<Formula> {
+  /** Creates a formula with its first draft; `key` makes a retried submission create it once. */
+  create(input: FormulaCreate, key?: string): Observable<Formula> {
     return this.http
-      .post<unknown>('/api/formulas', input)
+      .post<unknown>('/api/formulas', input, { headers: idempotencyHeaders(key) })
       .pipe(map((body) => formulaSchema.parse(body)));
   }
 
@@ -175,9 +177,13 @@ export class FormulasApi {
   }
 
   /** Starts a new draft copied from version `fromVersion`. */
-  newDraft(id: string, fromVersion: number): Observable<FormulaVersion> {
+  newDraft(id: string, fromVersion: number, key?: string): Observable<FormulaVersion> {
     return this.http
-      .post<unknown>(`${formulaUrl(id)}/versions`, { fromVersion })
+      .post<unknown>(
+        `${formulaUrl(id)}/versions`,
+        { fromVersion },
+        { headers: idempotencyHeaders(key) },
+      )
       .pipe(map((body) => formulaVersionSchema.parse(body)));
   }
 

@@ -10,6 +10,7 @@ import {
   materialPageSchema,
   materialSummarySchema,
 } from '@batchproof/shared';
+import { idempotencyHeaders } from '../http/submission-key';
 
 /** How many materials the picker offers at once; typing narrows them. */
 const MATERIAL_OPTIONS = 20;
@@ -70,9 +71,14 @@ export class LotsApi {
     });
   }
 
-  /** Records a delivery; answers with the new lot and its stock on hand. */
-  create(input: LotFields): Observable<Lot> {
-    return this.http.post<unknown>('/api/lots', input).pipe(map((body) => lotSchema.parse(body)));
+  /**
+   * Records a delivery; answers with the new lot and its stock on hand. `key` is the form
+   * submission's Idempotency-Key: a retry with it never records the delivery twice.
+   */
+  create(input: LotFields, key?: string): Observable<Lot> {
+    return this.http
+      .post<unknown>('/api/lots', input, { headers: idempotencyHeaders(key) })
+      .pipe(map((body) => lotSchema.parse(body)));
   }
 
   /** Replaces a lot's fields. */

@@ -27,6 +27,7 @@ import {
 } from '@batchproof/shared';
 import { errorMessage, showFieldErrors, showRequestError } from '../../forms/form-errors';
 import { ApiError } from '../../http/api-error';
+import { SubmissionKey } from '../../http/submission-key';
 import { DOCUMENT_KIND_OPTIONS, fileSize } from '../document-kinds';
 import { DocumentsApi } from '../documents-api';
 
@@ -71,6 +72,8 @@ export class DocumentUpload {
 
   private readonly api = inject(DocumentsApi);
   private readonly snackBar = inject(MatSnackBar);
+  /** The Idempotency-Key of the upload, kept while the same file and fields are retried. */
+  private readonly submission = new SubmissionKey();
   private readonly picker = viewChild.required<ElementRef<HTMLInputElement>>('picker');
 
   protected readonly form = inject(NonNullableFormBuilder).group({
@@ -129,13 +132,14 @@ export class DocumentUpload {
   private send(fields: Parameters<DocumentsApi['upload']>[0], file: File): void {
     this.uploading.set(true);
     this.progress.set(null);
-    this.api.upload(fields, file).subscribe({
+    this.api.upload(fields, file, this.submission.for({ fields, file })).subscribe({
       next: (event) => {
         if (event.type === HttpEventType.UploadProgress && event.total) {
           this.progress.set(Math.round((event.loaded / event.total) * 100));
         } else if (event.type === HttpEventType.Response) {
           const doc = documentSchema.parse(event.body);
           this.uploading.set(false);
+          this.submission.done();
           this.reset();
           this.snackBar.open(`Uploaded “${doc.title}”.`, 'OK', { duration: 4000 });
           this.uploaded.emit(doc);

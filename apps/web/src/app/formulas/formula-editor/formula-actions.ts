@@ -12,6 +12,7 @@ import {
   formulaVersionInputSchema,
 } from '@batchproof/shared';
 import { ApiError, messageOf } from '../../http/api-error';
+import { SubmissionKey } from '../../http/submission-key';
 import { showContractRequestError, validateContract } from '../form-paths';
 import { FormulasApi } from '../formulas-api';
 import { editorPath, type FormulaForm, toVersionInput } from './formula-form';
@@ -58,6 +59,8 @@ export class FormulaActions {
   readonly notice = signal('');
   /** The last release refusal, until the next attempt. */
   readonly refusal = signal<Refusal | null>(null);
+  /** The Idempotency-Key of a new-draft request, kept while it is retried. */
+  private readonly draftSubmission = new SubmissionKey();
 
   constructor(private readonly source: FormulaActionsSource) {}
 
@@ -146,9 +149,11 @@ export class FormulaActions {
     if (!version || this.busy()) return;
     const id = this.source.formulaId();
     this.busy.set('Starting a new draft');
-    this.api.newDraft(id, version.number).subscribe({
+    const key = this.draftSubmission.for({ id, fromVersion: version.number });
+    this.api.newDraft(id, version.number, key).subscribe({
       next: (draft) => {
         this.busy.set(null);
+        this.draftSubmission.done();
         this.source.formula.reload();
         this.snackBar.open(
           `Draft version ${draft.number} started from version ${version.number}.`,

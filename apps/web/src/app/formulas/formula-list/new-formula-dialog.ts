@@ -22,6 +22,7 @@ import {
   type ProductType,
 } from '@batchproof/shared';
 import { errorMessage } from '../../forms/form-errors';
+import { SubmissionKey } from '../../http/submission-key';
 import { showContractRequestError, validateContract } from '../form-paths';
 import { FormulasApi } from '../formulas-api';
 import { MARKETS, PRODUCT_TYPE_LABELS, startingProfile } from '../product-types';
@@ -138,6 +139,8 @@ export class NewFormulaDialog {
   protected readonly typeLabels = PRODUCT_TYPE_LABELS;
   protected readonly markets = MARKETS;
   protected readonly saving = signal(false);
+  /** The Idempotency-Key of this dialog's submission, kept while it is retried. */
+  private readonly submission = new SubmissionKey();
   protected readonly notice = signal('');
   protected readonly errorMessage = errorMessage;
 
@@ -154,8 +157,11 @@ export class NewFormulaDialog {
     this.notice.set(notice);
     if (!value) return;
     this.saving.set(true);
-    this.api.create(value).subscribe({
-      next: (formula) => this.ref.close(formula),
+    this.api.create(value, this.submission.for(value)).subscribe({
+      next: (formula) => {
+        this.submission.done();
+        this.ref.close(formula);
+      },
       error: (err: unknown) => {
         this.saving.set(false);
         this.notice.set(showContractRequestError(this.form, err, mapPath));

@@ -24,6 +24,7 @@ import {
   type MaterialSummary,
 } from '@batchproof/shared';
 import { errorMessage, showRequestError, validateForm } from '../../forms/form-errors';
+import { SubmissionKey } from '../../http/submission-key';
 import { isoDay } from '../lot-expiry';
 import { LotsApi } from '../lots-api';
 import { MaterialPicker } from '../material-picker/material-picker';
@@ -67,6 +68,8 @@ export class LotForm {
   protected readonly errorMessage = errorMessage;
   protected readonly submitting = signal(false);
   protected readonly notice = signal('');
+  /** The Idempotency-Key of a new lot's submission, kept while it is retried. */
+  private readonly submission = new SubmissionKey();
 
   /**
    * The form, built from the lot it edits: a new lot (after a save, or another id) gives a fresh
@@ -106,10 +109,13 @@ export class LotForm {
     if (!value) return;
     const existing = this.lot();
     this.submitting.set(true);
-    const request = existing ? this.api.update(existing.id, value) : this.api.create(value);
+    const request = existing
+      ? this.api.update(existing.id, value)
+      : this.api.create(value, this.submission.for(value));
     request.subscribe({
       next: (lot) => {
         this.submitting.set(false);
+        this.submission.done();
         const what = `Lot ${lot.supplierLotNumber} of ${lot.materialName}`;
         this.snackBar.open(existing ? `${what} is saved.` : `${what} is recorded.`, 'OK', {
           duration: 5000,

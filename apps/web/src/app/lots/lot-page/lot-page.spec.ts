@@ -152,6 +152,38 @@ describe('LotPage', () => {
     expect(await page.value('Expiry date')).toBe('2027-03-01');
   });
 
+  it('sends one Idempotency-Key per submission: a retry after a lost answer reuses it, a changed form gets a new one', async () => {
+    const page = await openAs('formulator', `/lots/new?materialId=${SHEA}`);
+    page.backend
+      .expectOne(`/api/materials/${SHEA}`)
+      .flush(material(SHEA, 'Shea butter, refined', 'Butyrospermum Parkii Butter'));
+    await page.harness.fixture.whenStable();
+    await page.fill('Supplier lot number', 'SB-2231');
+    await page.fill('Quantity received', '5000');
+    await page.fill('Received on', '2026-03-01');
+    const isPost = (r: HttpRequest<unknown>) => r.method === 'POST' && r.url === '/api/lots';
+    const keyOf = (r: { request: HttpRequest<unknown> }) =>
+      r.request.headers.get('Idempotency-Key');
+
+    await page.click(/Record lot/);
+    const first = await sent(page.backend, isPost);
+    const key = keyOf(first);
+    expect(key).toMatch(/^[0-9a-f-]{36}$/);
+    first.error(new ProgressEvent('error'));
+    await page.harness.fixture.whenStable();
+
+    await page.click(/Record lot/);
+    const retry = await sent(page.backend, isPost);
+    expect(keyOf(retry)).toBe(key);
+    retry.error(new ProgressEvent('error'));
+    await page.harness.fixture.whenStable();
+
+    await page.fill('Quantity received', '4000');
+    await page.click(/Record lot/);
+    const changed = await sent(page.backend, isPost);
+    expect(keyOf(changed)).not.toBe(key);
+  });
+
   it('refuses an expiry before the day received with the shared message, sending nothing', async () => {
     const page = await openAs('owner', `/lots/new?materialId=${SHEA}`);
     page.backend
