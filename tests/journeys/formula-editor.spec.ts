@@ -25,13 +25,7 @@ describe('journey: a maker builds a bath formula with live checks, releases it a
     const page = await h.newPage({ width: 1366, height: 900 });
 
     // A fresh workshop, signed up in the browser; data is then arranged over the API.
-    await page.goto('/sign-up');
-    await page.getByLabel('Workshop name').fill(`Wrenfield Fizz Co ${run}`);
-    await page.getByLabel('Your name').fill(owner.name);
-    await page.getByLabel('E-mail').fill(owner.email);
-    await page.getByLabel('Password').fill(owner.password);
-    await page.getByRole('button', { name: 'Create workshop' }).click();
-    await page.waitForURL(`${h.baseUrl}/`);
+    await h.signUpWorkshop(page, { ...owner, workshop: `Wrenfield Fizz Co ${run}` });
     const accessToken = await h.apiSignIn(owner.email, owner.password);
 
     // Materials through the API: a fizzer's base and acid, a mica blend with ultramarines and a

@@ -52,13 +52,7 @@ describe('journey: goods-in', () => {
     const page = await h.newPage();
 
     // A fresh workshop, signed up in the browser; data is then arranged over the API.
-    await page.goto('/sign-up');
-    await page.getByLabel('Workshop name').fill(`Hollowmere Bathworks ${run}`);
-    await page.getByLabel('Your name').fill(owner.name);
-    await page.getByLabel('E-mail').fill(owner.email);
-    await page.getByLabel('Password').fill(owner.password);
-    await page.getByRole('button', { name: 'Create workshop' }).click();
-    await page.waitForURL(`${h.baseUrl}/`);
+    await h.signUpWorkshop(page, { ...owner, workshop: `Hollowmere Bathworks ${run}` });
     const accessToken = await h.apiSignIn(owner.email, owner.password);
 
     // Two materials through the API.

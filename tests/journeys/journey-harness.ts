@@ -5,7 +5,7 @@ import path from 'node:path';
 import { type Browser, type BrowserContext, chromium, type Page } from 'playwright-core';
 import { createApp } from '../../apps/api/src/app';
 import type { DatabaseHandle } from '../../apps/api/src/db/database';
-import { startMailCatcher } from '../support/mail-catcher';
+import { firstLink, startMailCatcher } from '../support/mail-catcher';
 import { openMigratedTestDatabase } from '../support/test-database';
 
 const ROOT = path.resolve(import.meta.dirname, '../..');
@@ -31,11 +31,24 @@ export interface JourneyHarness {
   problems: Problem[];
   /** A fresh browser context (its own cookies and storage) with a watched page. */
   newPage(options?: { width?: number; height?: number }): Promise<Page>;
+  /**
+   * Signs up a fresh workshop in the browser: fills the sign-up form, opens the confirmation link
+   * from the mail catcher, confirms, and waits for the workshop's home page.
+   */
+  signUpWorkshop(page: Page, who: WorkshopOwner): Promise<void>;
   /** Signs in over the API (not the browser) and returns an access token, for arranging data. */
   apiSignIn(email: string, password: string): Promise<string>;
   /** Saves a full-page screenshot as `<name>.png` under the output folder. */
   screenshot(page: Page, name: string): Promise<string>;
   close(): Promise<void>;
+}
+
+/** Who sets up a workshop in a journey. */
+export interface WorkshopOwner {
+  workshop: string;
+  name: string;
+  email: string;
+  password: string;
 }
 
 export async function startJourneyHarness(): Promise<JourneyHarness> {
@@ -81,6 +94,20 @@ export async function startJourneyHarness(): Promise<JourneyHarness> {
     baseUrl,
     mail,
     problems,
+    async signUpWorkshop(page, who) {
+      await page.goto('/sign-up');
+      await page.getByLabel('Workshop name').fill(who.workshop);
+      await page.getByLabel('Your name').fill(who.name);
+      await page.getByLabel('E-mail').fill(who.email);
+      await page.getByLabel('Password').fill(who.password);
+      await page.getByRole('button', { name: 'Create workshop' }).click();
+      await page.getByText(`We sent a link to ${who.email}`).waitFor();
+      const link = firstLink(await mail.waitFor(who.email));
+      await page.goto(link);
+      await page.getByRole('button', { name: 'Open my workshop' }).click();
+      await page.waitForURL(`${baseUrl}/`);
+      await page.getByRole('heading', { name: who.workshop }).waitFor();
+    },
     async apiSignIn(email, password) {
       const res = await fetch(`${baseUrl}/api/auth/sign-in`, {
         method: 'POST',

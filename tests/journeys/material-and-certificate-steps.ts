@@ -7,22 +7,6 @@ import type { Page } from 'playwright-core';
 /** A run id that keeps this journey's workshop and e-mail apart from any other run. */
 export const runId = () => `${Date.now().toString(36)}${randomBytes(3).toString('hex')}`;
 
-/** Signs up a fresh workshop in the browser and waits for its home page. */
-export async function signUpWorkshop(
-  page: Page,
-  baseUrl: string,
-  who: { workshop: string; name: string; email: string; password: string },
-): Promise<void> {
-  await page.goto('/sign-up');
-  await page.getByLabel('Workshop name').fill(who.workshop);
-  await page.getByLabel('Your name').fill(who.name);
-  await page.getByLabel('E-mail').fill(who.email);
-  await page.getByLabel('Password').fill(who.password);
-  await page.getByRole('button', { name: 'Create workshop' }).click();
-  await page.waitForURL(`${baseUrl}/`);
-  await page.getByRole('heading', { name: who.workshop }).waitFor();
-}
-
 /**
  * Writes a tiny but well-formed PDF (the API recognises it from its `%PDF-` header) into a new
  * temporary folder and returns its path.

@@ -1,12 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { type JourneyHarness, startJourneyHarness } from './journey-harness';
-import {
-  choose,
-  daysAgo,
-  runId,
-  signUpWorkshop,
-  writeSmallPdf,
-} from './material-and-certificate-steps';
+import { choose, daysAgo, runId, writeSmallPdf } from './material-and-certificate-steps';
 
 describe('journey: a formulator records a fragrance oil and files its certificate', () => {
   let h: JourneyHarness;
@@ -31,7 +25,7 @@ describe('journey: a formulator records a fragrance oil and files its certificat
 
   it('creates a supplier and a fragrance with IFRA maxima and allergens, uploads its certificate and sees the status change', async () => {
     const page = await h.newPage();
-    await signUpWorkshop(page, h.baseUrl, owner);
+    await h.signUpWorkshop(page, owner);
 
     // The materials list starts empty and says what to do.
     await page.getByRole('link', { name: 'Materials', exact: true }).click();

@@ -30,14 +30,28 @@ describe('journey: a maker sets up a workshop and brings in a formulator', () =>
   it('signs up, signs out and in, invites a formulator who accepts and lands signed in as formulator', async () => {
     const page = await h.newPage();
 
-    // Sign up a new workshop.
-    await page.goto('/sign-up');
+    // Sign up a new workshop. The page runs under the strict Content-Security-Policy (no inline
+    // script, styles only from the app or with the page's nonce): a violation would be a console
+    // error, and the journey fails on any.
+    const signUpPage = await page.goto('/sign-up');
+    const policy = signUpPage!.headers()['content-security-policy'];
+    expect(policy).toContain("script-src 'self';");
+    expect(policy).toMatch(/style-src 'self' 'nonce-[^']+';/);
+    expect(policy).toContain("frame-ancestors 'none'");
     await page.getByLabel('Workshop name').fill(workshop);
     await page.getByLabel('Your name').fill(owner.name);
     await page.getByLabel('E-mail').fill(owner.email);
     await page.getByLabel('Password').fill(owner.password);
     await h.screenshot(page, '01-sign-up');
     await page.getByRole('button', { name: 'Create workshop' }).click();
+    await page.getByText(`We sent a link to ${owner.email}`).waitFor();
+    await h.screenshot(page, '01-sign-up-check-your-mail');
+
+    // The confirmation link from the mail creates the workshop and signs the owner in.
+    const confirmation = firstLink(await h.mail.waitFor(owner.email));
+    expect(confirmation.startsWith(`${h.baseUrl}/confirm-sign-up/`)).toBe(true);
+    await page.goto(confirmation);
+    await page.getByRole('button', { name: 'Open my workshop' }).click();
     await page.waitForURL(`${h.baseUrl}/`);
     await page.getByRole('heading', { name: workshop }).waitFor();
     expect(await page.getByTestId('signed-in-role').textContent()).toBe('owner');
@@ -45,7 +59,7 @@ describe('journey: a maker sets up a workshop and brings in a formulator', () =>
 
     // Sign out.
     await page.getByRole('button', { name: `Account of ${owner.name}` }).click();
-    await page.getByRole('menuitem', { name: 'Sign out' }).click();
+    await page.getByRole('menuitem', { name: 'Sign out', exact: true }).click();
     await page.waitForURL('**/sign-in');
     await page.getByRole('heading', { name: 'Sign in to your workshop' }).waitFor();
     await h.screenshot(page, '03-sign-in');

@@ -1,7 +1,7 @@
 import type { Routes } from '@angular/router';
 import { guestGuard } from './guest-guard';
 
-/** The signed-out pages. The invitation and reset paths are the links the API e-mails. */
+/** The signed-out pages. The confirmation, invitation and reset paths are the links the API e-mails. */
 const authRoutes: Routes = [
   {
     path: 'sign-in',
@@ -14,6 +14,11 @@ const authRoutes: Routes = [
     title: 'Set up your workshop · Batchproof',
     canActivate: [guestGuard],
     loadComponent: () => import('./sign-up/sign-up-page'),
+  },
+  {
+    path: 'confirm-sign-up/:token',
+    title: 'Confirm your e-mail · Batchproof',
+    loadComponent: () => import('./sign-up/confirm-sign-up-page'),
   },
   {
     path: 'accept-invite/:token',

@@ -3,6 +3,8 @@ import { computed, inject, Injectable, signal } from '@angular/core';
 import { catchError, finalize, firstValueFrom, map, type Observable, of, shareReplay } from 'rxjs';
 import {
   type AcceptInvitation,
+  type EmailSent,
+  emailSentSchema,
   type Role,
   type Session as SessionBody,
   sessionSchema,
@@ -42,9 +44,19 @@ export class Session {
     return this.start(this.http.post<unknown>('/api/auth/sign-in', input));
   }
 
-  /** Creates a workshop with its first owner, and signs that owner in. */
-  signUp(input: SignUp): Observable<User> {
-    return this.start(this.http.post<unknown>('/api/auth/sign-up', input));
+  /**
+   * Asks for a new workshop. The API e-mails a confirmation link and answers the same whether or
+   * not the address already has an account; the workshop exists once the link is opened.
+   */
+  signUp(input: SignUp): Observable<EmailSent> {
+    return this.http
+      .post<unknown>('/api/auth/sign-up', input)
+      .pipe(map((body) => emailSentSchema.parse(body)));
+  }
+
+  /** Opens a sign-up confirmation link: creates the workshop and signs its owner in. */
+  confirmSignUp(token: string): Observable<User> {
+    return this.start(this.http.post<unknown>('/api/auth/sign-up/confirm', { token }));
   }
 
   /** Accepts an invitation with a name and password, and signs the new member in. */
@@ -86,6 +98,11 @@ export class Session {
       catchError(() => of(null)),
       map(() => this.clear()),
     );
+  }
+
+  /** Ends every session of this user on every device (access tokens included), then here. */
+  signOutEverywhere(): Observable<void> {
+    return this.http.post('/api/auth/sign-out-everywhere', null).pipe(map(() => this.clear()));
   }
 
   /** Whether the signed-in user holds one of `roles`. */

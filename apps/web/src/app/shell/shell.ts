@@ -103,9 +103,18 @@ export default class Shell {
   }
 
   protected signOut(): void {
-    this.session.signOut().subscribe(() => {
-      this.snackBar.open('You are signed out.', undefined, { duration: 4000 });
-      void this.router.navigate(['/sign-in']);
-    });
+    this.session.signOut().subscribe(() => this.signedOut('You are signed out.'));
+  }
+
+  /** Ends the sessions on every device, for a lost laptop or a shared password. */
+  protected signOutEverywhere(): void {
+    this.session
+      .signOutEverywhere()
+      .subscribe(() => this.signedOut('You are signed out on every device.'));
+  }
+
+  private signedOut(message: string): void {
+    this.snackBar.open(message, undefined, { duration: 4000 });
+    void this.router.navigate(['/sign-in']);
   }
 }

@@ -6,7 +6,7 @@ import { TestBed } from '@angular/core/testing';
 import { MatButtonHarness } from '@angular/material/button/testing';
 import { MatFormFieldHarness } from '@angular/material/form-field/testing';
 import { MatInputHarness } from '@angular/material/input/testing';
-import { provideRouter, Router } from '@angular/router';
+import { provideRouter } from '@angular/router';
 import SignUpPage from './sign-up-page';
 import { errorInterceptor } from '../../http/error-interceptor';
 
@@ -73,7 +73,7 @@ describe('SignUpPage', () => {
     expect(await page.errors('Workshop name')).toEqual([]);
   });
 
-  it('sends the trimmed, lower-cased values and goes home once the workshop exists', async () => {
+  it('sends the trimmed, lower-cased values and then says where the confirmation link went', async () => {
     const page = await openSignUp();
     await page.fill('Workshop name', ' Hollowmere Bathworks ');
     await page.fill('Your name', 'Ada Marsh');
@@ -89,21 +89,13 @@ describe('SignUpPage', () => {
       password: 'a-long-enough-password',
     });
     req.flush(
-      {
-        accessToken: 't',
-        expiresIn: 900,
-        user: {
-          id: 'u1',
-          name: 'Ada Marsh',
-          email: 'ada@example.com',
-          role: 'owner',
-          workshop: { id: 'w1', name: 'Hollowmere Bathworks' },
-        },
-      },
-      { status: 201, statusText: 'Created' },
+      { message: 'We sent a link to ada@example.com. Open it to confirm the address.' },
+      { status: 202, statusText: 'Accepted' },
     );
     await page.fixture.whenStable();
 
-    expect(TestBed.inject(Router).url).toBe('/');
+    const status = page.fixture.nativeElement.querySelector('[role=status]') as HTMLElement;
+    expect(status.textContent).toContain('We sent a link to ada@example.com');
+    expect(localStorage.length).toBe(0);
   });
 });

@@ -4,14 +4,13 @@ import { MatButton } from '@angular/material/button';
 import { MatError, MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
-import { MatSnackBar } from '@angular/material/snack-bar';
-import { Router, RouterLink } from '@angular/router';
+import { RouterLink } from '@angular/router';
 import { signUpSchema } from '@batchproof/shared';
 import { errorMessage, showRequestError, validateForm } from '../../forms/form-errors';
 import { AuthCard } from '../auth-card/auth-card';
 import { Session } from '../session';
 
-/** Sets up a new workshop and its first owner. */
+/** Asks for a new workshop; the link e-mailed to the owner creates it (confirm-sign-up-page). */
 @Component({
   selector: 'bp-sign-up-page',
   imports: [
@@ -31,8 +30,6 @@ import { Session } from '../session';
 })
 export default class SignUpPage {
   private readonly session = inject(Session);
-  private readonly router = inject(Router);
-  private readonly snackBar = inject(MatSnackBar);
   protected readonly form = inject(NonNullableFormBuilder).group({
     workshopName: '',
     name: '',
@@ -41,6 +38,8 @@ export default class SignUpPage {
   });
   protected readonly submitting = signal(false);
   protected readonly notice = signal('');
+  /** The API's answer once the request is in: where the confirmation link went. */
+  protected readonly sent = signal('');
   protected readonly errorMessage = errorMessage;
 
   protected submit(): void {
@@ -50,11 +49,9 @@ export default class SignUpPage {
     if (!value) return;
     this.submitting.set(true);
     this.session.signUp(value).subscribe({
-      next: (user) => {
-        this.snackBar.open(`${user.workshop.name} is set up. Welcome to Batchproof.`, 'OK', {
-          duration: 5000,
-        });
-        void this.router.navigateByUrl('/');
+      next: (answer) => {
+        this.submitting.set(false);
+        this.sent.set(answer.message);
       },
       error: (err: unknown) => {
         this.submitting.set(false);
