@@ -14,6 +14,7 @@ import { aFragrance } from '../../fixtures/builders/material-builder';
 import { buildWorkshop, type BuiltWorkshop } from '../support/workshop-builder';
 import { startApiHarness, TEST_JWT_SECRET, type ApiHarness } from '../support/api-harness';
 import { bearer } from '../support/auth-header';
+import { asBytes } from '../support/binary-body';
 
 let h: ApiHarness;
 let w: BuiltWorkshop;
@@ -64,15 +65,9 @@ describe('POST /api/documents', () => {
       version: '3',
     });
     expect(doc.sha256).toMatch(/^[0-9a-f]{64}$/);
-    const file = await request(h.app)
-      .get(`/api/documents/${doc.id}/content`)
-      .set(bearer(w.members.production))
-      .buffer(true)
-      .parse((r, cb) => {
-        const chunks: Buffer[] = [];
-        r.on('data', (c: Buffer) => chunks.push(c));
-        r.on('end', () => cb(null, Buffer.concat(chunks)));
-      });
+    const file = await asBytes(
+      request(h.app).get(`/api/documents/${doc.id}/content`).set(bearer(w.members.production)),
+    );
     expect(file.status).toBe(200);
     expect(file.headers['content-type']).toBe('application/pdf');
     expect(file.headers['content-disposition']).toBe(

@@ -1,5 +1,4 @@
 import { createHash } from 'node:crypto';
-import path from 'node:path';
 import { fileTypeFromBuffer } from 'file-type';
 import type { z } from 'zod';
 import {
@@ -15,6 +14,7 @@ import { AppError, notFound } from '../core/app-error';
 import { withIsoDates } from '../core/list-paging';
 import type { Database } from '../db/database';
 import * as repo from './documents-repository';
+import { safeFilename } from './download-name';
 
 /** The uploaded file as multer's memory storage hands it over. */
 export interface UploadedFile {
@@ -25,14 +25,6 @@ export interface UploadedFile {
 
 const fieldError = (field: string, message: string) =>
   new AppError(400, 'validation_failed', 'Some fields need attention.', { [field]: [message] });
-
-/** A file name safe for a Content-Disposition header and a download folder. */
-function safeFilename(original: string, ext: string) {
-  const base = [...path.basename(original.replace(/\\/g, '/'))]
-    .filter((c) => c !== '"' && c.charCodeAt(0) >= 0x20 && c.charCodeAt(0) !== 0x7f)
-    .join('');
-  return base.trim() || `document.${ext}`;
-}
 
 /**
  * Stores an uploaded supplier document. The type is decided from the file's first bytes, never

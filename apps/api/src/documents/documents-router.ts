@@ -12,11 +12,14 @@ import { recordId } from '../core/record-id';
 import { parse } from '../core/validate';
 import type { Database } from '../db/database';
 import * as domain from './documents-domain';
+import { attachmentDisposition, safeFilename } from './download-name';
 
 // Memory storage: the file goes straight into PostgreSQL, so nothing is left on disk when a
 // request fails. The size limit makes multer stop reading and raise LIMIT_FILE_SIZE (413).
+// Browsers send the file name as raw UTF-8; multer would read it as latin1 (é.pdf -> Ã©.pdf).
 const upload = multer({
   storage: multer.memoryStorage(),
+  defParamCharset: 'utf8',
   limits: { fileSize: DOCUMENT_MAX_BYTES, files: 1, fields: 20, fieldSize: 10_000 },
 });
 
@@ -45,14 +48,16 @@ export function documentsRouter(deps: { db: Database; authn: Authenticator }) {
   router.get('/:id/content', ...read, async (req, res) => {
     const id = recordId(req.params.id, 'That document');
     const file = await domain.getDocumentContent(db, req.user!, id);
+    // The type is the one sniffed on upload. Not res.attachment(): it would set the type again
+    // from the file name's extension, so `x.html` holding a PDF would go out as text/html.
     res.set({
       'Content-Type': file.mimeType,
       'Content-Length': String(file.sizeBytes),
-      // The type was sniffed on upload; stop the browser from second-guessing it.
+      'Content-Disposition': attachmentDisposition(safeFilename(file.filename, 'bin')),
+      // Stop the browser from second-guessing the type.
       'X-Content-Type-Options': 'nosniff',
       ETag: `"${file.sha256}"`,
     });
-    res.attachment(file.filename);
     res.end(file.content);
   });
   router.delete('/:id', ...write, async (req, res) => {
