@@ -1,5 +1,5 @@
 import { index, jsonb, pgTable, text, uuid } from 'drizzle-orm/pg-core';
-import { id, timestamps } from './columns';
+import { id, timestamps, workshopKey, workshopReference } from './columns';
 import { users } from './users';
 import { workshops } from './workshops';
 
@@ -11,12 +11,21 @@ export const auditEvents = pgTable(
     workshopId: uuid()
       .notNull()
       .references(() => workshops.id, { onDelete: 'cascade' }),
-    actorId: uuid().references(() => users.id, { onDelete: 'set null' }),
+    actorId: uuid(),
     action: text().notNull(),
     subjectType: text().notNull(),
     subjectId: text(),
     detail: jsonb().$type<Record<string, unknown>>(),
     ...timestamps,
   },
-  (t) => [index('audit_events_workshop_idx').on(t.workshopId, t.createdAt)],
+  (t) => [
+    index('audit_events_workshop_idx').on(t.workshopId, t.createdAt),
+    workshopKey('audit_events', t),
+    workshopReference(
+      'audit_events_actor_fk',
+      { workshopId: t.workshopId, column: t.actorId },
+      users,
+      'set null',
+    ),
+  ],
 );

@@ -11,7 +11,7 @@ import {
   uuid,
 } from 'drizzle-orm/pg-core';
 import { DOCUMENT_KINDS } from '@batchproof/shared';
-import { id, timestamps } from './columns';
+import { id, timestamps, workshopKey, workshopReference } from './columns';
 import { lots } from './lots';
 import { materials } from './materials';
 import { users } from './users';
@@ -35,8 +35,8 @@ export const documents = pgTable(
     workshopId: uuid()
       .notNull()
       .references(() => workshops.id, { onDelete: 'cascade' }),
-    materialId: uuid().references(() => materials.id, { onDelete: 'cascade' }),
-    lotId: uuid().references(() => lots.id, { onDelete: 'cascade' }),
+    materialId: uuid(),
+    lotId: uuid(),
     kind: documentKindEnum().notNull(),
     title: text().notNull(),
     issuedOn: date({ mode: 'string' }).notNull(),
@@ -46,12 +46,31 @@ export const documents = pgTable(
     sizeBytes: integer().notNull(),
     sha256: text().notNull(),
     content: bytea().notNull(),
-    uploadedBy: uuid().references(() => users.id, { onDelete: 'set null' }),
+    uploadedBy: uuid(),
     ...timestamps,
   },
   (t) => [
     check('documents_one_owner', sql`num_nonnulls(${t.materialId}, ${t.lotId}) = 1`),
     index('documents_material_idx').on(t.workshopId, t.materialId, t.kind),
     index('documents_lot_idx').on(t.workshopId, t.lotId),
+    workshopKey('documents', t),
+    workshopReference(
+      'documents_material_fk',
+      { workshopId: t.workshopId, column: t.materialId },
+      materials,
+      'cascade',
+    ),
+    workshopReference(
+      'documents_lot_fk',
+      { workshopId: t.workshopId, column: t.lotId },
+      lots,
+      'cascade',
+    ),
+    workshopReference(
+      'documents_uploaded_by_fk',
+      { workshopId: t.workshopId, column: t.uploadedBy },
+      users,
+      'set null',
+    ),
   ],
 );

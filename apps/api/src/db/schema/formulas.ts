@@ -12,7 +12,7 @@ import {
   uuid,
 } from 'drizzle-orm/pg-core';
 import { PRODUCT_TYPES, type EvaluationResult, type ProductProfile } from '@batchproof/shared';
-import { id, timestamps } from './columns';
+import { id, timestamps, workshopKey, workshopReference } from './columns';
 import { materials } from './materials';
 import { users } from './users';
 import { workshops } from './workshops';
@@ -40,6 +40,7 @@ export const formulas = pgTable(
   (t) => [
     index('formulas_workshop_name_idx').on(t.workshopId, t.name),
     index('formulas_workshop_updated_idx').on(t.workshopId, t.updatedAt),
+    workshopKey('formulas', t),
   ],
 );
 
@@ -54,9 +55,7 @@ export const formulaVersions = pgTable(
     workshopId: uuid()
       .notNull()
       .references(() => workshops.id, { onDelete: 'cascade' }),
-    formulaId: uuid()
-      .notNull()
-      .references(() => formulas.id, { onDelete: 'cascade' }),
+    formulaId: uuid().notNull(),
     number: integer().notNull(),
     state: versionStateEnum().notNull().default('draft'),
     profile: jsonb().$type<ProductProfile>().notNull(),
@@ -69,7 +68,7 @@ export const formulaVersions = pgTable(
     evaluationProblems: jsonb().$type<string[]>().notNull().default([]),
     evaluatedAt: timestamp({ withTimezone: true }),
     releasedAt: timestamp({ withTimezone: true }),
-    releasedBy: uuid().references(() => users.id, { onDelete: 'set null' }),
+    releasedBy: uuid(),
     overrideReason: text(),
     ...timestamps,
   },
@@ -82,6 +81,19 @@ export const formulaVersions = pgTable(
       .on(t.formulaId)
       .where(sql`${t.state} = 'released'`),
     index('formula_versions_workshop_idx').on(t.workshopId),
+    workshopKey('formula_versions', t),
+    workshopReference(
+      'formula_versions_formula_fk',
+      { workshopId: t.workshopId, column: t.formulaId },
+      formulas,
+      'cascade',
+    ),
+    workshopReference(
+      'formula_versions_released_by_fk',
+      { workshopId: t.workshopId, column: t.releasedBy },
+      users,
+      'set null',
+    ),
   ],
 );
 
@@ -93,19 +105,28 @@ export const formulaLines = pgTable(
     workshopId: uuid()
       .notNull()
       .references(() => workshops.id, { onDelete: 'cascade' }),
-    versionId: uuid()
-      .notNull()
-      .references(() => formulaVersions.id, { onDelete: 'cascade' }),
+    versionId: uuid().notNull(),
     position: integer().notNull(),
     // Restrict: a material used in a formula cannot be deleted out from under it.
-    materialId: uuid()
-      .notNull()
-      .references(() => materials.id, { onDelete: 'restrict' }),
+    materialId: uuid().notNull(),
     grams: numeric({ precision: 18, scale: 6, mode: 'number' }).notNull(),
     ...timestamps,
   },
   (t) => [
     uniqueIndex('formula_lines_position_key').on(t.versionId, t.position),
     index('formula_lines_material_idx').on(t.workshopId, t.materialId),
+    workshopKey('formula_lines', t),
+    workshopReference(
+      'formula_lines_version_fk',
+      { workshopId: t.workshopId, column: t.versionId },
+      formulaVersions,
+      'cascade',
+    ),
+    workshopReference(
+      'formula_lines_material_fk',
+      { workshopId: t.workshopId, column: t.materialId },
+      materials,
+      'restrict',
+    ),
   ],
 );

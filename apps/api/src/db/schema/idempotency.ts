@@ -1,4 +1,5 @@
 import { integer, pgTable, primaryKey, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { workshopReference } from './columns';
 import { users } from './users';
 import { workshops } from './workshops';
 
@@ -13,9 +14,7 @@ export const idempotencyKeys = pgTable(
     workshopId: uuid()
       .notNull()
       .references(() => workshops.id, { onDelete: 'cascade' }),
-    userId: uuid()
-      .notNull()
-      .references(() => users.id, { onDelete: 'cascade' }),
+    userId: uuid().notNull(),
     key: text().notNull(),
     /** SHA-256 of the method, path and body: the same key with another request is refused. */
     requestHash: text().notNull(),
@@ -24,5 +23,13 @@ export const idempotencyKeys = pgTable(
     responseBody: text(),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [primaryKey({ columns: [t.workshopId, t.userId, t.key] })],
+  (t) => [
+    primaryKey({ columns: [t.workshopId, t.userId, t.key] }),
+    workshopReference(
+      'idempotency_keys_user_fk',
+      { workshopId: t.workshopId, column: t.userId },
+      users,
+      'cascade',
+    ),
+  ],
 );

@@ -11,7 +11,7 @@ import {
   uuid,
 } from 'drizzle-orm/pg-core';
 import { LOT_UNITS } from '@batchproof/shared';
-import { id, timestamps } from './columns';
+import { id, timestamps, workshopKey, workshopReference } from './columns';
 import { materials } from './materials';
 import { workshops } from './workshops';
 
@@ -26,9 +26,7 @@ export const lots = pgTable(
       .notNull()
       .references(() => workshops.id, { onDelete: 'cascade' }),
     // Restrict: a material with stock history must not vanish from under its lots.
-    materialId: uuid()
-      .notNull()
-      .references(() => materials.id, { onDelete: 'restrict' }),
+    materialId: uuid().notNull(),
     supplierLotNumber: text().notNull(),
     quantity: numeric({ precision: 16, scale: 4, mode: 'number' }).notNull(),
     unit: lotUnitEnum().notNull(),
@@ -52,6 +50,13 @@ export const lots = pgTable(
     index('lots_material_idx').on(t.materialId, t.receivedOn),
     // Trigram index (pg_trgm, migration 0003) so "lot number contains …" avoids a full scan.
     index('lots_lot_number_trgm_idx').using('gin', sql`${t.supplierLotNumber} gin_trgm_ops`),
+    workshopKey('lots', t),
+    workshopReference(
+      'lots_material_fk',
+      { workshopId: t.workshopId, column: t.materialId },
+      materials,
+      'restrict',
+    ),
   ],
 );
 
@@ -66,9 +71,7 @@ export const lotConsumptions = pgTable(
     workshopId: uuid()
       .notNull()
       .references(() => workshops.id, { onDelete: 'cascade' }),
-    lotId: uuid()
-      .notNull()
-      .references(() => lots.id, { onDelete: 'restrict' }),
+    lotId: uuid().notNull(),
     quantity: numeric({ precision: 16, scale: 4, mode: 'number' }).notNull(),
     /** The batch that consumed it; a plain id until batch records land. */
     batchId: uuid(),
@@ -79,5 +82,12 @@ export const lotConsumptions = pgTable(
   (t) => [
     index('lot_consumptions_lot_idx').on(t.lotId),
     index('lot_consumptions_workshop_idx').on(t.workshopId),
+    workshopKey('lot_consumptions', t),
+    workshopReference(
+      'lot_consumptions_lot_fk',
+      { workshopId: t.workshopId, column: t.lotId },
+      lots,
+      'restrict',
+    ),
   ],
 );

@@ -8,7 +8,7 @@ import {
   type Material,
   type WeightPerVolume,
 } from '@batchproof/shared';
-import { id, timestamps } from './columns';
+import { id, timestamps, workshopKey, workshopReference } from './columns';
 import { suppliers } from './suppliers';
 import { workshops } from './workshops';
 
@@ -26,7 +26,7 @@ export const materials = pgTable(
     workshopId: uuid()
       .notNull()
       .references(() => workshops.id, { onDelete: 'cascade' }),
-    supplierId: uuid().references(() => suppliers.id, { onDelete: 'set null' }),
+    supplierId: uuid(),
     tradeName: text().notNull(),
     inci: text().notNull(),
     usName: text(),
@@ -58,5 +58,12 @@ export const materials = pgTable(
     // Trigram indexes (pg_trgm, migration 0003) for the list's "contains" filter.
     index('materials_trade_name_trgm_idx').using('gin', sql`${t.tradeName} gin_trgm_ops`),
     index('materials_inci_trgm_idx').using('gin', sql`${t.inci} gin_trgm_ops`),
+    workshopKey('materials', t),
+    workshopReference(
+      'materials_supplier_fk',
+      { workshopId: t.workshopId, column: t.supplierId },
+      suppliers,
+      'set null',
+    ),
   ],
 );

@@ -1,5 +1,5 @@
 import { index, pgTable, text, uuid } from 'drizzle-orm/pg-core';
-import { id, timestamps } from './columns';
+import { id, timestamps, workshopKey } from './columns';
 import { workshops } from './workshops';
 
 /** A company the workshop buys materials from. */
@@ -20,5 +20,6 @@ export const suppliers = pgTable(
   (t) => [
     index('suppliers_workshop_name_idx').on(t.workshopId, t.name),
     index('suppliers_workshop_created_idx').on(t.workshopId, t.createdAt),
+    workshopKey('suppliers', t),
   ],
 );

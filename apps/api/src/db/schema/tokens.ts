@@ -1,5 +1,5 @@
 import { index, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
-import { id, timestamps } from './columns';
+import { id, timestamps, workshopKey, workshopReference } from './columns';
 import { roleEnum, users } from './users';
 import { workshops } from './workshops';
 
@@ -14,28 +14,47 @@ export const invitations = pgTable(
     email: text().notNull(),
     role: roleEnum().notNull(),
     tokenHash: text().notNull().unique(),
-    invitedBy: uuid().references(() => users.id, { onDelete: 'set null' }),
+    invitedBy: uuid(),
     expiresAt: timestamp({ withTimezone: true }).notNull(),
     acceptedAt: timestamp({ withTimezone: true }),
     ...timestamps,
   },
-  (t) => [index('invitations_workshop_idx').on(t.workshopId)],
+  (t) => [
+    index('invitations_workshop_idx').on(t.workshopId),
+    workshopKey('invitations', t),
+    workshopReference(
+      'invitations_invited_by_fk',
+      { workshopId: t.workshopId, column: t.invitedBy },
+      users,
+      'set null',
+    ),
+  ],
 );
 
 /** One-time password-reset links; only the token's SHA-256 is kept. */
-export const passwordResets = pgTable('password_resets', {
-  id: id(),
-  workshopId: uuid()
-    .notNull()
-    .references(() => workshops.id, { onDelete: 'cascade' }),
-  userId: uuid()
-    .notNull()
-    .references(() => users.id, { onDelete: 'cascade' }),
-  tokenHash: text().notNull().unique(),
-  expiresAt: timestamp({ withTimezone: true }).notNull(),
-  usedAt: timestamp({ withTimezone: true }),
-  ...timestamps,
-});
+export const passwordResets = pgTable(
+  'password_resets',
+  {
+    id: id(),
+    workshopId: uuid()
+      .notNull()
+      .references(() => workshops.id, { onDelete: 'cascade' }),
+    userId: uuid().notNull(),
+    tokenHash: text().notNull().unique(),
+    expiresAt: timestamp({ withTimezone: true }).notNull(),
+    usedAt: timestamp({ withTimezone: true }),
+    ...timestamps,
+  },
+  (t) => [
+    workshopKey('password_resets', t),
+    workshopReference(
+      'password_resets_user_fk',
+      { workshopId: t.workshopId, column: t.userId },
+      users,
+      'cascade',
+    ),
+  ],
+);
 
 /**
  * Refresh sessions: a long-lived opaque token held in an httpOnly cookie, rotated on every
@@ -49,9 +68,7 @@ export const refreshSessions = pgTable(
     workshopId: uuid()
       .notNull()
       .references(() => workshops.id, { onDelete: 'cascade' }),
-    userId: uuid()
-      .notNull()
-      .references(() => users.id, { onDelete: 'cascade' }),
+    userId: uuid().notNull(),
     familyId: uuid().notNull().defaultRandom(),
     tokenHash: text().notNull().unique(),
     expiresAt: timestamp({ withTimezone: true }).notNull(),
@@ -61,6 +78,13 @@ export const refreshSessions = pgTable(
   (t) => [
     index('refresh_sessions_user_idx').on(t.userId),
     index('refresh_sessions_family_idx').on(t.familyId),
+    workshopKey('refresh_sessions', t),
+    workshopReference(
+      'refresh_sessions_user_fk',
+      { workshopId: t.workshopId, column: t.userId },
+      users,
+      'cascade',
+    ),
   ],
 );
 

@@ -1,6 +1,6 @@
 import { index, integer, pgEnum, pgTable, text, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { ROLES } from '@batchproof/shared';
-import { id, timestamps } from './columns';
+import { id, timestamps, workshopKey } from './columns';
 import { workshops } from './workshops';
 
 export const roleEnum = pgEnum('member_role', ROLES);
@@ -25,5 +25,9 @@ export const users = pgTable(
     tokenVersion: integer().notNull().default(0),
     ...timestamps,
   },
-  (t) => [uniqueIndex('users_email_key').on(t.email), index('users_workshop_idx').on(t.workshopId)],
+  (t) => [
+    uniqueIndex('users_email_key').on(t.email),
+    index('users_workshop_idx').on(t.workshopId),
+    workshopKey('users', t),
+  ],
 );
