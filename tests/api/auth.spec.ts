@@ -19,7 +19,7 @@ afterAll(() => h.close());
 const refreshCookie = (res: request.Response) =>
   ([] as string[]).concat(res.headers['set-cookie'] ?? []).find((c) => c.startsWith('bp_refresh='));
 
-/** The token of the first link in the newest mail to `email` after `path` (e.g. '/confirm-sign-up/'). */
+/** The token in the first mail to `email`, from its link's part after `path` (e.g. '/confirm-sign-up/'). */
 async function linkToken(email: string, path: string) {
   return decodeURIComponent(firstLink(await h.mail.waitFor(email)).split(path)[1]!);
 }

@@ -1,9 +1,7 @@
 import request from 'supertest';
 import { afterEach, describe, expect, it } from 'vitest';
-import { uniqueEmail } from '../support/workshop-builder';
-import { startApiHarness, type ApiHarness } from '../support/api-harness';
-import { BUILT_PASSWORD, buildWorkshop } from '../support/workshop-builder';
-import { TEST_JWT_SECRET } from '../support/api-harness';
+import { startApiHarness, TEST_JWT_SECRET, type ApiHarness } from '../support/api-harness';
+import { BUILT_PASSWORD, buildWorkshop, uniqueEmail } from '../support/workshop-builder';
 
 let h: ApiHarness | undefined;
 afterEach(async () => {
