@@ -1,6 +1,6 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { materialPageSchema, materialSchema } from '@batchproof/shared';
+import { materialPageSchema, materialSchema, materialsByIdSchema } from '@batchproof/shared';
 import {
   aFragrance,
   aMaterial,
@@ -164,6 +164,38 @@ describe('GET /api/materials', () => {
     expect(page.items.map((m) => m.tradeName)).toEqual(['Shea Butter', 'Sweet Almond Oil']);
     expect(page.total).toBe(4);
     expect((await get('q=100%25')).total).toBe(0);
+  });
+
+  it('with ids=a,b,c answers the full records of those materials in one request', async () => {
+    const ws = await buildWorkshop(h.handle.db, TEST_JWT_SECRET, { roles: ['viewer'] });
+    const other = await buildWorkshop(h.handle.db, TEST_JWT_SECRET, { roles: ['viewer'] });
+    const blend = await buildMaterial(h.handle.db, ws.id, anUltramarineBlend());
+    const fragrance = await buildMaterial(h.handle.db, ws.id, aFragrance());
+    await buildMaterial(h.handle.db, ws.id, aMaterial({ tradeName: 'Not asked for' }));
+    const theirs = await buildMaterial(h.handle.db, other.id, aMaterial());
+    const res = await request(h.app)
+      .get(`/api/materials?ids=${blend.id},${fragrance.id},${blend.id},${theirs.id}`)
+      .set(bearer(ws.members.viewer));
+    expect(res.status).toBe(200);
+    const { items } = materialsByIdSchema.parse(res.body);
+    // Each asked-for material once, with what the live check reads; another workshop's is left out.
+    expect(items.map((m) => m.id).sort()).toEqual([blend.id, fragrance.id].sort());
+    expect(items.find((m) => m.id === blend.id)!.components).toHaveLength(3);
+    expect(items.find((m) => m.id === fragrance.id)!.ifraCertificate).not.toBeNull();
+  });
+
+  it('with ids that are not record ids, or too many of them, responds 400 with fieldErrors.ids', async () => {
+    const get = (ids: string) =>
+      request(h.app).get(`/api/materials?ids=${ids}`).set(bearer(w.members.viewer));
+    for (const ids of [
+      '',
+      'not-an-id',
+      Array.from({ length: 201 }, () => crypto.randomUUID()).join(','),
+    ]) {
+      const res = await get(ids);
+      expect(res.status).toBe(400);
+      expect(res.body.error.fieldErrors.ids).toBeDefined();
+    }
   });
 
   it('with an unknown sort key responds 400 with fieldErrors.sort', async () => {

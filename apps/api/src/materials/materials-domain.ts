@@ -3,6 +3,7 @@ import {
   type Material,
   type MaterialFields,
   type MaterialListQuery,
+  type MaterialsById,
 } from '@batchproof/shared';
 import type { AuthUser } from '../auth/authenticate';
 import { AppError, conflict, notFound } from '../core/app-error';
@@ -29,6 +30,20 @@ export async function getMaterial(db: Database, actor: AuthUser, id: string) {
   const row = await repo.findMaterial(db, actor.workshopId, id);
   if (!row) throw notFound('That material');
   return toMaterial(row);
+}
+
+/**
+ * The full records of those of `ids` that are the caller's workshop's materials. An id that is
+ * not (removed, or another workshop's) is left out, never an error, so one stale id does not
+ * spoil the rest.
+ */
+export async function getMaterials(
+  db: Database,
+  actor: AuthUser,
+  ids: readonly string[],
+): Promise<MaterialsById> {
+  const rows = await repo.findMaterials(db, actor.workshopId, ids);
+  return { items: rows.map(toMaterial) };
 }
 
 /** A supplier id from another workshop is a bad field, not a leak: say only that it's unknown. */

@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import {
   materialCreateSchema,
+  materialIdsQuerySchema,
   materialListQuerySchema,
   materialUpdateSchema,
   ROLE_SETS,
@@ -21,6 +22,12 @@ export function materialsRouter(deps: { db: Database; authn: Authenticator }) {
   const write = authn.allow(ROLE_SETS.writers);
 
   router.get('/', ...read, async (req, res) => {
+    // `?ids=a,b,c` reads the full records of named materials (a formula's lines) in one request.
+    if (req.query['ids'] !== undefined) {
+      const { ids } = parse(materialIdsQuerySchema, req.query);
+      res.json(await domain.getMaterials(db, req.user!, ids));
+      return;
+    }
     res.json(await domain.listMaterials(db, req.user!, parse(materialListQuerySchema, req.query)));
   });
   // The CSV routes have fixed paths, so they go before `/:id`.

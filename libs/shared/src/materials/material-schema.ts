@@ -201,3 +201,31 @@ export const materialSummarySchema = materialSchema.pick({
 export type MaterialSummary = z.infer<typeof materialSummarySchema>;
 export const materialPageSchema = pageSchema(materialSummarySchema);
 export type MaterialPage = z.infer<typeof materialPageSchema>;
+
+/** Most ids one `GET /api/materials?ids=` names: as many as a formula has lines. */
+export const MAX_MATERIAL_IDS = 200;
+const materialId = recordIdSchema('material');
+
+/**
+ * Query of `GET /api/materials?ids=a,b,c`: the full records of the named materials in one request
+ * (a formula's lines), in place of one request per material. Repeated ids count once.
+ */
+export const materialIdsQuerySchema = z.object({
+  ids: z
+    .string({ error: 'List material ids separated by commas' })
+    .transform((text) => [...new Set(text.split(',').map((id) => id.trim()))])
+    .pipe(
+      z
+        .array(z.string())
+        .max(MAX_MATERIAL_IDS, { error: `Ask for at most ${MAX_MATERIAL_IDS} materials at once` })
+        // One message on `ids` itself rather than one per position: the query is one field.
+        .refine((ids) => ids.every((id) => materialId.safeParse(id).success), {
+          error: 'Name each material by its id, separated by commas',
+        }),
+    ),
+});
+export type MaterialIdsQuery = z.output<typeof materialIdsQuerySchema>;
+
+/** The answer to `GET /api/materials?ids=`: those of the named materials the workshop has. */
+export const materialsByIdSchema = z.object({ items: z.array(materialSchema) });
+export type MaterialsById = z.infer<typeof materialsByIdSchema>;

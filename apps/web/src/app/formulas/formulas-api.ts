@@ -13,8 +13,9 @@ import {
   type FormulaVersionInput,
   formulaVersionSchema,
   type Material,
+  MAX_MATERIAL_IDS,
   materialPageSchema,
-  materialSchema,
+  materialsByIdSchema,
   type ReleaseRequest,
   type ScaleRequest,
   scaledVersionSchema,
@@ -119,34 +120,57 @@ export class FormulasApi {
 
   /**
    * The full records (blend components, certificates, weights per volume) of the materials in
-   * `ids`, keyed by id: what the live check needs. Each id is asked for once per page load, and
-   * read again from the cache when one of them is saved in the materials screens.
+   * `ids`, keyed by id: what the live check needs. The ids not cached yet are asked for in one
+   * request, each once per page load, and read again from the cache when one of them is saved in
+   * the materials screens.
    */
   materials(ids: Signal<readonly string[]>) {
     return rxResource({
       params: () => ({ ids: ids(), revision: this.cacheRevision() }),
-      stream: ({ params }) =>
-        params.ids.length === 0
-          ? of(new Map<string, Material>())
-          : forkJoin(params.ids.map((id) => this.material(id))).pipe(
-              map((list) => new Map(list.map((m) => [m.id, m]))),
-            ),
+      stream: ({ params }) => {
+        if (params.ids.length === 0) return of(new Map<string, Material>());
+        this.readUncached(params.ids);
+        return forkJoin(params.ids.map((id) => this.materialCache.get(id)!)).pipe(
+          map((list) => new Map(list.map((m) => [m.id, m]))),
+        );
+      },
     });
   }
 
   /** One material's full record, cached for the life of the app (a save here replaces it). */
   material(id: string): Observable<Material> {
-    let cached = this.materialCache.get(id);
-    if (!cached) {
-      cached = this.http.get<unknown>(`/api/materials/${enc(id)}`).pipe(
-        map((body) => materialSchema.parse(body)),
-        shareReplay({ bufferSize: 1, refCount: false }),
-      );
-      this.materialCache.set(id, cached);
-      // A failed read is not cached, so the next look tries again.
-      cached.subscribe({ error: () => this.materialCache.delete(id) });
+    this.readUncached([id]);
+    return this.materialCache.get(id)!;
+  }
+
+  /**
+   * Caches a read of every id in `ids` not cached yet: one `GET /api/materials?ids=…` for them
+   * all (in chunks of the most the API takes), in place of one request per material.
+   */
+  private readUncached(ids: readonly string[]) {
+    const missing = [...new Set(ids)].filter((id) => !this.materialCache.has(id));
+    for (let i = 0; i < missing.length; i += MAX_MATERIAL_IDS) {
+      const chunk = missing.slice(i, i + MAX_MATERIAL_IDS);
+      const found = this.http
+        .get<unknown>('/api/materials', { params: { ids: chunk.join(',') } })
+        .pipe(
+          map((body) => new Map(materialsByIdSchema.parse(body).items.map((m) => [m.id, m]))),
+          shareReplay({ bufferSize: 1, refCount: false }),
+        );
+      for (const id of chunk) {
+        const one = found.pipe(
+          map((byId) => {
+            const material = byId.get(id);
+            if (!material) throw new Error('That material is not in this workshop.');
+            return material;
+          }),
+          shareReplay({ bufferSize: 1, refCount: false }),
+        );
+        this.materialCache.set(id, one);
+        // A failed or missing read is not cached, so the next look tries again.
+        one.subscribe({ error: () => this.materialCache.delete(id) });
+      }
     }
-    return cached;
   }
 
   /** Creates a formula with its first draft; `key` makes a retried submission create it once. */

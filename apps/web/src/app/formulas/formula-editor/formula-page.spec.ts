@@ -3,6 +3,7 @@ import { MatButtonToggleHarness } from '@angular/material/button-toggle/testing'
 import { MatFormFieldHarness } from '@angular/material/form-field/testing';
 import { MatInputHarness } from '@angular/material/input/testing';
 import { MatSelectHarness } from '@angular/material/select/testing';
+import type { HttpRequest } from '@angular/common/http';
 import { TestBed } from '@angular/core/testing';
 import type { ComplianceFinding, ErrorEnvelope, Material, Role } from '@batchproof/shared';
 import { MaterialsApi } from '../../materials/materials-api';
@@ -29,7 +30,7 @@ const DRAFT = aVersion([
 
 type Page = Awaited<ReturnType<typeof openAs>>;
 
-/** Opens version 1 and answers its reads: formula, version, then each line's material. */
+/** Opens version 1 and answers its reads: formula, version, then its lines' materials. */
 async function openDraft(role: Role = 'formulator', version = DRAFT): Promise<Page> {
   const page = await openAs(role, ROUTES, URL, FormulaPage);
   page.backend.expectOne(`/api/formulas/${FORMULA_ID}`).flush(aFormula([version]));
@@ -39,11 +40,20 @@ async function openDraft(role: Role = 'formulator', version = DRAFT): Promise<Pa
   return page;
 }
 
+/** Answers the one read of the lines' materials, which names every one of them. */
 async function flushMaterials(page: Page, materials: Material[]) {
-  for (const m of materials) {
-    (await nextRequest(page.backend, (r) => r.url === `/api/materials/${m.id}`)).flush(m);
-  }
+  const read = await nextRequest(
+    page.backend,
+    (r) => r.method === 'GET' && r.url === '/api/materials',
+  );
+  expect(read.request.params.get('ids')!.split(',').sort()).toEqual(
+    materials.map((m) => m.id).sort(),
+  );
+  read.flush({ items: materials });
 }
+
+const isMaterialsRead = (r: HttpRequest<unknown>) =>
+  r.method === 'GET' && r.url === '/api/materials' && r.params.has('ids');
 
 const squash = (t: string | null | undefined) => (t ?? '').replace(/\s+/g, ' ').trim();
 const text = (page: Page, selector: string) => squash(page.el.querySelector(selector)?.textContent);
@@ -237,6 +247,7 @@ describe('FormulaPage', () => {
     await page.harness.fixture.whenStable();
 
     // The saved record replaces the editor's copy: no second read, and the live check follows it.
+    page.backend.expectNone(isMaterialsRead);
     page.backend.expectNone((r) => r.method === 'GET' && r.url === `/api/materials/${mica.id}`);
     expect(us()).toContain('Ultramarines');
     expect(us()).toContain('21 CFR 73.2725');
