@@ -1,10 +1,13 @@
+import { setImmediate } from 'node:timers/promises';
 import Papa from 'papaparse';
 import {
   fieldErrorsFromZod,
   MATERIAL_CSV_COLUMNS,
   MATERIAL_CSV_JSON_COLUMNS,
   MATERIAL_CSV_LIST_SEPARATOR,
+  MATERIAL_CSV_MAX_JSON_CELL,
   MATERIAL_CSV_MAX_ROWS,
+  MATERIAL_CSV_PREVIEW_ROWS,
   MATERIAL_CSV_NO,
   MATERIAL_CSV_REQUIRED,
   MATERIAL_CSV_YES,
@@ -12,6 +15,7 @@ import {
   type Material,
   type MaterialFields,
   type MaterialImportPreview,
+  type MaterialImportRow,
 } from '@batchproof/shared';
 import type { AuthUser } from '../auth/authenticate';
 import { AppError } from '../core/app-error';
@@ -33,73 +37,165 @@ function readYesNo(value: string): boolean | undefined {
 // Spreadsheet formula guard: export prefixes risky cells with an apostrophe; import drops it.
 const unescapeFormula = (v: string) => (/^'[=+\-@\t\r]/.test(v) ? v.slice(1) : v);
 
-/** Parses the CSV text and checks every row; nothing is written. */
-export async function checkMaterialsCsv(db: Database, actor: AuthUser, text: string) {
-  const parsed = Papa.parse<Cells>(text.replace(/^\uFEFF/, ''), {
+/** Most file-level parse messages listed; a broken file would otherwise give one per row. */
+const MAX_PARSE_MESSAGES = 20;
+/** Most messages kept for one row, and characters kept of a message or an echoed cell. */
+const MAX_ROW_MESSAGES = 10;
+const clip = (text: string, max: number) =>
+  text.length > max ? `${text.slice(0, max - 1)}…` : text;
+/** Rows checked between two yields to the event loop, so other requests are answered meanwhile. */
+const ROWS_PER_TURN = 250;
+/** Rows per insert statement: PostgreSQL takes at most 65,535 parameters in one. */
+const ROWS_PER_INSERT = 500;
+
+/**
+ * The file's header and data rows. Parsing stops after {@link MATERIAL_CSV_MAX_ROWS} rows, with
+ * `more` set when another follows, so an oversized file costs no more than a full one.
+ */
+function readRows(text: string) {
+  const source = text.replace(/^\uFEFF/, '');
+  const header = Papa.parse<string[]>(source, { preview: 1 }).data[0] ?? [];
+  const rows: Cells[] = [];
+  const problems: string[] = [];
+  let more = false;
+  Papa.parse<Cells>(source, {
     header: true,
     skipEmptyLines: 'greedy',
     transformHeader: (h) => h.trim(),
+    step: (row, parser) => {
+      if (rows.length === MATERIAL_CSV_MAX_ROWS) {
+        more = true;
+        parser.abort();
+        return;
+      }
+      rows.push(row.data);
+      for (const e of row.errors) {
+        if (e.type !== 'FieldMismatch') problems.push(`Line ${rows.length + 1}: ${e.message}`);
+      }
+    },
   });
+  return { headers: header.map((h) => h.trim()), rows, problems, more };
+}
+
+/** Problems with the file as a whole: columns, unreadable lines, size. */
+function fileProblems(headers: string[], problems: string[]) {
   const fileErrors: string[] = [];
-  const headers = parsed.meta.fields ?? [];
   const known = new Set<string>(MATERIAL_CSV_COLUMNS);
   for (const h of MATERIAL_CSV_REQUIRED) {
     if (!headers.includes(h)) fileErrors.push(`The file has no "${h}" column`);
   }
   for (const h of headers) {
-    if (!known.has(h))
-      fileErrors.push(`Unknown column "${h}"; expected: ${MATERIAL_CSV_COLUMNS.join(', ')}`);
+    if (!known.has(h)) {
+      fileErrors.push(
+        `Unknown column "${clip(h, 100)}"; expected: ${MATERIAL_CSV_COLUMNS.join(', ')}`,
+      );
+    }
   }
-  for (const e of parsed.errors.filter((e) => e.type !== 'FieldMismatch')) {
-    fileErrors.push(`Line ${(e.row ?? 0) + 2}: ${e.message}`);
+  fileErrors.push(...problems.slice(0, MAX_PARSE_MESSAGES));
+  if (problems.length > MAX_PARSE_MESSAGES) {
+    fileErrors.push(`…and ${problems.length - MAX_PARSE_MESSAGES} more lines that cannot be read`);
   }
-  if (parsed.data.length === 0) fileErrors.push('The file has no data rows');
-  if (parsed.data.length > MATERIAL_CSV_MAX_ROWS) {
-    fileErrors.push(`Import at most ${MATERIAL_CSV_MAX_ROWS} rows at a time`);
+  return fileErrors;
+}
+
+/** One row's cells as the material schema's input, and the errors found reading them. */
+function rowInput(cells: Cells, supplierIds: Map<string, string>) {
+  const errors: Record<string, string[]> = {};
+  const cell = (k: string) => unescapeFormula((cells[k] ?? '').trim());
+  const input: Record<string, unknown> = {};
+  for (const k of [
+    'tradeName',
+    'inci',
+    'usName',
+    'cas',
+    'ec',
+    'category',
+    'colourIndex',
+    'notes',
+  ]) {
+    input[k] = cell(k);
   }
+  input['functions'] = cell('functions')
+    .split(MATERIAL_CSV_LIST_SEPARATOR)
+    .map((f) => f.trim())
+    .filter(Boolean);
+  const nano = readYesNo(cell('nano'));
+  if (nano === undefined)
+    errors['nano'] = ['Write yes or no (or true or false), or leave it blank'];
+  else input['nano'] = nano;
+  for (const k of MATERIAL_CSV_JSON_COLUMNS) {
+    const raw = cell(k);
+    if (!raw) continue;
+    if (raw.length > MATERIAL_CSV_MAX_JSON_CELL) {
+      errors[k] = [`This cell is too long (${MATERIAL_CSV_MAX_JSON_CELL} characters at most)`];
+      continue;
+    }
+    try {
+      input[k] = JSON.parse(raw);
+    } catch {
+      // SyntaxError from JSON.parse: report it on the cell instead of failing the file.
+      errors[k] = ['This cell must hold JSON, as written by the export'];
+    }
+  }
+  const supplier = cell('supplier');
+  if (supplier) {
+    const id = supplierIds.get(supplier.toLowerCase());
+    if (id) input['supplierId'] = id;
+    else {
+      errors['supplier'] = [
+        `No supplier named "${clip(supplier, 100)}" in this workshop; add it first`,
+      ];
+    }
+  }
+  return { input, errors, tradeName: cell('tradeName'), category: cell('category') };
+}
+
+/** At most {@link MAX_ROW_MESSAGES} messages for a row, each of a readable length. */
+function boundedErrors(errors: Record<string, string[]>) {
+  const out: Record<string, string[]> = {};
+  let left = MAX_ROW_MESSAGES;
+  for (const [field, messages] of Object.entries(errors)) {
+    if (left === 0) break;
+    const kept = messages.slice(0, left).map((m) => clip(m, 300));
+    out[clip(field, 100)] = kept;
+    left -= kept.length;
+  }
+  return out;
+}
+
+/**
+ * The rows a preview sends back: those needing attention first, then ready ones, at most
+ * {@link MATERIAL_CSV_PREVIEW_ROWS}, in line order.
+ */
+function shownRows(rows: MaterialImportRow[]) {
+  const invalid = rows.filter((r) => !r.valid);
+  const valid = rows.filter((r) => r.valid);
+  const shown = [...invalid, ...valid].slice(0, MATERIAL_CSV_PREVIEW_ROWS);
+  return shown.sort((a, b) => a.line - b.line);
+}
+
+/**
+ * Parses the CSV text and checks every row; nothing is written. A file over the row cap is
+ * refused as a whole without checking its rows; the answer stays small whatever the file holds.
+ */
+export async function checkMaterialsCsv(db: Database, actor: AuthUser, text: string) {
+  const { headers, rows: cellRows, problems, more } = readRows(text);
+  const fileErrors = fileProblems(headers, problems);
+  if (more) {
+    fileErrors.push(
+      `The file has more than ${MATERIAL_CSV_MAX_ROWS} rows; import at most ${MATERIAL_CSV_MAX_ROWS} at a time`,
+    );
+    const preview: MaterialImportPreview = { fileErrors, rows: [], validCount: 0, errorCount: 0 };
+    return { preview, valid: [] as MaterialFields[] };
+  }
+  if (cellRows.length === 0) fileErrors.push('The file has no data rows');
 
   const supplierIds = await suppliersByName(db, actor.workshopId);
   const valid: MaterialFields[] = [];
-  const rows: MaterialImportPreview['rows'] = parsed.data.map((cells, index) => {
-    const errors: Record<string, string[]> = {};
-    const cell = (k: string) => unescapeFormula((cells[k] ?? '').trim());
-    const input: Record<string, unknown> = {};
-    for (const k of [
-      'tradeName',
-      'inci',
-      'usName',
-      'cas',
-      'ec',
-      'category',
-      'colourIndex',
-      'notes',
-    ]) {
-      input[k] = cell(k);
-    }
-    input['functions'] = cell('functions')
-      .split(MATERIAL_CSV_LIST_SEPARATOR)
-      .map((f) => f.trim())
-      .filter(Boolean);
-    const nano = readYesNo(cell('nano'));
-    if (nano === undefined)
-      errors['nano'] = ['Write yes or no (or true or false), or leave it blank'];
-    else input['nano'] = nano;
-    for (const k of MATERIAL_CSV_JSON_COLUMNS) {
-      const raw = cell(k);
-      if (!raw) continue;
-      try {
-        input[k] = JSON.parse(raw);
-      } catch {
-        // SyntaxError from JSON.parse: report it on the cell instead of failing the file.
-        errors[k] = ['This cell must hold JSON, as written by the export'];
-      }
-    }
-    const supplier = cell('supplier');
-    if (supplier) {
-      const id = supplierIds.get(supplier.toLowerCase());
-      if (id) input['supplierId'] = id;
-      else errors['supplier'] = [`No supplier named "${supplier}" in this workshop; add it first`];
-    }
+  const rows: MaterialImportRow[] = [];
+  for (const [index, cells] of cellRows.entries()) {
+    if (index > 0 && index % ROWS_PER_TURN === 0) await setImmediate();
+    const { input, errors, tradeName, category } = rowInput(cells, supplierIds);
     const result = materialCreateSchema.safeParse(input);
     if (!result.success) {
       for (const [k, msgs] of Object.entries(fieldErrorsFromZod(result.error))) {
@@ -108,16 +204,21 @@ export async function checkMaterialsCsv(db: Database, actor: AuthUser, text: str
     }
     const ok = Object.keys(errors).length === 0 && result.success;
     if (ok) valid.push(result.data);
-    return {
+    rows.push({
       line: index + 2,
-      tradeName: cell('tradeName'),
-      category: cell('category'),
+      tradeName: clip(tradeName, 200),
+      category: clip(category, 100),
       valid: ok,
-      errors,
-    };
-  });
+      errors: boundedErrors(errors),
+    });
+  }
   const errorCount = rows.filter((r) => !r.valid).length;
-  const preview: MaterialImportPreview = { fileErrors, rows, validCount: valid.length, errorCount };
+  const preview: MaterialImportPreview = {
+    fileErrors,
+    rows: shownRows(rows),
+    validCount: valid.length,
+    errorCount,
+  };
   return { preview, valid };
 }
 
@@ -137,11 +238,21 @@ export async function importMaterialsCsv(db: Database, actor: AuthUser, text: st
     throw new AppError(
       400,
       'validation_failed',
-      `${preview.errorCount} row(s) need attention; nothing was imported.`,
+      preview.errorCount > 0
+        ? `${preview.errorCount} row(s) need attention; nothing was imported.`
+        : 'The file cannot be imported as it stands; nothing was imported.',
       fieldErrors,
     );
   }
-  const ids = await db.transaction((tx) => repo.insertMaterials(tx, actor.workshopId, valid));
+  const ids = await db.transaction(async (tx) => {
+    const all: string[] = [];
+    for (let i = 0; i < valid.length; i += ROWS_PER_INSERT) {
+      all.push(
+        ...(await repo.insertMaterials(tx, actor.workshopId, valid.slice(i, i + ROWS_PER_INSERT))),
+      );
+    }
+    return all;
+  });
   return { imported: ids.length, ids };
 }
 

@@ -34,8 +34,15 @@ export const MATERIAL_CSV_YES = ['yes', 'true'] as const;
 export const MATERIAL_CSV_NO = ['no', 'false'] as const;
 /** Separator of the functions column: `humectant; skin conditioning`. */
 export const MATERIAL_CSV_LIST_SEPARATOR = ';';
-/** Most rows one import takes. */
+/** Most rows one import takes; parsing stops at the next row, however long the file. */
 export const MATERIAL_CSV_MAX_ROWS = 5000;
+/**
+ * Most rows a preview sends back (those needing attention first, then ready ones, in line
+ * order); `validCount` and `errorCount` always count every row. Keeps the answer small.
+ */
+export const MATERIAL_CSV_PREVIEW_ROWS = 200;
+/** Most characters of a JSON cell: a full certificate fits many times over. */
+export const MATERIAL_CSV_MAX_JSON_CELL = 65_536;
 
 /** One data row of an import file, checked. */
 export const materialImportRowSchema = z.object({
@@ -50,7 +57,10 @@ export const materialImportRowSchema = z.object({
 });
 export type MaterialImportRow = z.infer<typeof materialImportRowSchema>;
 
-/** What `POST /api/materials/import/preview` answers: every row with its errors. */
+/**
+ * What `POST /api/materials/import/preview` answers: the file's problems, the counts of every
+ * row, and up to {@link MATERIAL_CSV_PREVIEW_ROWS} rows with their errors.
+ */
 export const materialImportPreviewSchema = z.object({
   /** Problems with the file as a whole (missing columns, unreadable CSV). */
   fileErrors: z.array(z.string()),
