@@ -22,6 +22,11 @@ export const routes: Routes = [
       { path: 'suppliers', loadChildren: () => import('./suppliers/suppliers.routes') },
       { path: 'lots', loadChildren: () => import('./lots/lots.routes') },
       { path: 'reference', loadChildren: () => import('./reference-lists/reference-lists.routes') },
+      {
+        path: 'not-open',
+        title: 'Not open to your role · Batchproof',
+        loadComponent: () => import('./auth/not-open-page/not-open-page'),
+      },
     ],
   },
   { path: '**', redirectTo: '' },

@@ -1,4 +1,8 @@
-import { addDays as addCalendarDays, calendarDayOf } from '@batchproof/shared';
+import {
+  addDays as addCalendarDays,
+  ATTENTION_EXPIRY_DAYS,
+  calendarDayOf,
+} from '@batchproof/shared';
 
 /**
  * How close to its expiry date a lot counts as expiring soon.
@@ -19,6 +23,11 @@ export const EXPIRY_FLAGS: Record<'soon' | 'expired', { word: string; icon: stri
 export const EXPIRY_FILTERS = [
   { value: 'expired', label: 'Already expired' },
   { value: '30', label: 'Expired or expiring within 30 days' },
+  // The home page's "expiring" rows link here with this window.
+  {
+    value: String(ATTENTION_EXPIRY_DAYS),
+    label: `Expired or expiring within ${ATTENTION_EXPIRY_DAYS} days`,
+  },
   { value: '90', label: 'Expired or expiring within 90 days' },
 ] as const;
 

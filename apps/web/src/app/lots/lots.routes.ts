@@ -3,8 +3,8 @@ import { ROLE_SETS } from '@batchproof/shared';
 import { roleGuard } from '../auth/role-guard';
 
 /**
- * Goods-in: the lots list, a new delivery and one lot. Members read; owners and formulators
- * write; the assessor has no access.
+ * Goods-in: the lots list, a new delivery and one lot. Members read; owners, formulators and
+ * production record deliveries; the assessor has no access.
  */
 export default [
   {
@@ -19,7 +19,7 @@ export default [
       {
         path: 'new',
         title: 'Record goods-in · Batchproof',
-        canActivate: [roleGuard(ROLE_SETS.writers)],
+        canActivate: [roleGuard(ROLE_SETS.goodsIn)],
         loadComponent: () => import('./lot-page/lot-page'),
       },
       {

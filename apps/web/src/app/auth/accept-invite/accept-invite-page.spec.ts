@@ -8,6 +8,7 @@ import { MatFormFieldHarness } from '@angular/material/form-field/testing';
 import { MatInputHarness } from '@angular/material/input/testing';
 import { provideRouter, Router, withComponentInputBinding } from '@angular/router';
 import { RouterTestingHarness } from '@angular/router/testing';
+import { ROLE_DESCRIPTIONS } from '@batchproof/shared';
 import { Session } from '../session';
 import { errorInterceptor } from '../../http/error-interceptor';
 import AcceptInvitePage from './accept-invite-page';
@@ -55,7 +56,7 @@ describe('AcceptInvitePage', () => {
     const text = page.harness.routeNativeElement!.textContent!;
     expect(text).toContain('Ada Marsh invited you to Hollowmere Bathworks');
     expect(text).toContain('formulator');
-    expect(text).toContain('Materials, supplier documents, formulas and their checks, labels.');
+    expect(text).toContain(ROLE_DESCRIPTIONS.formulator);
     expect(text).toContain('tomas@example.com');
   });
 

@@ -159,8 +159,17 @@ describe('LotList', () => {
     expect(el.textContent).toContain('No goods-in recorded yet. When a delivery arrives');
   });
 
-  it('shows production no write actions', async () => {
+  it('offers production "Record goods-in": production receives deliveries', async () => {
     const { harness, backend } = await openAs('production');
+    await answerLots(backend);
+    await harness.fixture.whenStable();
+
+    const el = harness.routeNativeElement as HTMLElement;
+    expect(el.querySelector('a[href="/lots/new"]')?.textContent).toContain('Record goods-in');
+  });
+
+  it('shows a viewer no write actions', async () => {
+    const { harness, backend } = await openAs('viewer');
     await answerLots(backend);
     await harness.fixture.whenStable();
 

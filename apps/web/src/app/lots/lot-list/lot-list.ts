@@ -49,8 +49,8 @@ import { MaterialPicker } from '../material-picker/material-picker';
 })
 export default class LotList {
   private readonly session = inject(Session);
-  /** Whether the signed-in member may record and change lots. */
-  protected readonly canWrite = computed(() => this.session.hasRole(ROLE_SETS.writers));
+  /** Whether the signed-in member may record goods-in. */
+  protected readonly canRecord = computed(() => this.session.hasRole(ROLE_SETS.goodsIn));
   protected readonly expiryFilters = EXPIRY_FILTERS;
   protected readonly flags = EXPIRY_FLAGS;
   protected readonly columns = [

@@ -304,8 +304,18 @@ describe('LotPage', () => {
     expect(TestBed.inject(Router).url).toBe(`/lots/${LOT_ID}`);
   });
 
-  it('shows production the lot read-only, with no write actions', async () => {
+  it('lets production correct a lot, but not delete it', async () => {
     const page = await openAs('production', `/lots/${LOT_ID}`);
+    await answerLot(page.backend);
+    await page.harness.fixture.whenStable();
+
+    expect(await page.value('Quantity received')).toBe('5000');
+    expect(page.text()).toContain('Save changes');
+    expect(page.text()).not.toContain('Delete lot');
+  });
+
+  it('shows a viewer the lot read-only, with no write actions', async () => {
+    const page = await openAs('viewer', `/lots/${LOT_ID}`);
     await answerLot(page.backend);
     await page.harness.fixture.whenStable();
 

@@ -17,7 +17,8 @@ import { DeleteLotDialog, type DeleteLotData } from './delete-lot-dialog';
 
 /**
  * One lot (`/lots/:id`) or a new delivery (`/lots/new`, optionally `?materialId=…`): the form for
- * owners and formulators, the recorded details for everyone else, with its stock on hand.
+ * those who record goods-in (owner, formulator, production), the recorded details for everyone
+ * else, with its stock on hand. Only owners and formulators delete a lot.
  */
 @Component({
   selector: 'bp-lot-page',
@@ -47,7 +48,9 @@ export default class LotPage {
   private readonly dialog = inject(MatDialog);
   private readonly snackBar = inject(MatSnackBar);
 
-  /** Whether the signed-in member may record, change and delete lots. */
+  /** Whether the signed-in member may record and correct lots. */
+  protected readonly canRecord = computed(() => this.session.hasRole(ROLE_SETS.goodsIn));
+  /** Whether the signed-in member may delete lots and attach their documents. */
   protected readonly canWrite = computed(() => this.session.hasRole(ROLE_SETS.writers));
   protected readonly lotResource = this.api.lot(this.id);
   protected readonly lot = computed<Lot | null>(() =>
