@@ -1,8 +1,10 @@
 import { TestbedHarnessEnvironment } from '@angular/cdk/testing/testbed';
+import type { HttpRequest } from '@angular/common/http';
 import type { HttpTestingController, TestRequest } from '@angular/common/http/testing';
 import type { Type } from '@angular/core';
 import type { Routes } from '@angular/router';
 import { RouterTestingHarness } from '@angular/router/testing';
+import { vi } from 'vitest';
 import type {
   Formula,
   FormulaVersion,
@@ -176,14 +178,15 @@ export async function openAs(role: Role, routes: Routes, url: string, page: Type
  */
 export async function nextRequest(
   backend: HttpTestingController,
-  match: (req: { url: string; method: string }) => boolean,
-  timeoutMs = 2000,
+  match: (req: HttpRequest<unknown>) => boolean,
+  timeout = 2000,
 ): Promise<TestRequest> {
-  const deadline = Date.now() + timeoutMs;
-  for (;;) {
-    const found = backend.match(match);
-    if (found.length > 0) return found[0]!;
-    if (Date.now() > deadline) throw new Error('The page sent no matching request in time.');
-    await new Promise((resolve) => setTimeout(resolve, 10));
-  }
+  return vi.waitFor(
+    () => {
+      const [found] = backend.match(match);
+      if (!found) throw new Error('The page sent no matching request.');
+      return found;
+    },
+    { timeout },
+  );
 }

@@ -1,3 +1,4 @@
+import { MatAutocompleteHarness } from '@angular/material/autocomplete/testing';
 import { MatButtonHarness } from '@angular/material/button/testing';
 import { MatButtonToggleHarness } from '@angular/material/button-toggle/testing';
 import { MatFormFieldHarness } from '@angular/material/form-field/testing';
@@ -187,21 +188,21 @@ describe('FormulaPage', () => {
     expect(us()).not.toContain('Blocks');
 
     await (await page.loader.getHarness(MatButtonHarness.with({ text: /Add line/ }))).click();
-    const picker = page.el.querySelectorAll<HTMLInputElement>('bp-material-picker input')[2]!;
-    picker.value = 'lagoon';
-    picker.dispatchEvent(new Event('input'));
+    const picker = (await page.loader.getAllHarnesses(MatAutocompleteHarness))[2]!;
+    // A harness waits for the page to settle after acting, which a pending read prevents: each
+    // read is answered while the typing or the click is still pending.
+    const typing = picker.enterText('lagoon');
     const search = await nextRequest(
       page.backend,
-      (r) => r.url === '/api/materials' && r.method === 'GET',
+      (r) => r.url === '/api/materials' && r.method === 'GET' && r.params.get('q') === 'lagoon',
     );
-    expect(search.request.params.get('q')).toBe('lagoon');
     search.flush({ items: [summaryOf(BLUE_BLEND)], total: 1, page: 1, pageSize: 10 });
-    await page.harness.fixture.whenStable();
+    await typing;
 
-    const option = document.querySelector<HTMLElement>('mat-option');
-    expect(option?.textContent).toContain('Lagoon blue mica');
-    option!.click();
+    const [option] = await picker.getOptions({ text: /Lagoon blue mica/ });
+    const picking = option!.click();
     await flushMaterials(page, [BLUE_BLEND]);
+    await picking;
     await (await field(page, 'Grams, line 3')).setValue('1');
 
     expect(us()).toContain('Blocks');

@@ -79,14 +79,9 @@ async function openAs(role: Role, url = '/lots') {
 
 /** Answers the next lots read, after it is sent, and returns it. */
 async function answerLots(backend: HttpTestingController, page: LotPage = PAGE) {
-  let reqs = backend.match(isLots);
-  for (let i = 0; i < 50 && reqs.length === 0; i++) {
-    await new Promise((resolve) => setTimeout(resolve, 10));
-    reqs = backend.match(isLots);
-  }
-  expect(reqs).toHaveLength(1);
-  reqs[0]!.flush(page);
-  return reqs[0]!;
+  const req = await vi.waitFor(() => backend.expectOne(isLots));
+  req.flush(page);
+  return req;
 }
 
 describe('LotList', () => {

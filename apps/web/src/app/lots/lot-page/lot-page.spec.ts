@@ -78,16 +78,9 @@ async function openAs(role: Role, url: string) {
   };
 }
 
-/** Waits until a request matching `match` has been sent, and returns it. */
-async function sent(backend: HttpTestingController, match: (r: HttpRequest<unknown>) => boolean) {
-  let reqs = backend.match(match);
-  for (let i = 0; i < 100 && reqs.length === 0; i++) {
-    await new Promise((resolve) => setTimeout(resolve, 10));
-    reqs = backend.match(match);
-  }
-  expect(reqs).toHaveLength(1);
-  return reqs[0]!;
-}
+/** Waits until the one request matching `match` has been sent, and returns it. */
+const sent = (backend: HttpTestingController, match: (r: HttpRequest<unknown>) => boolean) =>
+  vi.waitFor(() => backend.expectOne(match));
 
 /** Answers the lot read, then the read of its documents that the lot's page starts. */
 async function answerLot(backend: HttpTestingController, lot: Lot = LOT) {

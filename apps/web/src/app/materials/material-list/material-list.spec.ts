@@ -3,6 +3,7 @@ import type { TestRequest } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
 import { MatPaginatorHarness } from '@angular/material/paginator/testing';
 import { MatSelectHarness } from '@angular/material/select/testing';
+import { MatSortHarness } from '@angular/material/sort/testing';
 import { MatTableHarness } from '@angular/material/table/testing';
 import { Router } from '@angular/router';
 import { RouterTestingHarness } from '@angular/router/testing';
@@ -81,14 +82,17 @@ describe('MaterialList', () => {
     o.backend.expectOne(isList).flush(PAGE);
     await o.harness.fixture.whenStable();
 
-    const headers = Array.from(o.harness.routeNativeElement!.querySelectorAll('th'));
-    headers.find((th) => th.textContent?.includes('INCI name'))!.click();
-
+    const sort = await o.loader.getHarness(MatSortHarness);
+    const [header] = await sort.getSortHeaders({ label: 'INCI name' });
+    // The harness waits for the page to settle after the click, which the new read prevents
+    // until it is answered: answer it while the click is pending.
+    const clicked = header!.click();
     const req = await nextListRequest(o);
     expect(req.request.params.get('sort')).toBe('inci');
     expect(req.request.params.get('dir')).toBe('asc');
     expect(TestBed.inject(Router).url).toBe('/materials?sort=inci&dir=asc');
     req.flush(PAGE);
+    await clicked;
   });
 
   it('filters by category on the server, starting again from the first page', async () => {

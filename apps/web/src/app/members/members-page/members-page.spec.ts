@@ -95,14 +95,15 @@ describe('MembersPage', () => {
 
     const sort = await page.loader.getHarness(MatSortHarness);
     expect(await (await sort.getActiveHeader())?.getLabel()).toBe('Name');
-    const headers = Array.from(page.harness.routeNativeElement!.querySelectorAll('th'));
-    headers.find((th) => th.textContent?.includes('Joined'))!.click();
-
-    // Clicked natively: a harness waits for the page to settle, which a pending read prevents.
+    const [joined] = await sort.getSortHeaders({ label: 'Joined' });
+    // The harness waits for the page to settle after the click, which the new read prevents
+    // until it is answered: answer it while the click is pending.
+    const clicked = joined!.click();
     const req = await vi.waitFor(() => page.backend.expectOne(isMembersList));
     expect(req.request.params.get('sort')).toBe('joinedAt');
     expect(req.request.params.get('dir')).toBe('asc');
     req.flush({ items: MEMBERS });
+    await clicked;
     expect(TestBed.inject(Router).url).toBe('/workshop?sort=joinedAt&dir=asc');
   });
 

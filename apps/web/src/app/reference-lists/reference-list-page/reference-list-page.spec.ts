@@ -96,15 +96,12 @@ describe('ReferenceListPage', () => {
     const clicked = sourceHeader!.click();
     // The click navigates, and the new URL makes the resource ask the server again; answer it
     // as soon as it is sent, since the fixture is not stable while it is pending.
-    let again = backend.match((r) => r.url === '/api/reference/eu-annex-iii-allergens');
-    for (let i = 0; i < 50 && again.length === 0; i++) {
-      await new Promise((resolve) => setTimeout(resolve, 10));
-      again = backend.match((r) => r.url === '/api/reference/eu-annex-iii-allergens');
-    }
-    expect(again).toHaveLength(1);
-    expect(again[0]!.request.params.get('sort')).toBe('source');
+    const again = await vi.waitFor(() =>
+      backend.expectOne((r) => r.url === '/api/reference/eu-annex-iii-allergens'),
+    );
+    expect(again.request.params.get('sort')).toBe('source');
     expect(TestBed.inject(Router).url).toContain('sort=source');
-    again[0]!.flush(PAGE);
+    again.flush(PAGE);
     await clicked;
   });
 });
