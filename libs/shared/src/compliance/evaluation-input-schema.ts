@@ -18,6 +18,16 @@ const casSchema = z
 const MAX_GRAMS = 1e9;
 /** Most lines a formula may have: far more than any real formula, small enough to check quickly. */
 export const MAX_LINES = 200;
+/** Most functions one material or blend component lists. */
+export const MAX_FUNCTIONS = 20;
+/** Most components of one blend. */
+export const MAX_BLEND_COMPONENTS = 50;
+/** Most allergens one declaration lists (the EU's 2023 list names about 80). */
+export const MAX_DECLARED_ALLERGENS = 200;
+/** Most categories one IFRA certificate names (the 51st amendment has 18, 1 to 12 with sub-categories). */
+export const MAX_IFRA_CATEGORIES = 30;
+/** Most entries of a markets list; each market is checked once whatever the count. */
+export const MAX_MARKETS = 10;
 /** Blend components must add up to 100 % within this tolerance. */
 export const BLEND_TOLERANCE_PERCENT = 0.01;
 
@@ -49,7 +59,10 @@ export const blendComponentSchema = z.object({
   cas: casSchema.optional(),
   /** Whether this component is a nanomaterial: EU/UK lists name it followed by "(nano)" (Art. 19(1)(g)). */
   nano: z.boolean().optional(),
-  functions: z.array(z.string().trim().min(1)).optional(),
+  functions: z
+    .array(z.string().trim().min(1))
+    .max(MAX_FUNCTIONS, { error: `List at most ${MAX_FUNCTIONS} functions` })
+    .optional(),
   percent: percentSchema.refine((p) => p > 0, {
     error: 'A component must be more than 0 % of its blend',
   }),
@@ -68,8 +81,14 @@ export const fragranceAllergenInputSchema = z.object({
 export const fragranceInputSchema = z
   .object({
     /** Maxima by IFRA category from the certificate; empty when no certificate is entered. */
-    maxPercentByIfraCategory: z.record(z.string().trim().min(1), percentSchema),
-    allergens: z.array(fragranceAllergenInputSchema),
+    maxPercentByIfraCategory: z
+      .record(z.string().trim().min(1), percentSchema)
+      .refine((maxima) => Object.keys(maxima).length <= MAX_IFRA_CATEGORIES, {
+        error: `List at most ${MAX_IFRA_CATEGORIES} IFRA categories`,
+      }),
+    allergens: z
+      .array(fragranceAllergenInputSchema)
+      .max(MAX_DECLARED_ALLERGENS, { error: `List at most ${MAX_DECLARED_ALLERGENS} allergens` }),
     /**
      * Whether `allergens` comes from the supplier's allergen declaration. False when only the IFRA
      * certificate is entered: an empty list then means "unknown", not "none".
@@ -93,7 +112,9 @@ export const materialInputSchema = z
     name: text('Material name'),
     inci: text('INCI name'),
     usName: text('US name').optional(),
-    functions: z.array(z.string().trim().min(1)),
+    functions: z.array(z.string().trim().min(1)).max(MAX_FUNCTIONS, {
+      error: `List at most ${MAX_FUNCTIONS} functions`,
+    }),
     /** The material's kind as the workshop files it; `fragrance` and `essential-oil` mark scent materials. */
     category: z.string().trim().min(1).max(50).optional(),
     colourIndex: colourIndexSchema.optional(),
@@ -103,6 +124,9 @@ export const materialInputSchema = z
     components: z
       .array(blendComponentSchema)
       .min(1, { error: 'A blend needs at least one component' })
+      .max(MAX_BLEND_COMPONENTS, {
+        error: `A blend has at most ${MAX_BLEND_COMPONENTS} components`,
+      })
       .optional(),
     fragrance: fragranceInputSchema.optional(),
     /** Whether it is an incidental ingredient (21 CFR 701.3(l)) that need not be declared. */
@@ -164,6 +188,7 @@ export const evaluationInputSchema = z
     markets: z
       .array(complianceMarketSchema, { error: 'Choose at least one market' })
       .min(1, { error: 'Choose at least one market' })
+      .max(MAX_MARKETS, { error: `Name at most ${MAX_MARKETS} markets` })
       .transform((markets) => [...new Set(markets)]),
     product: productInputSchema,
     lines: z

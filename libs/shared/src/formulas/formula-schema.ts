@@ -10,6 +10,7 @@ import {
 } from '../records/record-fields';
 
 import { productTypeSchema } from '../compliance/product-types';
+import { MAX_LINES, MAX_MARKETS } from '../compliance/evaluation-input-schema';
 
 /** Life of a version: a draft until released; releasing the next one supersedes it. */
 export const versionStateSchema = z.enum(['draft', 'released', 'superseded']);
@@ -38,6 +39,7 @@ export const productProfileSchema = z.object({
   markets: z
     .array(complianceMarketSchema, { error: 'Choose at least one market' })
     .min(1, { error: 'Choose at least one market' })
+    .max(MAX_MARKETS, { error: `Name at most ${MAX_MARKETS} markets` })
     .transform((m) => [...new Set(m)]),
   unitMassGrams: z
     .number({ error: 'Enter the unit mass in grams' })
@@ -79,14 +81,19 @@ export const percentLineSchema = z.object({
  */
 export const formulaVersionInputSchema = z
   .object({
-    lines: z.array(formulaLineSchema).max(200, { error: 'At most 200 lines' }).optional(),
+    lines: z
+      .array(formulaLineSchema)
+      .max(MAX_LINES, { error: `A formula has at most ${MAX_LINES} lines` })
+      .optional(),
     byPercent: z
       .object({
         batchGrams: z
           .number({ error: 'Enter the batch total in grams' })
           .gt(0, { error: 'The batch total must be more than 0 g' })
           .max(1e9),
-        lines: z.array(percentLineSchema).max(200, { error: 'At most 200 lines' }),
+        lines: z
+          .array(percentLineSchema)
+          .max(MAX_LINES, { error: `A formula has at most ${MAX_LINES} lines` }),
       })
       .optional(),
     profile: productProfileSchema,

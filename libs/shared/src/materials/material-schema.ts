@@ -3,6 +3,10 @@ import {
   BLEND_TOLERANCE_PERCENT,
   blendComponentSchema,
   fragranceAllergenInputSchema,
+  MAX_BLEND_COMPONENTS,
+  MAX_DECLARED_ALLERGENS,
+  MAX_FUNCTIONS,
+  MAX_IFRA_CATEGORIES,
 } from '../compliance/evaluation-input-schema';
 import { parseColourIndex } from '../compliance/ingredient-names';
 import { kitchenMeasureSchema } from '../compliance/volume-to-grams';
@@ -50,13 +54,17 @@ const positive = (label: string) =>
 
 /** Maximum percent of the finished product per IFRA category, from the supplier's certificate. */
 export const ifraCertificateSchema = z.object({
-  maxPercentByIfraCategory: z.record(
-    z.string().trim().min(1, { error: 'Name the IFRA category, e.g. 9 or 5A' }),
-    z
-      .number({ error: 'Enter the maximum as a percentage' })
-      .min(0, { error: 'A maximum cannot be negative' })
-      .max(100, { error: 'A maximum cannot exceed 100 %' }),
-  ),
+  maxPercentByIfraCategory: z
+    .record(
+      z.string().trim().min(1, { error: 'Name the IFRA category, e.g. 9 or 5A' }),
+      z
+        .number({ error: 'Enter the maximum as a percentage' })
+        .min(0, { error: 'A maximum cannot be negative' })
+        .max(100, { error: 'A maximum cannot exceed 100 %' }),
+    )
+    .refine((maxima) => Object.keys(maxima).length <= MAX_IFRA_CATEGORIES, {
+      error: `List at most ${MAX_IFRA_CATEGORIES} IFRA categories`,
+    }),
   issuedOn: isoDate('the certificate issue date'),
   amendment: z
     .number({ error: 'Enter the IFRA amendment number, e.g. 51' })
@@ -68,7 +76,9 @@ export type IfraCertificate = z.infer<typeof ifraCertificateSchema>;
 /** The supplier's allergen declaration: each allergen as a percent of the neat oil. */
 export const allergenDeclarationSchema = z.object({
   documentDate: isoDate('the declaration date'),
-  allergens: z.array(fragranceAllergenInputSchema).max(200),
+  allergens: z
+    .array(fragranceAllergenInputSchema)
+    .max(MAX_DECLARED_ALLERGENS, { error: `List at most ${MAX_DECLARED_ALLERGENS} allergens` }),
 });
 export type AllergenDeclaration = z.infer<typeof allergenDeclarationSchema>;
 
@@ -100,7 +110,7 @@ export const materialCreateSchema = z
     ec: optionalText('EC number', 100),
     functions: z
       .array(z.string().trim().min(1, { error: 'A function cannot be empty' }).max(100))
-      .max(20, { error: 'List at most 20 functions' })
+      .max(MAX_FUNCTIONS, { error: `List at most ${MAX_FUNCTIONS} functions` })
       .default([]),
     category: materialCategorySchema,
     supplierId: recordIdSchema('supplier')
@@ -113,7 +123,12 @@ export const materialCreateSchema = z
     ),
     /** Whether the material is a nanomaterial: EU/UK ingredient lists add "(nano)" to its name. */
     nano: z.boolean().default(false),
-    components: z.array(blendComponentSchema).max(50).default([]),
+    components: z
+      .array(blendComponentSchema)
+      .max(MAX_BLEND_COMPONENTS, {
+        error: `A blend has at most ${MAX_BLEND_COMPONENTS} components`,
+      })
+      .default([]),
     ifraCertificate: ifraCertificateSchema.nullish().transform((v) => v ?? null),
     allergenDeclaration: allergenDeclarationSchema.nullish().transform((v) => v ?? null),
     weightPerVolume: weightPerVolumeSchema.default({}),
