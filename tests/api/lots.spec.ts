@@ -122,6 +122,32 @@ describe('GET /api/lots', () => {
     expect((await get('sort=materialName&dir=asc')).items[0]!.materialName).toBe('Epsom Salt');
   });
 
+  it('when a material is renamed, its lots carry and sort by the new name at once', async () => {
+    const ws = await buildWorkshop(h.handle.db, TEST_JWT_SECRET, { roles: ['owner'] });
+    const clay = await buildMaterial(h.handle.db, ws.id, aMaterial({ tradeName: 'Kaolin Clay' }));
+    const salt = await buildMaterial(h.handle.db, ws.id, aMaterial({ tradeName: 'Epsom Salt' }));
+    await buildLot(h.handle.db, ws.id, clay.id, { supplierLotNumber: 'KC-1' });
+    await buildLot(h.handle.db, ws.id, salt.id, { supplierLotNumber: 'ES-1' });
+    const names = async () =>
+      lotPageSchema
+        .parse(
+          (
+            await request(h.app)
+              .get('/api/lots?sort=materialName&dir=asc')
+              .set(bearer(ws.members.owner))
+          ).body,
+        )
+        .items.map((l) => l.materialName);
+    expect(await names()).toEqual(['Epsom Salt', 'Kaolin Clay']);
+
+    const renamed = await request(h.app)
+      .put(`/api/materials/${clay.id}`)
+      .set(bearer(ws.members.owner))
+      .send(aMaterial({ tradeName: 'China Clay' }));
+    expect(renamed.status).toBe(200);
+    expect(await names()).toEqual(['China Clay', 'Epsom Salt']);
+  });
+
   it('with a bad expiry cut-off responds 400 with fieldErrors.expiresBefore', async () => {
     const res = await request(h.app)
       .get('/api/lots?expiresBefore=soon')

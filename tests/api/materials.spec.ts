@@ -166,6 +166,32 @@ describe('GET /api/materials', () => {
     expect((await get('q=100%25')).total).toBe(0);
   });
 
+  it('matches the text filter in the trade name, INCI, US name or CAS, whatever the case', async () => {
+    const ws = await buildWorkshop(h.handle.db, TEST_JWT_SECRET, { roles: ['viewer'] });
+    await buildMaterial(
+      h.handle.db,
+      ws.id,
+      aMaterial({ tradeName: 'Bath salt', inci: 'Magnesium Sulfate', cas: '7487-88-9' }),
+    );
+    await buildMaterial(h.handle.db, ws.id, aFragrance({ tradeName: 'Sea breeze' }));
+    await buildMaterial(h.handle.db, ws.id, aMaterial({ tradeName: 'Cocoa Butter' }));
+    const names = async (q: string) =>
+      materialPageSchema
+        .parse(
+          (
+            await request(h.app)
+              .get(`/api/materials?q=${encodeURIComponent(q)}&sort=tradeName`)
+              .set(bearer(ws.members.viewer))
+          ).body,
+        )
+        .items.map((m) => m.tradeName);
+    expect(await names('BATH SALT')).toEqual(['Bath salt']);
+    expect(await names('magnesium sulf')).toEqual(['Bath salt']);
+    expect(await names('7487-88')).toEqual(['Bath salt']);
+    expect(await names('fragrance')).toEqual(['Sea breeze']); // its US name
+    expect(await names('salt_')).toEqual([]); // LIKE wildcards match only themselves
+  });
+
   it('with ids=a,b,c answers the full records of those materials in one request', async () => {
     const ws = await buildWorkshop(h.handle.db, TEST_JWT_SECRET, { roles: ['viewer'] });
     const other = await buildWorkshop(h.handle.db, TEST_JWT_SECRET, { roles: ['viewer'] });

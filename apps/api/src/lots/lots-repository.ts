@@ -25,7 +25,7 @@ const supplierName = sql<
 const columns = {
   id: lots.id,
   materialId: lots.materialId,
-  materialName: materials.tradeName,
+  materialName: lots.materialName,
   supplierName,
   supplierLotNumber: lots.supplierLotNumber,
   quantity: lots.quantity,
@@ -42,7 +42,8 @@ const sortColumns = {
   receivedOn: lots.receivedOn,
   expiresOn: lots.expiresOn,
   supplierLotNumber: lots.supplierLotNumber,
-  materialName: materials.tradeName,
+  // The lot's copy of the name, which an index serves (a sort on the joined table reads every lot).
+  materialName: lots.materialName,
   quantity: lots.quantity,
   createdAt: lots.createdAt,
 } as const;

@@ -1,4 +1,4 @@
-import { and, eq, ilike, inArray, or, sql, type SQL } from 'drizzle-orm';
+import { and, eq, inArray, like, sql, type SQL } from 'drizzle-orm';
 import type { MaterialFields, MaterialListQuery } from '@batchproof/shared';
 import {
   containsPattern,
@@ -59,17 +59,9 @@ const sortColumns = {
 
 function listWhere(workshopId: string, q: MaterialListQuery) {
   const conditions: (SQL | undefined)[] = [eq(materials.workshopId, workshopId)];
-  if (q.q) {
-    const p = containsPattern(q.q);
-    conditions.push(
-      or(
-        ilike(materials.tradeName, p),
-        ilike(materials.inci, p),
-        ilike(materials.usName, p),
-        ilike(materials.cas, p),
-      ),
-    );
-  }
+  // Trade name, INCI, US name and CAS, lower-cased in one column; PostgreSQL lower-cases the
+  // pattern too, so both sides fold case the same way.
+  if (q.q) conditions.push(like(materials.searchText, sql`lower(${containsPattern(q.q)})`));
   if (q.category) conditions.push(eq(materials.category, q.category));
   if (q.supplierId) conditions.push(eq(materials.supplierId, q.supplierId));
   return and(...conditions);

@@ -27,6 +27,13 @@ export const lots = pgTable(
       .references(() => workshops.id, { onDelete: 'cascade' }),
     // Restrict: a material with stock history must not vanish from under its lots.
     materialId: uuid().notNull(),
+    /**
+     * The material's trade name, copied so that the lots list sorts by it through an index (a sort
+     * on the joined table reads every lot). Kept by database triggers (migration 0009), in the
+     * writing transaction: set from the material on insert and on a change of material, and
+     * rewritten when the material is renamed. The default only lets inserts leave it out.
+     */
+    materialName: text().notNull().default(''),
     supplierLotNumber: text().notNull(),
     quantity: numeric({ precision: 16, scale: 4, mode: 'number' }).notNull(),
     unit: lotUnitEnum().notNull(),
@@ -48,6 +55,7 @@ export const lots = pgTable(
     index('lots_workshop_quantity_idx').on(t.workshopId, t.quantity, t.id),
     index('lots_workshop_created_idx').on(t.workshopId, t.createdAt, t.id),
     index('lots_material_idx').on(t.materialId, t.receivedOn),
+    index('lots_workshop_material_name_idx').on(t.workshopId, t.materialName, t.id),
     // Trigram index (pg_trgm, migration 0003) so "lot number contains …" avoids a full scan.
     index('lots_lot_number_trgm_idx').using('gin', sql`${t.supplierLotNumber} gin_trgm_ops`),
     workshopKey('lots', t),
