@@ -1,5 +1,4 @@
 import { Router } from 'express';
-import * as z from 'zod';
 import {
   compareQuerySchema,
   formulaCreateSchema,
@@ -10,6 +9,7 @@ import {
   releaseSchema,
   ROLE_SETS,
   scaleRequestSchema,
+  versionNumberSchema,
 } from '@batchproof/shared';
 import type { Authenticator } from '../auth/authenticate';
 import { notFound } from '../core/app-error';
@@ -20,7 +20,7 @@ import type { Database } from '../db/database';
 import * as views from './formula-views';
 import * as domain from './formulas-domain';
 
-const versionNumber = z.coerce.number().int().min(1).max(1_000_000);
+const versionNumber = versionNumberSchema('The version', true);
 
 /** Parses `:n`; anything but a positive whole number is simply not found. */
 function versionParam(raw: unknown) {

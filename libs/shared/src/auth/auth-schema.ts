@@ -1,16 +1,15 @@
 import * as z from 'zod';
+import { textField } from '../records/record-fields';
 import { roleSchema } from './roles';
 
 const trimmed = (label: string, max: number) =>
-  z
-    .string({ error: `${label} is required.` })
+  textField(label, `${label} is required.`)
     .trim()
     .min(1, `${label} is required.`)
     .max(max, `${label} must be at most ${max} characters.`);
 
 /** E-mail address, trimmed and lower-cased so sign-in is case-insensitive. */
-export const emailSchema = z
-  .string({ error: 'E-mail is required.' })
+export const emailSchema = textField('E-mail', 'E-mail is required.')
   .trim()
   .toLowerCase()
   .pipe(z.email({ error: 'Enter a valid e-mail address.' }).max(254));
@@ -82,8 +81,7 @@ export const invitationPreviewSchema = z.object({
 });
 export type InvitationPreview = z.infer<typeof invitationPreviewSchema>;
 
-export const tokenSchema = z
-  .string({ error: 'The link is missing its token.' })
+export const tokenSchema = textField('The link', 'The link is missing its token.')
   .trim()
   .min(20, 'The link is incomplete; open it again from the e-mail.')
   .max(200);

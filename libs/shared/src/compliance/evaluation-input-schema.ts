@@ -3,10 +3,10 @@ import { complianceMarketSchema } from '../reference-data/reference-row';
 import { parseColourIndex } from './ingredient-names';
 import { casCheckDigit, isValidCas } from '../materials/cas-number';
 import { productTypeSchema } from './product-types';
+import { isoDate, requiredText, textField } from '../records/record-fields';
 
 /** A CAS Registry Number as written, e.g. 122-99-6. */
-const casSchema = z
-  .string()
+const casSchema = textField('The CAS number')
   .trim()
   .regex(/^\d{2,7}-\d{2}-\d$/, { error: 'Enter a CAS number such as 122-99-6' })
   .refine(isValidCas, {
@@ -31,20 +31,14 @@ export const MAX_MARKETS = 10;
 /** Blend components must add up to 100 % within this tolerance. */
 export const BLEND_TOLERANCE_PERCENT = 0.01;
 
-const text = (label: string) =>
-  z
-    .string({ error: `${label} is required` })
-    .trim()
-    .min(1, { error: `${label} is required` })
-    .max(200, { error: `${label} is too long (200 characters at most)` });
+const text = (label: string) => requiredText(label, 200);
 
 const percentSchema = z
   .number({ error: 'Enter a percentage' })
   .min(0, { error: 'A percentage cannot be negative' })
   .max(100, { error: 'A percentage cannot exceed 100' });
 
-const colourIndexSchema = z
-  .string()
+const colourIndexSchema = textField('The Colour Index number')
   .trim()
   .refine((value) => parseColourIndex(value) !== null, {
     error: 'Enter a Colour Index number such as CI 77891 or 15850:1',
@@ -60,7 +54,7 @@ export const blendComponentSchema = z.object({
   /** Whether this component is a nanomaterial: EU/UK lists name it followed by "(nano)" (Art. 19(1)(g)). */
   nano: z.boolean().optional(),
   functions: z
-    .array(z.string().trim().min(1))
+    .array(textField('A function').trim().min(1))
     .max(MAX_FUNCTIONS, { error: `List at most ${MAX_FUNCTIONS} functions` })
     .optional(),
   percent: percentSchema.refine((p) => p > 0, {
@@ -82,7 +76,7 @@ export const fragranceInputSchema = z
   .object({
     /** Maxima by IFRA category from the certificate; empty when no certificate is entered. */
     maxPercentByIfraCategory: z
-      .record(z.string().trim().min(1), percentSchema)
+      .record(textField('The IFRA category').trim().min(1), percentSchema)
       .refine((maxima) => Object.keys(maxima).length <= MAX_IFRA_CATEGORIES, {
         error: `List at most ${MAX_IFRA_CATEGORIES} IFRA categories`,
       }),
@@ -112,11 +106,11 @@ export const materialInputSchema = z
     name: text('Material name'),
     inci: text('INCI name'),
     usName: text('US name').optional(),
-    functions: z.array(z.string().trim().min(1)).max(MAX_FUNCTIONS, {
+    functions: z.array(textField('A function').trim().min(1)).max(MAX_FUNCTIONS, {
       error: `List at most ${MAX_FUNCTIONS} functions`,
     }),
     /** The material's kind as the workshop files it; `fragrance` and `essential-oil` mark scent materials. */
-    category: z.string().trim().min(1).max(50).optional(),
+    category: textField('The category').trim().min(1).max(50).optional(),
     colourIndex: colourIndexSchema.optional(),
     cas: casSchema.optional(),
     /** Whether the material is a nanomaterial (Regulation (EC) No 1223/2009, Art. 2(1)(k), 19(1)(g)). */
@@ -184,7 +178,7 @@ export const productInputSchema = z.object({
 /** Input of {@link evaluateFormula}: a formula by weight, the product and the markets to check. */
 export const evaluationInputSchema = z
   .object({
-    asOf: z.iso.date({ error: 'Enter the date to check against as YYYY-MM-DD' }),
+    asOf: isoDate('the date to check against'),
     markets: z
       .array(complianceMarketSchema, { error: 'Choose at least one market' })
       .min(1, { error: 'Choose at least one market' })

@@ -4,9 +4,11 @@ import { listQuerySchema, pageSchema } from '../lists/list-query-schema';
 import { complianceMarketSchema } from '../reference-data/reference-row';
 import {
   optionalText,
+  quantity,
   recordIdSchema,
   requiredText,
   storedRecordFields,
+  wholeNumber,
 } from '../records/record-fields';
 
 import { productTypeSchema } from '../compliance/product-types';
@@ -61,10 +63,8 @@ export type ProductProfile = z.output<typeof productProfileSchema>;
 /** One line by weight. */
 export const formulaLineSchema = z.object({
   materialId: recordIdSchema('material'),
-  grams: z
-    .number({ error: 'Enter a weight in grams' })
-    .min(0, { error: 'Grams cannot be negative' })
-    .max(1e9, { error: 'Enter at most 1,000,000,000 g' }),
+  // Stored as numeric(18, 6).
+  grams: quantity('Grams', { decimals: 6, max: 1e9, zero: 'allowed' }),
 });
 /** One line by percent, converted to grams with the batch total. */
 export const percentLineSchema = z.object({
@@ -87,10 +87,11 @@ export const formulaVersionInputSchema = z
       .optional(),
     byPercent: z
       .object({
-        batchGrams: z
-          .number({ error: 'Enter the batch total in grams' })
-          .gt(0, { error: 'The batch total must be more than 0 g' })
-          .max(1e9),
+        batchGrams: quantity('The batch total in grams', {
+          decimals: 6,
+          max: 1e9,
+          zero: 'refused',
+        }),
         lines: z
           .array(percentLineSchema)
           .max(MAX_LINES, { error: `A formula has at most ${MAX_LINES} lines` }),
@@ -145,9 +146,16 @@ export const formulaUpdateSchema = z.object({
 });
 export type FormulaUpdate = z.input<typeof formulaUpdateSchema>;
 
+/** Most versions one formula may have: far more than any formula reaches, inside `integer`. */
+export const MAX_VERSION_NUMBER = 1_000_000;
+
+/** A version number in a body, a query or (`fromText`) a path. */
+export const versionNumberSchema = (label: string, fromText = false) =>
+  wholeNumber(label, { min: 1, max: MAX_VERSION_NUMBER, fromText });
+
 /** Starts a new draft copied from an existing version (the latest when none is named). */
 export const newVersionSchema = z.object({
-  fromVersion: z.number().int().min(1, { error: 'Versions start at 1' }).optional(),
+  fromVersion: versionNumberSchema('The version to copy').optional(),
 });
 
 /** Releases a version; an owner may override blocking findings with a recorded reason. */
@@ -240,6 +248,6 @@ export type FormulaPage = z.infer<typeof formulaPageSchema>;
 
 /** Query of the compare route. */
 export const compareQuerySchema = z.object({
-  from: z.coerce.number({ error: 'Name the version to compare from' }).int().min(1),
-  to: z.coerce.number({ error: 'Name the version to compare to' }).int().min(1),
+  from: versionNumberSchema('The version to compare from', true),
+  to: versionNumberSchema('The version to compare to', true),
 });

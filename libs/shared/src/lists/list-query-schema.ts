@@ -1,4 +1,5 @@
 import * as z from 'zod';
+import { textField } from '../records/record-fields';
 
 /** Largest page a list route serves; bigger pages are refused rather than silently cut. */
 export const MAX_PAGE_SIZE = 100;
@@ -17,7 +18,10 @@ export function listQuerySchema<const K extends readonly [string, ...string[]]>(
   defaultSort: K[number],
 ) {
   return z.object({
-    q: z.string().trim().max(100, { error: 'Keep the filter under 100 characters' }).default(''),
+    q: textField('The filter')
+      .trim()
+      .max(100, { error: 'Keep the filter under 100 characters' })
+      .default(''),
     sort: z
       .enum(sortKeys as unknown as { [P in K[number]]: P }, {
         error: `Sort by one of: ${sortKeys.join(', ')}`,

@@ -4,6 +4,7 @@ import {
   isoDate,
   optionalIsoDate,
   optionalText,
+  quantity,
   recordIdSchema,
   requiredText,
   storedRecordFields,
@@ -19,17 +20,13 @@ export const lotCreateSchema = z
   .object({
     materialId: recordIdSchema('material'),
     supplierLotNumber: requiredText('Supplier lot number', 100),
-    quantity: z
-      .number({ error: 'Enter the quantity received' })
-      .gt(0, { error: 'The quantity received must be more than 0' })
-      .max(1e9, { error: 'The quantity is too large' }),
+    // Stored as numeric(16, 4).
+    quantity: quantity('The quantity received', { decimals: 4, max: 1e9, zero: 'refused' }),
     unit: lotUnitSchema,
     receivedOn: isoDate('the day it was received'),
     expiresOn: optionalIsoDate('the expiry date'),
-    unitCost: z
-      .number({ error: 'Enter the cost per unit as a number' })
-      .min(0, { error: 'The cost cannot be negative' })
-      .max(1e7, { error: 'The cost is too large' })
+    // Stored as numeric(14, 4).
+    unitCost: quantity('The cost per unit', { decimals: 4, max: 1e7, zero: 'allowed' })
       .nullish()
       .transform((v) => v ?? null),
     notes: optionalText('Notes', 2000),

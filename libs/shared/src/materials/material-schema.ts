@@ -7,6 +7,7 @@ import {
   MAX_DECLARED_ALLERGENS,
   MAX_FUNCTIONS,
   MAX_IFRA_CATEGORIES,
+  MAX_LINES,
 } from '../compliance/evaluation-input-schema';
 import { parseColourIndex } from '../compliance/ingredient-names';
 import { kitchenMeasureSchema } from '../compliance/volume-to-grams';
@@ -17,6 +18,7 @@ import {
   recordIdSchema,
   requiredText,
   storedRecordFields,
+  textField,
 } from '../records/record-fields';
 import { calibrationSummarySchema } from './calibration-summary';
 import { casProblems } from './cas-number';
@@ -56,7 +58,9 @@ const positive = (label: string) =>
 export const ifraCertificateSchema = z.object({
   maxPercentByIfraCategory: z
     .record(
-      z.string().trim().min(1, { error: 'Name the IFRA category, e.g. 9 or 5A' }),
+      textField('The IFRA category')
+        .trim()
+        .min(1, { error: 'Name the IFRA category, e.g. 9 or 5A' }),
       z
         .number({ error: 'Enter the maximum as a percentage' })
         .min(0, { error: 'A maximum cannot be negative' })
@@ -109,7 +113,9 @@ export const materialCreateSchema = z
     }),
     ec: optionalText('EC number', 100),
     functions: z
-      .array(z.string().trim().min(1, { error: 'A function cannot be empty' }).max(100))
+      .array(
+        textField('A function').trim().min(1, { error: 'A function cannot be empty' }).max(100),
+      )
       .max(MAX_FUNCTIONS, { error: `List at most ${MAX_FUNCTIONS} functions` })
       .default([]),
     category: materialCategorySchema,
@@ -218,7 +224,7 @@ export const materialPageSchema = pageSchema(materialSummarySchema);
 export type MaterialPage = z.infer<typeof materialPageSchema>;
 
 /** Most ids one `GET /api/materials?ids=` names: as many as a formula has lines. */
-export const MAX_MATERIAL_IDS = 200;
+export const MAX_MATERIAL_IDS = MAX_LINES;
 const materialId = recordIdSchema('material');
 
 /**

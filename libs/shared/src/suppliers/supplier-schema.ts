@@ -1,23 +1,32 @@
 import * as z from 'zod';
 import { listQuerySchema, pageSchema } from '../lists/list-query-schema';
-import { optionalText, requiredText, storedRecordFields } from '../records/record-fields';
+import {
+  optionalText,
+  requiredText,
+  storedRecordFields,
+  textField,
+} from '../records/record-fields';
 
 /** What the owner or formulator enters for a supplier (create and full update). */
 export const supplierCreateSchema = z.object({
   name: requiredText('Supplier name'),
   contact: optionalText('Contact person'),
-  email: z
-    .union([
-      z.literal(''),
-      z.email({ error: 'Enter an e-mail address such as orders@example.com' }),
-    ])
+  email: textField('E-mail')
+    .pipe(
+      z.union([
+        z.literal(''),
+        z.email({ error: 'Enter an e-mail address such as orders@example.com' }),
+      ]),
+    )
     .nullish()
     .transform((v) => (v ? v.toLowerCase() : null)),
-  website: z
-    .union([
-      z.literal(''),
-      z.url({ protocol: /^https?$/, error: 'Enter a web address starting with https://' }),
-    ])
+  website: textField('Website')
+    .pipe(
+      z.union([
+        z.literal(''),
+        z.url({ protocol: /^https?$/, error: 'Enter a web address starting with https://' }),
+      ]),
+    )
     .nullish()
     .transform((v) => (v ? v : null)),
   notes: optionalText('Notes', 2000),
