@@ -139,11 +139,12 @@ function ensurePostgresUser() {
  * details: `startedHere` says whether this call started it. A cluster already running is reused;
  * `adopted` says it was left running by a script that promised to stop it (`stopClusterOnExit`)
  * and died without doing so (killed with SIGKILL), so this script may stop it instead.
+ * `home` is where the cluster lives; a test that must restart a database passes a temporary folder
+ * for a throwaway cluster of its own.
  */
-export function ensureCluster(port) {
+export function ensureCluster(port, home = clusterHome()) {
   const bin = ensurePostgresBinaries();
   ensurePostgresUser();
-  const home = clusterHome();
   const pgdata = path.join(home, 'data');
   const socketDir = path.join(home, 'run');
   const secretFile = path.join(home, 'superuser-password');

@@ -12,9 +12,9 @@ export function testDatabaseUrl(): string {
   return url;
 }
 
-/** Opens the test database and applies the real, committed migrations. */
-export async function openMigratedTestDatabase(): Promise<DatabaseHandle> {
-  const handle = openDatabase(testDatabaseUrl(), 5);
+/** Opens the test database (or the one at `url`) and applies the real, committed migrations. */
+export async function openMigratedTestDatabase(url = testDatabaseUrl()): Promise<DatabaseHandle> {
+  const handle = openDatabase(url, 5);
   await applyMigrations(handle.db, path.resolve(import.meta.dirname, '../../drizzle'));
   return handle;
 }

@@ -14,9 +14,15 @@ export interface DatabaseHandle {
   close(): Promise<void>;
 }
 
-/** Opens a pool and a Drizzle handle with snake_case column names. */
+/**
+ * Opens a pool and a Drizzle handle with snake_case column names. The pool survives a database
+ * restart: an idle connection the server closes is dropped (one log line per outage, not a crash)
+ * and the next query opens a fresh one; a query while the server is down fails fast and the error
+ * handler answers 503.
+ */
 export function openDatabase(url: string, max = 10): DatabaseHandle {
-  const pool = new pg.Pool({ connectionString: url, max });
+  const pool = new pg.Pool({ connectionString: url, max, connectionTimeoutMillis: 10_000 });
+  reportOutages(pool);
   const db = drizzle({ client: pool, schema: fullSchema, casing: 'snake_case' });
   return { db, pool, close: () => pool.end() };
 }
@@ -24,4 +30,25 @@ export function openDatabase(url: string, max = 10): DatabaseHandle {
 /** Applies the committed migrations in `folder` (drizzle-kit output). */
 export async function applyMigrations(db: Database, folder: string): Promise<void> {
   await migrate(db, { migrationsFolder: folder });
+}
+
+/**
+ * Without a listener, an idle client's 'error' (the server restarting or closing the connection)
+ * is an unhandled event that ends the process. Logs the first loss of an outage in one line and
+ * the first successful connection after it, so a restart leaves two lines however many clients
+ * were idle.
+ */
+function reportOutages(pool: pg.Pool) {
+  let lost = false;
+  pool.on('error', (err: Error & { code?: string }) => {
+    if (lost) return;
+    lost = true;
+    const code = err.code ? ` (${err.code})` : '';
+    console.error(`[db] connection lost: ${err.message.split('\n')[0]}${code}`);
+  });
+  pool.on('connect', () => {
+    if (!lost) return;
+    lost = false;
+    console.log('[db] connected again');
+  });
 }

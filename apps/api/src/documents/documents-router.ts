@@ -8,6 +8,7 @@ import {
 } from '@batchproof/shared';
 import type { Authenticator } from '../auth/authenticate';
 import { idempotentCreate } from '../core/idempotency';
+import { multipart } from '../core/multipart';
 import { recordId } from '../core/record-id';
 import { parse } from '../core/validate';
 import type { Database } from '../db/database';
@@ -37,7 +38,7 @@ export function documentsRouter(deps: { db: Database; authn: Authenticator }) {
   router.post(
     '/',
     ...write,
-    upload.single('file'),
+    multipart(upload.single('file')),
     idempotentCreate(db, (req, tx) =>
       domain.uploadDocument(tx, req.user!, parse(documentUploadSchema, req.body), req.file),
     ),

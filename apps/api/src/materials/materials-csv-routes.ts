@@ -2,6 +2,7 @@ import express, { Router, type RequestHandler } from 'express';
 import multer from 'multer';
 import type { Database } from '../db/database';
 import { AppError } from '../core/app-error';
+import { multipart } from '../core/multipart';
 import { checkMaterialsCsv, exportMaterialsCsv, importMaterialsCsv } from './materials-csv';
 
 /** Largest CSV accepted, bytes. */
@@ -13,7 +14,7 @@ const csvUpload = multer({
 // A CSV arrives either as a multipart file (a form) or as a text/csv body (a script).
 const csvBody: RequestHandler[] = [
   express.text({ type: ['text/csv', 'text/plain'], limit: CSV_MAX_BYTES }),
-  csvUpload.single('file'),
+  multipart(csvUpload.single('file')),
 ];
 
 function csvText(req: express.Request): string {

@@ -15,6 +15,8 @@ export const errorCodeSchema = z.enum([
   'release_blocked',
   /** An `Idempotency-Key` already used for a different request. */
   'idempotency_key_reused',
+  /** The database cannot be reached right now (503); the request may be retried. */
+  'service_unavailable',
   'internal',
 ]);
 export type ErrorCode = z.infer<typeof errorCodeSchema>;

@@ -1,0 +1,386 @@
+import fc from 'fast-check';
+import type { Express } from 'express';
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { errorEnvelopeSchema } from '@batchproof/shared';
+import { aBathProfile, aDraft, aFormula } from '../../fixtures/builders/formula-builder';
+import { aLot } from '../../fixtures/builders/lot-builder';
+import { aFragrance, aMaterial, aSupplier } from '../../fixtures/builders/material-builder';
+import { pdfBytes } from '../../fixtures/builders/document-files';
+import { startApiHarness, TEST_JWT_SECRET, type ApiHarness } from '../support/api-harness';
+import { hostileBody } from '../support/hostile-values';
+import { buildLot, buildMaterial, buildSupplier } from '../support/row-builders';
+import {
+  addMember,
+  buildWorkshop,
+  uniqueEmail,
+  type BuiltWorkshop,
+} from '../support/workshop-builder';
+
+// Every POST, PUT and PATCH route gets bodies built from its valid body with hostile values put
+// in (NUL, lone surrogates, year 0, numbers beyond any column …) or any hostile value at all, and
+// must never answer 5xx. The run counts stay small so the suite stays quick; routes that hash a
+// password (bcrypt, cost 12) get fewer.
+const RUNS = 30;
+const BCRYPT_RUNS = 8;
+
+let h: ApiHarness;
+let w: BuiltWorkshop;
+beforeAll(async () => {
+  h = await startApiHarness();
+  w = await buildWorkshop(h.handle.db, TEST_JWT_SECRET, { roles: ['owner', 'viewer'] });
+});
+afterAll(() => h.close());
+
+type Send = (app: Express, path: string, token: string, body: unknown) => request.Test;
+
+const json: (method: 'post' | 'put' | 'patch') => Send = (method) => (app, path, token, body) => {
+  const started = request(app)[method](path);
+  return started
+    .set('Authorization', `Bearer ${token}`)
+    .set('Content-Type', 'application/json')
+    .send(JSON.stringify(body) ?? 'null');
+};
+
+/** The CSV import takes text: a header and rows of cells, some of them hostile. */
+const csv: Send = (app, path, token, body) =>
+  request(app)
+    .post(path)
+    .set('Authorization', `Bearer ${token}`)
+    .set('Content-Type', 'text/csv')
+    .send(toCsv(body));
+
+function toCsv(body: unknown): string {
+  if (!body || typeof body !== 'object' || Array.isArray(body)) return String(body);
+  const row = body as Record<string, unknown>;
+  const cell = (v: unknown) =>
+    `"${(typeof v === 'string' ? v : (JSON.stringify(v) ?? '')).replaceAll('"', '""')}"`;
+  return `${Object.keys(row).join(',')}\n${Object.values(row).map(cell).join(',')}\n`;
+}
+
+/** A document upload: every form field is text; the file is a small PDF. */
+const upload: Send = (app, path, token, body) => {
+  const req = request(app).post(path).set('Authorization', `Bearer ${token}`);
+  const fields = body && typeof body === 'object' ? Object.entries(body) : [['title', body]];
+  for (const [name, value] of fields) {
+    req.field(
+      String(name) || 'x',
+      typeof value === 'string' ? value : String(JSON.stringify(value)),
+    );
+  }
+  return req.attach('file', pdfBytes(), 'sds.pdf');
+};
+
+interface FuzzCase {
+  route: string;
+  /** Path, valid body and caller for this route, made once before its runs. */
+  prepare: () => Promise<{ path: string; valid: unknown; token?: string }>;
+  send: Send;
+  runs?: number;
+}
+
+const db = () => h.handle.db;
+const material = async () => (await buildMaterial(db(), w.id)).id;
+const formula = async () => {
+  const res = await json('post')(
+    h.app,
+    '/api/formulas',
+    w.members.owner.token,
+    aFormula([{ materialId: await material(), grams: 100 }]),
+  );
+  return res.body.id as string;
+};
+const released = async () => {
+  const id = await formula();
+  await json('post')(h.app, `/api/formulas/${id}/versions/1/release`, w.members.owner.token, {});
+  return id;
+};
+const signUpBody = () => ({
+  workshopName: 'Fuzzed Suds',
+  name: 'Pat Fuzz',
+  email: uniqueEmail('fuzz'),
+  password: 'long-enough-password',
+});
+
+const cases: FuzzCase[] = [
+  {
+    route: 'POST /api/auth/sign-up',
+    prepare: async () => ({ path: '/api/auth/sign-up', valid: signUpBody() }),
+    send: json('post'),
+    runs: BCRYPT_RUNS,
+  },
+  {
+    route: 'POST /api/auth/sign-up/confirm',
+    prepare: async () => ({ path: '/api/auth/sign-up/confirm', valid: { token: 'x'.repeat(43) } }),
+    send: json('post'),
+  },
+  {
+    route: 'POST /api/auth/sign-in',
+    prepare: async () => ({
+      path: '/api/auth/sign-in',
+      valid: { email: w.members.viewer.email, password: 'wrong-password' },
+    }),
+    send: json('post'),
+    runs: BCRYPT_RUNS,
+  },
+  {
+    route: 'POST /api/auth/refresh',
+    prepare: async () => ({ path: '/api/auth/refresh', valid: {} }),
+    send: json('post'),
+  },
+  {
+    route: 'POST /api/auth/sign-out',
+    prepare: async () => ({ path: '/api/auth/sign-out', valid: {} }),
+    send: json('post'),
+  },
+  {
+    route: 'POST /api/auth/sign-out-everywhere',
+    // A member of its own, since signing out everywhere ends that member's tokens.
+    prepare: async () => ({
+      path: '/api/auth/sign-out-everywhere',
+      valid: {},
+      token: (await addMember(db(), TEST_JWT_SECRET, w.id, 'viewer')).token,
+    }),
+    send: json('post'),
+  },
+  {
+    route: 'POST /api/auth/invitations/accept',
+    prepare: async () => ({
+      path: '/api/auth/invitations/accept',
+      valid: { token: 'x'.repeat(43), name: 'Pat', password: 'long-enough-password' },
+    }),
+    send: json('post'),
+    runs: BCRYPT_RUNS,
+  },
+  {
+    route: 'POST /api/auth/password-reset/request',
+    prepare: async () => ({
+      path: '/api/auth/password-reset/request',
+      valid: { email: w.members.viewer.email },
+    }),
+    send: json('post'),
+    runs: BCRYPT_RUNS,
+  },
+  {
+    route: 'POST /api/auth/password-reset/complete',
+    prepare: async () => ({
+      path: '/api/auth/password-reset/complete',
+      valid: { token: 'x'.repeat(43), password: 'long-enough-password' },
+    }),
+    send: json('post'),
+    runs: BCRYPT_RUNS,
+  },
+  {
+    route: 'POST /api/members/invitations',
+    prepare: async () => ({
+      path: '/api/members/invitations',
+      valid: { email: uniqueEmail('invitee'), role: 'viewer' },
+    }),
+    send: json('post'),
+  },
+  {
+    route: 'PATCH /api/members/:id',
+    prepare: async () => ({
+      path: `/api/members/${(await addMember(db(), TEST_JWT_SECRET, w.id, 'viewer')).id}`,
+      valid: { role: 'production' },
+    }),
+    send: json('patch'),
+  },
+  {
+    route: 'POST /api/evaluations',
+    prepare: async () => ({
+      path: '/api/evaluations',
+      valid: {
+        asOf: '2026-01-01',
+        markets: ['US', 'EU'],
+        product: {
+          name: 'Fizz',
+          use: 'rinse-off',
+          contact: { mucousMembranes: true, eyeArea: false, lips: false },
+          inBath: true,
+          adultsOnly: false,
+          ifraCategory: '9',
+          netQuantity: { amount: 150, unit: 'g' },
+        },
+        lines: [
+          {
+            grams: 100,
+            material: { name: 'Bicarb', inci: 'Sodium Bicarbonate', functions: ['buffering'] },
+          },
+        ],
+      },
+    }),
+    send: json('post'),
+  },
+  {
+    route: 'POST /api/suppliers',
+    prepare: async () => ({ path: '/api/suppliers', valid: aSupplier() }),
+    send: json('post'),
+  },
+  {
+    route: 'PUT /api/suppliers/:id',
+    prepare: async () => ({
+      path: `/api/suppliers/${(await buildSupplier(db(), w.id)).id}`,
+      valid: aSupplier(),
+    }),
+    send: json('put'),
+  },
+  {
+    route: 'POST /api/materials',
+    prepare: async () => ({ path: '/api/materials', valid: aFragrance() }),
+    send: json('post'),
+  },
+  {
+    route: 'PUT /api/materials/:id',
+    prepare: async () => ({
+      path: `/api/materials/${await material()}`,
+      valid: aMaterial({
+        calibrations: [{ unit: 'cup', amount: 1, grams: 200, measuredOn: '2025-01-01' }],
+      }),
+    }),
+    send: json('put'),
+  },
+  {
+    route: 'POST /api/materials/import/preview',
+    prepare: async () => ({
+      path: '/api/materials/import/preview',
+      valid: { tradeName: 'Salt', inci: 'Sodium Chloride', category: 'base', notes: 'n' },
+    }),
+    send: csv,
+  },
+  {
+    route: 'POST /api/materials/import',
+    prepare: async () => ({
+      path: '/api/materials/import',
+      valid: { tradeName: 'Salt', inci: 'Sodium Chloride', category: 'base', notes: 'n' },
+    }),
+    send: csv,
+  },
+  {
+    route: 'POST /api/documents',
+    prepare: async () => ({
+      path: '/api/documents',
+      valid: { kind: 'sds', title: 'SDS', issuedOn: '2025-01-01', materialId: await material() },
+    }),
+    send: upload,
+  },
+  {
+    route: 'POST /api/lots',
+    prepare: async () => ({ path: '/api/lots', valid: aLot(await material()) }),
+    send: json('post'),
+  },
+  {
+    route: 'PUT /api/lots/:id',
+    prepare: async () => {
+      const m = await material();
+      return { path: `/api/lots/${(await buildLot(db(), w.id, m)).id}`, valid: aLot(m) };
+    },
+    send: json('put'),
+  },
+  {
+    route: 'POST /api/formulas',
+    prepare: async () => ({
+      path: '/api/formulas',
+      valid: aFormula([{ materialId: await material(), grams: 100 }]),
+    }),
+    send: json('post'),
+  },
+  {
+    route: 'PATCH /api/formulas/:id',
+    prepare: async () => ({
+      path: `/api/formulas/${await formula()}`,
+      valid: { name: 'Renamed', productType: 'fizzer', notes: null },
+    }),
+    send: json('patch'),
+  },
+  {
+    route: 'POST /api/formulas/:id/versions',
+    prepare: async () => ({
+      path: `/api/formulas/${await released()}/versions`,
+      valid: { fromVersion: 1 },
+    }),
+    send: json('post'),
+  },
+  {
+    route: 'PUT /api/formulas/:id/versions/:n',
+    prepare: async () => ({
+      path: `/api/formulas/${await formula()}/versions/1`,
+      valid: {
+        ...aDraft([]),
+        lines: undefined,
+        byPercent: { batchGrams: 500, lines: [{ materialId: await material(), percent: 100 }] },
+      },
+    }),
+    send: json('put'),
+  },
+  {
+    route: 'PATCH /api/formulas/:id/versions/:n',
+    prepare: async () => ({
+      path: `/api/formulas/${await formula()}/versions/1`,
+      valid: { notes: 'n', profile: aBathProfile() },
+    }),
+    send: json('patch'),
+  },
+  {
+    route: 'POST /api/formulas/:id/versions/:n/release',
+    prepare: async () => ({
+      path: `/api/formulas/${await formula()}/versions/1/release`,
+      valid: { override: { reason: 'Checked by hand with the assessor' } },
+    }),
+    send: json('post'),
+  },
+  {
+    route: 'POST /api/formulas/:id/versions/:n/scale',
+    prepare: async () => ({
+      path: `/api/formulas/${await formula()}/versions/1/scale`,
+      valid: { units: 12, unitMassGrams: 150, lossPercent: 2 },
+    }),
+    send: json('post'),
+  },
+];
+
+/** Every POST, PUT and PATCH route the app serves, read from its routers. */
+function writeRoutes(app: Express): string[] {
+  interface Layer {
+    rawPath?: string;
+    route?: { path: string; methods: Record<string, boolean> };
+    handle?: { stack?: Layer[] };
+  }
+  const found: string[] = [];
+  const walk = (stack: Layer[], prefix: string) => {
+    for (const layer of stack) {
+      if (layer.route) {
+        const path = `${prefix}${layer.route.path}`.replace(/(.)\/$/, '$1');
+        for (const [method, on] of Object.entries(layer.route.methods)) {
+          if (on && ['post', 'put', 'patch'].includes(method)) {
+            found.push(`${method.toUpperCase()} ${path}`);
+          }
+        }
+      } else if (layer.handle?.stack) {
+        walk(layer.handle.stack, prefix + (layer.rawPath === '/' ? '' : (layer.rawPath ?? '')));
+      }
+    }
+  };
+  walk((app as unknown as { router: { stack: Layer[] } }).router.stack, '');
+  return found;
+}
+
+describe('hostile bodies on every write route', () => {
+  it('covers every POST, PUT and PATCH route the app serves', () => {
+    expect(cases.map((c) => c.route).sort()).toEqual(writeRoutes(h.app).sort());
+  });
+
+  for (const c of cases) {
+    it(`${c.route} never answers 5xx, and every refusal is the error envelope`, async () => {
+      const { path, valid, token = w.members.owner.token } = await c.prepare();
+      await fc.assert(
+        fc.asyncProperty(hostileBody(valid), async (body) => {
+          const res = await c.send(h.app, path, token, body);
+          expect(res.status, JSON.stringify(body)).toBeLessThan(500);
+          if (res.status >= 400) errorEnvelopeSchema.parse(res.body);
+        }),
+        { numRuns: c.runs ?? RUNS },
+      );
+    });
+  }
+});
