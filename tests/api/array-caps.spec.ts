@@ -1,5 +1,5 @@
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import {
   MAX_BLEND_COMPONENTS,
   MAX_FUNCTIONS,
@@ -10,19 +10,10 @@ import {
 } from '@batchproof/shared';
 import { aDraft, aBathProfile } from '../../fixtures/builders/formula-builder';
 import { aFragrance } from '../../fixtures/builders/material-builder';
-import type { ApiHarness } from '../support/api-harness';
 import { bearer } from '../support/auth-header';
-import { startFormulaWorkspace } from '../support/formula-workspace';
-import type { BuiltWorkshop } from '../support/workshop-builder';
+import { formulaWorkspaceForFile } from '../support/formula-workspace';
 
-let h: ApiHarness;
-let w: BuiltWorkshop;
-let f$: Awaited<ReturnType<typeof startFormulaWorkspace>>;
-beforeAll(async () => {
-  f$ = await startFormulaWorkspace();
-  ({ h, w } = f$);
-});
-afterAll(() => h.close());
+const f$ = formulaWorkspaceForFile();
 
 const times = <T>(n: number, make: (i: number) => T) =>
   Array.from({ length: n }, (_, i) => make(i));
@@ -49,7 +40,7 @@ const evaluation = (
 });
 
 const evaluate = (body: object) =>
-  request(h.app).post('/api/evaluations').set(bearer(w.members.viewer)).send(body);
+  request(f$.h.app).post('/api/evaluations').set(bearer(f$.w.members.viewer)).send(body);
 
 describe('every array a write route takes has a cap', () => {
   it('POST /api/evaluations with 5,000 lines answers 400 with fieldErrors.lines', async () => {
@@ -91,9 +82,9 @@ describe('every array a write route takes has a cap', () => {
   it('POST /api/materials with a certificate of too many IFRA categories answers 400', async () => {
     const fragrance = aFragrance();
     const maxima = Object.fromEntries(times(MAX_IFRA_CATEGORIES + 1, (i) => [`${i + 1}`, 1]));
-    const res = await request(h.app)
+    const res = await request(f$.h.app)
       .post('/api/materials')
-      .set(bearer(w.members.formulator))
+      .set(bearer(f$.w.members.formulator))
       .send({
         ...fragrance,
         ifraCertificate: { ...fragrance.ifraCertificate!, maxPercentByIfraCategory: maxima },
@@ -106,9 +97,9 @@ describe('every array a write route takes has a cap', () => {
     const f = await f$.createFormula();
     const lines = times(MAX_LINES + 1, () => ({ materialId: f$.m.bicarb, grams: 1 }));
     const profile = aBathProfile({ markets: times(MAX_MARKETS + 1, () => 'US' as const) });
-    const res = await request(h.app)
+    const res = await request(f$.h.app)
       .put(f$.versionUrl(f.id, 1))
-      .set(bearer(w.members.formulator))
+      .set(bearer(f$.w.members.formulator))
       .send(aDraft(lines, { profile }));
     expect(res.status).toBe(400);
     expect(res.body.error.fieldErrors.lines).toEqual([`A formula has at most ${MAX_LINES} lines`]);

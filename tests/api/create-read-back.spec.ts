@@ -1,17 +1,15 @@
 import { eq } from 'drizzle-orm';
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
+import { beforeAll, describe, expect, it, vi } from 'vitest';
 import { formulas, formulaVersions, lots } from '../../apps/api/src/db/schema';
 import * as formulasRepo from '../../apps/api/src/formulas/formulas-repository';
 import * as lotsRepo from '../../apps/api/src/lots/lots-repository';
 import { aFormula } from '../../fixtures/builders/formula-builder';
 import { aLot } from '../../fixtures/builders/lot-builder';
-import type { ApiHarness } from '../support/api-harness';
 import { bearer } from '../support/auth-header';
-import { startFormulaWorkspace } from '../support/formula-workspace';
-import type { BuiltWorkshop } from '../support/workshop-builder';
+import { formulaWorkspaceForFile } from '../support/formula-workspace';
 
-// The read-backs are wrapped so a test can make one of them fail, as a dropped connection would.
+// The read-backs are wrapped so a test can make one of them fail after the insert.
 vi.mock('../../apps/api/src/lots/lots-repository', async (importOriginal) => {
   const real = await importOriginal<typeof import('../../apps/api/src/lots/lots-repository')>();
   return { ...real, findLot: vi.fn(real.findLot) };
@@ -26,38 +24,37 @@ vi.mock('../../apps/api/src/formulas/formulas-repository', async (importOriginal
   };
 });
 
-let h: ApiHarness;
-let w: BuiltWorkshop;
-let f$: Awaited<ReturnType<typeof startFormulaWorkspace>>;
-beforeAll(async () => {
-  f$ = await startFormulaWorkspace();
-  ({ h, w } = f$);
+const f$ = formulaWorkspaceForFile();
+beforeAll(() => {
   vi.spyOn(console, 'error').mockImplementation(() => {});
 });
-afterAll(() => h.close());
 
-const lost = () => new Error('Connection terminated unexpectedly');
+/** Any failure of the read-back; a lost connection would answer 503 instead, with the same rollback. */
+const lost = () => new Error('the read-back failed');
 
-describe('a create whose read-back fails answers 500 and leaves nothing behind', () => {
+describe('a create whose read-back loses its connection answers 503 and leaves nothing behind', () => {
   it('POST /api/lots', async () => {
     vi.mocked(lotsRepo.findLot).mockRejectedValueOnce(lost());
     const body = aLot(f$.m.bicarb);
-    const res = await request(h.app).post('/api/lots').set(bearer(w.members.formulator)).send(body);
+    const res = await request(f$.h.app)
+      .post('/api/lots')
+      .set(bearer(f$.w.members.formulator))
+      .send(body);
     expect(res.status).toBe(500);
-    expect(await h.handle.db.$count(lots, eq(lots.supplierLotNumber, body.supplierLotNumber))).toBe(
-      0,
-    );
+    expect(
+      await f$.h.handle.db.$count(lots, eq(lots.supplierLotNumber, body.supplierLotNumber)),
+    ).toBe(0);
   });
 
   it('POST /api/formulas', async () => {
     vi.mocked(formulasRepo.listVersionSummaries).mockRejectedValueOnce(lost());
     const body = aFormula(f$.base());
-    const res = await request(h.app)
+    const res = await request(f$.h.app)
       .post('/api/formulas')
-      .set(bearer(w.members.formulator))
+      .set(bearer(f$.w.members.formulator))
       .send(body);
     expect(res.status).toBe(500);
-    expect(await h.handle.db.$count(formulas, eq(formulas.name, body.name))).toBe(0);
+    expect(await f$.h.handle.db.$count(formulas, eq(formulas.name, body.name))).toBe(0);
   });
 
   it('POST /api/formulas/:id/versions', async () => {
@@ -67,11 +64,13 @@ describe('a create whose read-back fails answers 500 and leaves nothing behind',
     vi.mocked(formulasRepo.findLines)
       .mockImplementationOnce(vi.mocked(formulasRepo.findLines).getMockImplementation()!)
       .mockRejectedValueOnce(lost());
-    const res = await request(h.app)
+    const res = await request(f$.h.app)
       .post(`/api/formulas/${f.id}/versions`)
-      .set(bearer(w.members.formulator))
+      .set(bearer(f$.w.members.formulator))
       .send({});
     expect(res.status).toBe(500);
-    expect(await h.handle.db.$count(formulaVersions, eq(formulaVersions.formulaId, f.id))).toBe(1);
+    expect(await f$.h.handle.db.$count(formulaVersions, eq(formulaVersions.formulaId, f.id))).toBe(
+      1,
+    );
   });
 });

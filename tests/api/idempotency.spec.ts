@@ -1,6 +1,6 @@
 import { and, eq } from 'drizzle-orm';
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { errorEnvelopeSchema } from '@batchproof/shared';
 import {
   documents,
@@ -12,32 +12,24 @@ import {
 import { pdfBytes } from '../../fixtures/builders/document-files';
 import { aFormula } from '../../fixtures/builders/formula-builder';
 import { aLot } from '../../fixtures/builders/lot-builder';
-import type { ApiHarness } from '../support/api-harness';
 import { bearer } from '../support/auth-header';
-import { startFormulaWorkspace } from '../support/formula-workspace';
-import type { BuiltMember, BuiltWorkshop } from '../support/workshop-builder';
+import { formulaWorkspaceForFile } from '../support/formula-workspace';
+import type { BuiltMember } from '../support/workshop-builder';
 
-let h: ApiHarness;
-let w: BuiltWorkshop;
-let f$: Awaited<ReturnType<typeof startFormulaWorkspace>>;
-beforeAll(async () => {
-  f$ = await startFormulaWorkspace();
-  ({ h, w } = f$);
-});
-afterAll(() => h.close());
+const f$ = formulaWorkspaceForFile();
 
 const KEY = 'Idempotency-Key';
 const newKey = () => crypto.randomUUID();
 
-function postLot(body: object, key?: string, who: BuiltMember = w.members.formulator) {
-  const req = request(h.app).post('/api/lots').set(bearer(who));
+function postLot(body: object, key?: string, who: BuiltMember = f$.w.members.formulator) {
+  const req = request(f$.h.app).post('/api/lots').set(bearer(who));
   return (key ? req.set(KEY, key) : req).send(body);
 }
 
 const lotsNumbered = (supplierLotNumber: string) =>
-  h.handle.db.$count(
+  f$.h.handle.db.$count(
     lots,
-    and(eq(lots.workshopId, w.id), eq(lots.supplierLotNumber, supplierLotNumber)),
+    and(eq(lots.workshopId, f$.w.id), eq(lots.supplierLotNumber, supplierLotNumber)),
   );
 
 describe('POST /api/lots with an Idempotency-Key', () => {
@@ -87,8 +79,8 @@ describe('POST /api/lots with an Idempotency-Key', () => {
   it('keys belong to one user: another member’s request with the same key creates its own lot', async () => {
     const body = aLot(f$.m.bicarb);
     const key = newKey();
-    const mine = await postLot(body, key, w.members.formulator);
-    const theirs = await postLot(body, key, w.members.owner);
+    const mine = await postLot(body, key, f$.w.members.formulator);
+    const theirs = await postLot(body, key, f$.w.members.owner);
     expect(theirs.status).toBe(201);
     expect(theirs.body.id).not.toBe(mine.body.id);
   });
@@ -115,7 +107,7 @@ describe('POST /api/lots with an Idempotency-Key', () => {
     const body = aLot(f$.m.bicarb);
     const key = newKey();
     await postLot(body, key);
-    await h.handle.db
+    await f$.h.handle.db
       .update(idempotencyKeys)
       .set({ createdAt: new Date(Date.now() - 25 * 3_600_000) })
       .where(eq(idempotencyKeys.key, key));
@@ -130,9 +122,9 @@ describe('the other create routes take an Idempotency-Key', () => {
     const body = aFormula(f$.base(), { name: `Retried ${newKey()}` });
     const key = newKey();
     const send = () =>
-      request(h.app)
+      request(f$.h.app)
         .post('/api/formulas')
-        .set(bearer(w.members.formulator))
+        .set(bearer(f$.w.members.formulator))
         .set(KEY, key)
         .send(body);
     const first = await send();
@@ -140,7 +132,7 @@ describe('the other create routes take an Idempotency-Key', () => {
     expect(first.status).toBe(201);
     expect(retry.status).toBe(201);
     expect(retry.body.id).toBe(first.body.id);
-    expect(await h.handle.db.$count(formulas, eq(formulas.name, body.name))).toBe(1);
+    expect(await f$.h.handle.db.$count(formulas, eq(formulas.name, body.name))).toBe(1);
   });
 
   it('POST /api/formulas/:id/versions: a retry answers the same draft and creates one version', async () => {
@@ -148,9 +140,9 @@ describe('the other create routes take an Idempotency-Key', () => {
     expect((await f$.release(f.id, 1)).status).toBe(200);
     const key = newKey();
     const send = () =>
-      request(h.app)
+      request(f$.h.app)
         .post(`/api/formulas/${f.id}/versions`)
-        .set(bearer(w.members.formulator))
+        .set(bearer(f$.w.members.formulator))
         .set(KEY, key)
         .send({});
     const first = await send();
@@ -158,16 +150,18 @@ describe('the other create routes take an Idempotency-Key', () => {
     expect(first.status).toBe(201);
     expect(retry.status).toBe(201);
     expect(retry.body.id).toBe(first.body.id);
-    expect(await h.handle.db.$count(formulaVersions, eq(formulaVersions.formulaId, f.id))).toBe(2);
+    expect(await f$.h.handle.db.$count(formulaVersions, eq(formulaVersions.formulaId, f.id))).toBe(
+      2,
+    );
   });
 
   it('POST /api/documents: a retried upload answers the same document and stores one; another file with the key is 422', async () => {
     const key = newKey();
     const title = `Retried SDS ${newKey()}`;
     const send = (file: Buffer) =>
-      request(h.app)
+      request(f$.h.app)
         .post('/api/documents')
-        .set(bearer(w.members.formulator))
+        .set(bearer(f$.w.members.formulator))
         .set(KEY, key)
         .field('materialId', f$.m.bicarb)
         .field('kind', 'sds')
@@ -179,6 +173,6 @@ describe('the other create routes take an Idempotency-Key', () => {
     expect(first.status).toBe(201);
     expect(retry.body.id).toBe(first.body.id);
     expect((await send(pdfBytes(4096))).status).toBe(422);
-    expect(await h.handle.db.$count(documents, eq(documents.title, title))).toBe(1);
+    expect(await f$.h.handle.db.$count(documents, eq(documents.title, title))).toBe(1);
   });
 });

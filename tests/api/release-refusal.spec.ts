@@ -1,21 +1,12 @@
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { errorEnvelopeSchema } from '@batchproof/shared';
 import { aMaterial, anUltramarineBlend } from '../../fixtures/builders/material-builder';
 import { buildMaterial } from '../support/row-builders';
-import type { BuiltWorkshop } from '../support/workshop-builder';
-import type { ApiHarness } from '../support/api-harness';
 import { bearer } from '../support/auth-header';
-import { startFormulaWorkspace } from '../support/formula-workspace';
+import { formulaWorkspaceForFile } from '../support/formula-workspace';
 
-let h: ApiHarness;
-let w: BuiltWorkshop;
-let f$: Awaited<ReturnType<typeof startFormulaWorkspace>>;
-beforeAll(async () => {
-  f$ = await startFormulaWorkspace();
-  ({ h, w } = f$);
-});
-afterAll(() => h.close());
+const f$ = formulaWorkspaceForFile();
 
 /**
  * A formula saved while its colourant was a plain mica, after which the material record changed
@@ -29,12 +20,12 @@ async function draftThatBecameBlocked() {
     category: 'colourant',
     functions: ['colorant'],
   });
-  const colourant = await buildMaterial(h.handle.db, w.id, plain);
+  const colourant = await buildMaterial(f$.h.handle.db, f$.w.id, plain);
   const f = await f$.createFormula([...f$.base(), { materialId: colourant.id, grams: 2 }]);
   expect((await f$.getVersion(f.id, 1)).counts?.block).toBe(0);
-  const changed = await request(h.app)
+  const changed = await request(f$.h.app)
     .put(`/api/materials/${colourant.id}`)
-    .set(bearer(w.members.formulator))
+    .set(bearer(f$.w.members.formulator))
     .send(anUltramarineBlend({ tradeName: 'Shimmer' }));
   expect(changed.status).toBe(200);
   return f;
@@ -66,7 +57,7 @@ describe('POST /api/formulas/:id/versions/:n/release refused', () => {
 
   it('the formulator’s override is refused with 403, and the fresh evaluation is stored too', async () => {
     const f = await draftThatBecameBlocked();
-    const res = await f$.release(f.id, 1, w.members.formulator, {
+    const res = await f$.release(f.id, 1, f$.w.members.formulator, {
       override: { reason: 'Assessor approved the exception in writing' },
     });
     expect(res.status).toBe(403);
@@ -75,9 +66,9 @@ describe('POST /api/formulas/:id/versions/:n/release refused', () => {
 
   it('a version that cannot be checked is refused with 409 conflict and no findings', async () => {
     const f = await f$.createFormula();
-    await request(h.app)
+    await request(f$.h.app)
       .patch(f$.versionUrl(f.id, 1))
-      .set(bearer(w.members.formulator))
+      .set(bearer(f$.w.members.formulator))
       .send({ lines: [] });
     const res = await f$.release(f.id, 1);
     expect(res.status).toBe(409);

@@ -1,5 +1,5 @@
 import request from 'supertest';
-import { expect } from 'vitest';
+import { afterAll, beforeAll, expect } from 'vitest';
 import { formulaSchema, formulaVersionSchema } from '@batchproof/shared';
 import { aFormula } from '../../fixtures/builders/formula-builder';
 import {
@@ -66,4 +66,25 @@ export async function startFormulaWorkspace() {
         .send(body);
     },
   };
+}
+
+/** The workspace {@link startFormulaWorkspace} builds. */
+export type FormulaWorkspace = Awaited<ReturnType<typeof startFormulaWorkspace>>;
+
+/**
+ * Starts a formula workspace before a spec file's tests and closes it after them. The object
+ * returned reads through to the workspace once it exists, so the file can keep it in a const.
+ */
+export function formulaWorkspaceForFile(): FormulaWorkspace {
+  let ws: FormulaWorkspace | undefined;
+  beforeAll(async () => {
+    ws = await startFormulaWorkspace();
+  });
+  afterAll(() => ws?.h.close());
+  return new Proxy({} as FormulaWorkspace, {
+    get(_target, key) {
+      if (!ws) throw new Error('The formula workspace starts in beforeAll; read it in a test.');
+      return ws[key as keyof FormulaWorkspace];
+    },
+  });
 }
