@@ -10,6 +10,7 @@ ensureNodeModules();
 const benches = [
   'libs/shared/bench/evaluate-bench.ts',
   'apps/api/bench/list-bench.ts',
+  'apps/api/bench/import-bench.ts',
   'scripts/initial-bundle-check.mjs',
 ];
 let failed = false;

@@ -3,13 +3,8 @@
 // HTTP against a listening createApp(), prints the numbers next to the targets and as a ratio to
 // a trivial query's measured in the same run (so a slower or busier machine moves both), never
 // asserts, and deletes its workshop at the end. Run: npx tsx apps/api/bench/list-bench.ts
-import { execFileSync } from 'node:child_process';
-import type { AddressInfo } from 'node:net';
-import path from 'node:path';
 import { sql } from 'drizzle-orm';
-import { buildWorkshop } from '../../../tests/support/workshop-builder';
-import { createApp } from '../src/app';
-import { applyMigrations, openDatabase } from '../src/db/database';
+import { startBench } from './bench-app';
 
 const MATERIALS = 10_000;
 const LOTS = 100_000;
@@ -17,16 +12,9 @@ const RUNS = 60;
 /** Concurrent clients of the throughput figures, and the API's default pool for them (env.ts). */
 const CLIENTS = 20;
 const POOL_SIZE = 20;
-const SECRET = 'bench-secret-that-is-at-least-32-characters';
-const root = path.resolve(import.meta.dirname, '../../..');
 
-const url =
-  process.env['TEST_DATABASE_URL'] ??
-  execFileSync('node', [path.join(root, 'scripts/test-db-url.mjs')], { encoding: 'utf8' }).trim();
-const handle = openDatabase(url, POOL_SIZE);
-await applyMigrations(handle.db, path.join(root, 'drizzle'));
-const { db } = handle;
-const w = await buildWorkshop(db, SECRET, { name: 'Bench workshop', roles: ['owner'] });
+const bench = await startBench('Bench workshop', POOL_SIZE);
+const { db, w, base } = bench;
 const wid = w.id;
 
 let t = performance.now();
@@ -48,16 +36,6 @@ console.log(
   `seeded ${MATERIALS} materials and ${LOTS} lots in ${Math.round(performance.now() - t)} ms`,
 );
 
-const app = createApp({
-  db,
-  mailer: { send: async () => undefined, close: () => undefined },
-  jwtSecret: SECRET,
-  appUrl: 'http://127.0.0.1',
-  rateLimits: { signInPerAccount: 1_000_000, signInPerAddress: 1_000_000 },
-});
-const server = app.listen(0, '127.0.0.1');
-await new Promise((resolve) => server.once('listening', resolve));
-const base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
 const headers = {
   Authorization: `Bearer ${w.members.owner.token}`,
   'Content-Type': 'application/json',
@@ -190,8 +168,6 @@ for (const r of rates) {
   console.log(`${r.label.padEnd(62)} ${rate.toFixed(0).padStart(6)} req/s${ratio}`);
 }
 
-server.close();
 t = performance.now();
-await db.execute(sql`delete from workshops where id = ${wid}`);
+await bench.close();
 console.log(`removed the bench workshop in ${Math.round(performance.now() - t)} ms`);
-await handle.close();

@@ -1,0 +1,49 @@
+// What every API bench starts from: the migrated test database, a workshop of its own with an
+// owner, and createApp() listening on a free loopback port with limits no bench reaches.
+import { execFileSync } from 'node:child_process';
+import type { AddressInfo } from 'node:net';
+import path from 'node:path';
+import { sql } from 'drizzle-orm';
+import { buildWorkshop } from '../../../tests/support/workshop-builder';
+import { createApp } from '../src/app';
+import { applyMigrations, openDatabase } from '../src/db/database';
+
+const SECRET = 'bench-secret-that-is-at-least-32-characters';
+const root = path.resolve(import.meta.dirname, '../../..');
+
+/**
+ * Opens TEST_DATABASE_URL (else the project's test database) with a pool of `poolSize`, applies
+ * the migrations, builds a workshop named `name` and serves the app. `close` stops the server,
+ * deletes the workshop and closes the pool.
+ */
+export async function startBench(name: string, poolSize: number) {
+  const url =
+    process.env['TEST_DATABASE_URL'] ??
+    execFileSync('node', [path.join(root, 'scripts/test-db-url.mjs')], {
+      encoding: 'utf8',
+    }).trim();
+  const handle = openDatabase(url, poolSize);
+  await applyMigrations(handle.db, path.join(root, 'drizzle'));
+  const { db } = handle;
+  const w = await buildWorkshop(db, SECRET, { name, roles: ['owner'] });
+  const app = createApp({
+    db,
+    mailer: { send: async () => undefined, close: () => undefined },
+    jwtSecret: SECRET,
+    appUrl: 'http://127.0.0.1',
+    rateLimits: { signInPerAccount: 1_000_000, signInPerAddress: 1_000_000 },
+  });
+  const server = app.listen(0, '127.0.0.1');
+  await new Promise((resolve) => server.once('listening', resolve));
+  const base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+  return {
+    db,
+    w,
+    base,
+    async close() {
+      server.close();
+      await db.execute(sql`delete from workshops where id = ${w.id}`);
+      await handle.close();
+    },
+  };
+}
