@@ -18,6 +18,7 @@ import {
   recordIdSchema,
   requiredText,
   storedRecordFields,
+  textField,
 } from '../records/record-fields';
 import { calibrationSummarySchema } from './calibration-summary';
 import { casProblems } from './cas-number';
@@ -57,7 +58,9 @@ const positive = (label: string) =>
 export const ifraCertificateSchema = z.object({
   maxPercentByIfraCategory: z
     .record(
-      z.string().trim().min(1, { error: 'Name the IFRA category, e.g. 9 or 5A' }),
+      textField('The IFRA category')
+        .trim()
+        .min(1, { error: 'Name the IFRA category, e.g. 9 or 5A' }),
       z
         .number({ error: 'Enter the maximum as a percentage' })
         .min(0, { error: 'A maximum cannot be negative' })
@@ -110,7 +113,9 @@ export const materialCreateSchema = z
     }),
     ec: optionalText('EC number', 100),
     functions: z
-      .array(z.string().trim().min(1, { error: 'A function cannot be empty' }).max(100))
+      .array(
+        textField('A function').trim().min(1, { error: 'A function cannot be empty' }).max(100),
+      )
       .max(MAX_FUNCTIONS, { error: `List at most ${MAX_FUNCTIONS} functions` })
       .default([]),
     category: materialCategorySchema,
