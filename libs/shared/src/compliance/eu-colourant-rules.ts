@@ -2,18 +2,13 @@ import type { EuAnnexIvColourant } from '../reference-data/eu-annex-iv-colourant
 import type { ComplianceMarket } from '../reference-data/reference-row';
 import {
   amountText,
-  INTERPRETATION_NOTE,
   verdictOf,
+  verdictTools,
   type VerdictBase,
   type VerdictWithFindings,
 } from './colourant-verdict-types';
 import type { ProductInput } from './evaluation-input-schema';
-import {
-  DEFER_TO_ASSESSOR,
-  type ComplianceFinding,
-  type FindingStatus,
-} from './evaluation-result-schema';
-import { makeFinding } from './finding-builder';
+import type { ComplianceFinding } from './evaluation-result-schema';
 import { impliedContact } from './product-types';
 
 const FIELD_TEXT = {
@@ -34,61 +29,21 @@ export function euColourantVerdict(
   product: ProductInput,
   market: ComplianceMarket,
 ): VerdictWithFindings {
-  const finding = (f: Omit<Parameters<typeof makeFinding>[0], 'market' | 'subject' | 'lines'>) =>
-    makeFinding({
-      ...f,
-      market,
-      subject: base.subject,
-      lines: [...base.lines, ...base.otherFormLines],
-    });
+  const { finding, notListed, notPermitted: block } = verdictTools(base, market);
   if (!row) {
-    const source = 'Regulation (EC) No 1223/2009, Annex IV';
     const nanoNote = base.nano
       ? ' Annex IV covers the nano form of a colourant only where an entry names it (preamble to Annexes II to VI); ask your supplier which entry its nano grade falls under.'
       : '';
-    return {
-      verdict: verdictOf(base, {
-        listing: null,
-        verdict: 'not-listed',
-        conditions: [],
-        source,
-        status: null,
-      }),
-      findings: [
-        finding({
-          code: 'COLOURANT_NOT_LISTED',
-          severity: 'warn',
-          message: `${base.subject}: not in Batchproof's Annex IV list. Only colourants in Annex IV may be used; check the entry and its conditions.${nanoNote}`,
-          source,
-          status: 'C',
-        }),
-      ],
-    };
+    return notListed(
+      'COLOURANT_NOT_LISTED',
+      `${base.subject}: not in Batchproof's Annex IV list. Only colourants in Annex IV may be used; check the entry and its conditions.${nanoNote}`,
+      'Regulation (EC) No 1223/2009, Annex IV',
+      null,
+    );
   }
   const source = `${row.source}${row.annexRef ? `, entry ${row.annexRef}` : ''}`;
-  /** A block; an interpretation keeps the row's status when that is `M`, so it still only warns. */
-  const notPermitted = (why: string, interpretation = false): VerdictWithFindings => {
-    const status: FindingStatus =
-      interpretation && row.status !== 'M' ? 'interpretation' : row.status;
-    return {
-      verdict: verdictOf(base, {
-        listing: row.name,
-        verdict: 'not-permitted',
-        conditions: [],
-        source,
-        status,
-      }),
-      findings: [
-        finding({
-          code: 'COLOURANT_NOT_PERMITTED',
-          severity: 'block',
-          message: `${base.subject}: ${why} ${DEFER_TO_ASSESSOR}${interpretation ? ` ${INTERPRETATION_NOTE}` : ''}`,
-          source,
-          status,
-        }),
-      ],
-    };
-  };
+  const notPermitted = (why: string, interpretation = false) =>
+    block(row.name, row.status, why, source, interpretation);
   const implied = impliedContact(product.type);
   const lips = product.contact.lips || implied.lips;
   const eyeArea = product.contact.eyeArea || implied.eyeArea;

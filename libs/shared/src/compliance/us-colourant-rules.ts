@@ -1,19 +1,13 @@
-import type { ComplianceMarket } from '../reference-data/reference-row';
 import type { UsColourMatch } from './colourant-matching';
 import {
   amountText,
-  INTERPRETATION_NOTE,
   verdictOf,
+  verdictTools,
   type VerdictBase,
   type VerdictWithFindings,
 } from './colourant-verdict-types';
 import type { ProductInput } from './evaluation-input-schema';
-import {
-  DEFER_TO_ASSESSOR,
-  type ComplianceFinding,
-  type FindingStatus,
-} from './evaluation-result-schema';
-import { makeFinding } from './finding-builder';
+import type { ComplianceFinding } from './evaluation-result-schema';
 import { impliedContact, PRODUCT_TYPE_NAMES, productTypeFitsListing } from './product-types';
 
 const EXTERNALLY_APPLIED = '21 CFR 82.3(n)';
@@ -32,109 +26,38 @@ export function usColourantVerdict(
   match: UsColourMatch,
   product: ProductInput,
 ): VerdictWithFindings {
-  const market: ComplianceMarket = 'US';
-  const finding = (f: Omit<Parameters<typeof makeFinding>[0], 'market' | 'subject' | 'lines'>) =>
-    makeFinding({
-      ...f,
-      market,
-      subject: base.subject,
-      lines: [...base.lines, ...base.otherFormLines],
-    });
+  const { finding, notListed, notPermitted: block } = verdictTools(base, 'US');
 
   if (match.kind === 'none') {
-    const source = '21 CFR Parts 73 and 74';
-    return {
-      verdict: verdictOf(base, {
-        listing: null,
-        verdict: 'not-listed',
-        conditions: [],
-        source,
-        status: null,
-      }),
-      findings: [
-        finding({
-          code: 'COLOURANT_NOT_LISTED',
-          severity: 'warn',
-          message: `${base.subject}: not in Batchproof's list of US colour additives. In the US a colour additive may be used only if it is listed for that use; check its listing with your supplier.`,
-          source,
-          status: 'C',
-        }),
-      ],
-    };
+    return notListed(
+      'COLOURANT_NOT_LISTED',
+      `${base.subject}: not in Batchproof's list of US colour additives. In the US a colour additive may be used only if it is listed for that use; check its listing with your supplier.`,
+      '21 CFR Parts 73 and 74',
+      null,
+    );
   }
   if (match.kind === 'ambiguous') {
     const names = match.rows.map((r) => r.name).join(' and ');
-    const source = 'FDA/ICMAD regulatory information sheet (CI numbers are not unique US keys)';
-    return {
-      verdict: verdictOf(base, {
-        listing: null,
-        verdict: 'not-listed',
-        conditions: [],
-        source,
-        status: 'C',
-      }),
-      findings: [
-        finding({
-          code: 'COLOURANT_AMBIGUOUS',
-          severity: 'warn',
-          message: `${base.subject}: this CI number matches ${names}, which have different permitted uses. Enter the US name on the material so Batchproof can check it.`,
-          source,
-          status: 'C',
-        }),
-      ],
-    };
+    return notListed(
+      'COLOURANT_AMBIGUOUS',
+      `${base.subject}: this CI number matches ${names}, which have different permitted uses. Enter the US name on the material so Batchproof can check it.`,
+      'FDA/ICMAD regulatory information sheet (CI numbers are not unique US keys)',
+      'C',
+    );
   }
   if (match.kind === 'not-permitted') {
-    const source = match.row.source;
-    return {
-      verdict: verdictOf(base, {
-        listing: match.row.name,
-        verdict: 'not-permitted',
-        conditions: [],
-        source,
-        status: match.row.status,
-      }),
-      findings: [
-        finding({
-          code: 'COLOURANT_NOT_PERMITTED',
-          severity: 'block',
-          message: `${base.subject}: not permitted in US cosmetics — ${match.row.reason} ${DEFER_TO_ASSESSOR}`,
-          source,
-          status: match.row.status,
-        }),
-      ],
-    };
+    return block(
+      match.row.name,
+      match.row.status,
+      `not permitted in US cosmetics — ${match.row.reason}`,
+      match.row.source,
+    );
   }
 
   const { row, lake } = match;
   const source = `21 CFR ${row.cfrSection}`;
-  /** A block; an interpretation keeps the row's status when that is `M`, so it still only warns. */
-  const notPermitted = (
-    why: string,
-    ruleSource: string,
-    interpretation = false,
-  ): VerdictWithFindings => {
-    const status: FindingStatus =
-      interpretation && row.status !== 'M' ? 'interpretation' : row.status;
-    return {
-      verdict: verdictOf(base, {
-        listing: row.name,
-        verdict: 'not-permitted',
-        conditions: [],
-        source: ruleSource,
-        status,
-      }),
-      findings: [
-        finding({
-          code: 'COLOURANT_NOT_PERMITTED',
-          severity: 'block',
-          message: `${base.subject}: ${why} ${DEFER_TO_ASSESSOR}${interpretation ? ` ${INTERPRETATION_NOTE}` : ''}`,
-          source: ruleSource,
-          status,
-        }),
-      ],
-    };
-  };
+  const notPermitted = (why: string, ruleSource: string, interpretation = false) =>
+    block(row.name, row.status, why, ruleSource, interpretation);
   const { uses } = row;
   const implied = impliedContact(product.type);
   const eyeArea = product.contact.eyeArea || implied.eyeArea;
