@@ -7,6 +7,7 @@ export * from './reference-lists/reference-list-schema';
 export * from './reference-data/index';
 export * from './lists/list-query-schema';
 export * from './records/record-fields';
+export * from './records/housekeeping-schema';
 export * from './suppliers/supplier-schema';
 export * from './materials/material-schema';
 export * from './materials/calibration-summary';

@@ -6,6 +6,7 @@ import {
   requiredText,
   storedRecordFields,
 } from '../records/record-fields';
+import { archivedAtField, includeArchivedSchema } from '../records/housekeeping-schema';
 
 /** Kinds of supplier document. */
 export const DOCUMENT_KINDS = [
@@ -30,7 +31,8 @@ export const DOCUMENT_STALE_DAYS = 365;
 
 /**
  * The form fields sent with an uploaded file (multipart). A document belongs to exactly one
- * material or one lot.
+ * material or one lot. `replacesId` names an older document of the same material or lot that
+ * this one replaces: the old one stays on file as history, marked superseded.
  */
 export const documentUploadSchema = z
   .object({
@@ -42,6 +44,9 @@ export const documentUploadSchema = z
       .optional()
       .or(z.literal('').transform(() => undefined)),
     lotId: recordIdSchema('lot')
+      .optional()
+      .or(z.literal('').transform(() => undefined)),
+    replacesId: recordIdSchema('document to replace')
       .optional()
       .or(z.literal('').transform(() => undefined)),
   })
@@ -69,15 +74,24 @@ export const documentSchema = z.object({
   mimeType: z.string(),
   sizeBytes: z.number().int(),
   sha256: z.string(),
+  /** The older document this one replaced, if any. */
+  replacesId: z.string().nullable().optional(),
+  /** The newer document that replaced this one: it is kept as history, no longer current. */
+  supersededById: z.string().nullable().optional(),
+  archivedAt: archivedAtField,
 });
 export type SupplierDocument = z.infer<typeof documentSchema>;
 export const documentListSchema = z.object({ items: z.array(documentSchema) });
 
-/** Query of `GET /api/documents`: the documents of one material or one lot. */
+/**
+ * Query of `GET /api/documents`: the documents of one material or one lot, superseded ones
+ * included (as history); archived ones only with `includeArchived=true`.
+ */
 export const documentListQuerySchema = z
   .object({
     materialId: recordIdSchema('material').optional(),
     lotId: recordIdSchema('lot').optional(),
+    includeArchived: includeArchivedSchema,
   })
   .superRefine((d, ctx) => {
     if (!d.materialId === !d.lotId) {

@@ -2,6 +2,7 @@ import * as z from 'zod';
 import { evaluationResultSchema } from '../compliance/evaluation-result-schema';
 import { listQuerySchema, pageSchema } from '../lists/list-query-schema';
 import { complianceMarketSchema } from '../reference-data/reference-row';
+import { archivedAtField, includeArchivedSchema } from '../records/housekeeping-schema';
 import {
   optionalText,
   quantity,
@@ -222,6 +223,7 @@ export const formulaSchema = z.object({
   productType: productTypeSchema,
   notes: z.string().nullable(),
   versions: z.array(versionSummarySchema),
+  archivedAt: archivedAtField,
 });
 export type Formula = z.infer<typeof formulaSchema>;
 
@@ -236,11 +238,13 @@ export const formulaListItemSchema = z.object({
   releasedVersion: z.number().int().nullable(),
   /** The latest version's findings by severity; null before its first evaluation. */
   latestCounts: evaluationCountsSchema.nullable(),
+  archivedAt: archivedAtField,
 });
+/** Query of `GET /api/formulas`; archived formulas only with `includeArchived=true`. */
 export const formulaListQuerySchema = listQuerySchema(
   ['name', 'productType', 'createdAt', 'updatedAt'],
   'name',
-).extend({ productType: productTypeSchema.optional() });
+).extend({ productType: productTypeSchema.optional(), includeArchived: includeArchivedSchema });
 export type FormulaListQuery = z.output<typeof formulaListQuerySchema>;
 export const formulaPageSchema = pageSchema(formulaListItemSchema);
 /** One page of the formulas list. */

@@ -1,5 +1,7 @@
 import * as z from 'zod';
+import { addDays, todayIso } from '../dates/calendar-day';
 import { listQuerySchema, pageSchema } from '../lists/list-query-schema';
+import { warningsField } from '../records/housekeeping-schema';
 import {
   isoDate,
   optionalIsoDate,
@@ -14,6 +16,14 @@ import {
 export const LOT_UNITS = ['g', 'kg', 'mL', 'L', 'units'] as const;
 export const lotUnitSchema = z.enum(LOT_UNITS, { error: `Choose a unit: ${LOT_UNITS.join(', ')}` });
 export type LotUnit = z.infer<typeof lotUnitSchema>;
+
+/**
+ * The latest received date accepted: tomorrow as the UTC calendar day. "Today" is the UTC day
+ * (see `dates/calendar-day.ts`), and a maker east of Greenwich (up to UTC+14) is already on the
+ * next day while UTC is not, so one day of tolerance lets them record today's delivery. Anything
+ * later is a typing mistake: goods cannot arrive in the future.
+ */
+export const latestReceivedOn = (now: Date = new Date()) => addDays(todayIso(now), 1);
 
 /** Goods-in of one supplier lot of a material (create and full update). */
 export const lotCreateSchema = z
@@ -32,6 +42,14 @@ export const lotCreateSchema = z
     notes: optionalText('Notes', 2000),
   })
   .superRefine((lot, ctx) => {
+    // Both are YYYY-MM-DD, so text order is calendar order.
+    if (lot.receivedOn > latestReceivedOn()) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['receivedOn'],
+        message: 'The received date cannot be in the future',
+      });
+    }
     if (lot.expiresOn && lot.expiresOn < lot.receivedOn) {
       ctx.addIssue({
         code: 'custom',
@@ -61,6 +79,8 @@ export const lotSchema = z.object({
   notes: z.string().nullable(),
   /** Quantity received minus everything batches consumed, in the lot's unit. */
   stockOnHand: z.number(),
+  /** On a create or update: the lot number was already received for this material. */
+  warnings: warningsField,
 });
 export type Lot = z.infer<typeof lotSchema>;
 

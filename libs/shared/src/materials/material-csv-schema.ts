@@ -54,6 +54,12 @@ export const materialImportRowSchema = z.object({
   valid: z.boolean(),
   /** Messages per field, e.g. `{ components: ['Components add up to 90 % …'] }`. */
   errors: z.record(z.string(), z.array(z.string())),
+  /**
+   * The workshop's material this row matches (same trade name, ignoring case and spaces, and the
+   * same supplier): imported as it stands it would be a second copy; with `existing=update` it
+   * replaces that material's fields instead. Null when the row is new.
+   */
+  existingId: z.string().nullable().optional(),
 });
 export type MaterialImportRow = z.infer<typeof materialImportRowSchema>;
 
@@ -67,12 +73,29 @@ export const materialImportPreviewSchema = z.object({
   rows: z.array(materialImportRowSchema),
   validCount: z.number().int(),
   errorCount: z.number().int(),
+  /** How many valid rows match a material the workshop already has (see `existingId`). */
+  existingCount: z.number().int().optional(),
 });
 export type MaterialImportPreview = z.infer<typeof materialImportPreviewSchema>;
 
+/**
+ * Query of `POST /api/materials/import`: what to do with rows matching an existing material,
+ * `create` a second copy (the default, as before) or `update` the existing one.
+ */
+export const materialImportQuerySchema = z.object({
+  existing: z
+    .enum(['create', 'update'], { error: 'existing is create or update' })
+    .default('create'),
+});
+export type MaterialImportQuery = z.output<typeof materialImportQuerySchema>;
+
 /** What a successful `POST /api/materials/import` answers. */
 export const materialImportResultSchema = z.object({
+  /** Rows written, created and updated together. */
   imported: z.number().int(),
+  /** Ids of every row written, in file order. */
   ids: z.array(z.string()),
+  /** How many of them updated an existing material (`existing=update`). */
+  updated: z.number().int().optional(),
 });
 export type MaterialImportResult = z.infer<typeof materialImportResultSchema>;

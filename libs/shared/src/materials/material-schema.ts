@@ -20,6 +20,7 @@ import {
   storedRecordFields,
   textField,
 } from '../records/record-fields';
+import { archivedAtField, includeArchivedSchema } from '../records/housekeeping-schema';
 import { calibrationSummarySchema } from './calibration-summary';
 import { casProblems } from './cas-number';
 
@@ -192,16 +193,21 @@ export const materialSchema = z.object({
   calibrations: z.array(calibrationSchema),
   /** Average and spread of the calibrations, per measure. */
   calibrationSummary: z.array(calibrationSummarySchema),
+  archivedAt: archivedAtField,
 });
 export type Material = z.infer<typeof materialSchema>;
 
-/** Query of `GET /api/materials`: `q` matches trade name, INCI, US name and CAS. */
+/**
+ * Query of `GET /api/materials`: `q` matches trade name, INCI, US name and CAS. Archived materials
+ * only with `includeArchived=true`, so pickers built on the list never offer them.
+ */
 export const materialListQuerySchema = listQuerySchema(
   ['tradeName', 'inci', 'category', 'createdAt', 'updatedAt'],
   'tradeName',
 ).extend({
   category: materialCategorySchema.optional(),
   supplierId: recordIdSchema('supplier').optional(),
+  includeArchived: includeArchivedSchema,
 });
 export type MaterialListQuery = z.output<typeof materialListQuerySchema>;
 
@@ -218,9 +224,29 @@ export const materialSummarySchema = materialSchema.pick({
   colourIndex: true,
   functions: true,
   updatedAt: true,
+  archivedAt: true,
 });
 export type MaterialSummary = z.infer<typeof materialSummarySchema>;
-export const materialPageSchema = pageSchema(materialSummarySchema);
+
+/**
+ * Where `q` of `GET /api/materials` found a material: in its own trade name, INCI, US name or CAS
+ * (`name`), or only in the INCI name of one of its blend's components (`components`).
+ */
+export const MATERIAL_MATCH_FIELDS = ['name', 'components'] as const;
+export type MaterialMatchField = (typeof MATERIAL_MATCH_FIELDS)[number];
+
+/**
+ * A row of the materials list. Filtered by `q`, each row says where it matched, and the rows that
+ * matched on their own names come before those found only through a component.
+ */
+export const materialListItemSchema = materialSummarySchema.extend({
+  /** Where `q` matched; absent when the list is not filtered by text. */
+  matchedIn: z.enum(MATERIAL_MATCH_FIELDS).optional(),
+  /** The INCI name of the component that matched, when `matchedIn` is `components`. */
+  matchedComponent: z.string().optional(),
+});
+export type MaterialListItem = z.infer<typeof materialListItemSchema>;
+export const materialPageSchema = pageSchema(materialListItemSchema);
 export type MaterialPage = z.infer<typeof materialPageSchema>;
 
 /** Most ids one `GET /api/materials?ids=` names: as many as a formula has lines. */
@@ -229,7 +255,8 @@ const materialId = recordIdSchema('material');
 
 /**
  * Query of `GET /api/materials?ids=a,b,c`: the full records of the named materials in one request
- * (a formula's lines), in place of one request per material. Repeated ids count once.
+ * (a formula's lines), in place of one request per material. Repeated ids count once. Archived
+ * materials are answered too, so an old version that uses one still opens.
  */
 export const materialIdsQuerySchema = z.object({
   ids: z

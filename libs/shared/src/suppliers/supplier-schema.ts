@@ -1,6 +1,11 @@
 import * as z from 'zod';
 import { listQuerySchema, pageSchema } from '../lists/list-query-schema';
 import {
+  archivedAtField,
+  includeArchivedSchema,
+  warningsField,
+} from '../records/housekeeping-schema';
+import {
   optionalText,
   requiredText,
   storedRecordFields,
@@ -47,11 +52,20 @@ export const supplierSchema = z.object({
   notes: z.string().nullable(),
   /** How many materials name this supplier. */
   materialCount: z.number().int(),
+  archivedAt: archivedAtField,
+  /** On a create or update: another supplier has the same name (the save went through). */
+  warnings: warningsField,
 });
 export type Supplier = z.infer<typeof supplierSchema>;
 
-/** Query of `GET /api/suppliers`: `q` matches name, contact and e-mail. */
-export const supplierListQuerySchema = listQuerySchema(['name', 'createdAt', 'updatedAt'], 'name');
+/**
+ * Query of `GET /api/suppliers`: `q` matches name, contact and e-mail; archived suppliers only
+ * with `includeArchived=true`.
+ */
+export const supplierListQuerySchema = listQuerySchema(
+  ['name', 'createdAt', 'updatedAt'],
+  'name',
+).extend({ includeArchived: includeArchivedSchema });
 export type SupplierListQuery = z.output<typeof supplierListQuerySchema>;
 export const supplierPageSchema = pageSchema(supplierSchema);
 export type SupplierPage = z.infer<typeof supplierPageSchema>;

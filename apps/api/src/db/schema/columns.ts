@@ -13,6 +13,9 @@ export const timestamps = {
     .$onUpdate(() => new Date()),
 };
 
+/** When the record was archived; null while it is in use (lists and pickers leave it out). */
+export const archivedAt = () => timestamp({ withTimezone: true });
+
 /** What happens to a referencing row when the row it points to is deleted. */
 export type ReferenceAction = 'cascade' | 'restrict' | 'set null';
 

@@ -8,10 +8,11 @@ import {
   pgEnum,
   pgTable,
   text,
+  uniqueIndex,
   uuid,
 } from 'drizzle-orm/pg-core';
 import { DOCUMENT_KINDS } from '@batchproof/shared';
-import { id, timestamps, workshopKey, workshopReference } from './columns';
+import { archivedAt, id, timestamps, workshopKey, workshopReference } from './columns';
 import { lots } from './lots';
 import { materials } from './materials';
 import { users } from './users';
@@ -47,6 +48,12 @@ export const documents = pgTable(
     sha256: text().notNull(),
     content: bytea().notNull(),
     uploadedBy: uuid(),
+    /**
+     * The older document of the same material or lot this one replaced. The old one stays on
+     * file as history (superseded); it cannot be deleted while this one points at it.
+     */
+    replacesId: uuid(),
+    archivedAt: archivedAt(),
     ...timestamps,
   },
   (t) => [
@@ -54,11 +61,22 @@ export const documents = pgTable(
     index('documents_material_idx').on(t.workshopId, t.materialId, t.kind),
     index('documents_lot_idx').on(t.workshopId, t.lotId),
     workshopKey('documents', t),
+    // Restrict: a material's documents are its compliance history; delete them first, or archive.
     workshopReference(
       'documents_material_fk',
       { workshopId: t.workshopId, column: t.materialId },
       materials,
-      'cascade',
+      'restrict',
+    ),
+    // One replacement per document, so two concurrent replacements cannot both win.
+    uniqueIndex('documents_replaces_key')
+      .on(t.workshopId, t.replacesId)
+      .where(sql`${t.replacesId} is not null`),
+    workshopReference(
+      'documents_replaces_fk',
+      { workshopId: t.workshopId, column: t.replacesId },
+      t,
+      'restrict',
     ),
     workshopReference(
       'documents_lot_fk',

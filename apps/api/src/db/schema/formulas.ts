@@ -12,7 +12,7 @@ import {
   uuid,
 } from 'drizzle-orm/pg-core';
 import { PRODUCT_TYPES, type EvaluationResult, type ProductProfile } from '@batchproof/shared';
-import { id, timestamps, workshopKey, workshopReference } from './columns';
+import { archivedAt, id, timestamps, workshopKey, workshopReference } from './columns';
 import { materials } from './materials';
 import { users } from './users';
 import { workshops } from './workshops';
@@ -35,6 +35,7 @@ export const formulas = pgTable(
     name: text().notNull(),
     productType: productTypeEnum().notNull(),
     notes: text(),
+    archivedAt: archivedAt(),
     ...timestamps,
   },
   (t) => [

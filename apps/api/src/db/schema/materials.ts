@@ -8,7 +8,7 @@ import {
   type Material,
   type WeightPerVolume,
 } from '@batchproof/shared';
-import { id, timestamps, workshopKey, workshopReference } from './columns';
+import { archivedAt, id, timestamps, workshopKey, workshopReference } from './columns';
 import { suppliers } from './suppliers';
 import { workshops } from './workshops';
 
@@ -53,6 +53,7 @@ export const materials = pgTable(
     searchText: text().generatedAlwaysAs(
       sql`lower(trade_name || E'\\n' || inci || E'\\n' || coalesce(us_name, '') || E'\\n' || coalesce(cas, ''))`,
     ),
+    archivedAt: archivedAt(),
     ...timestamps,
   },
   (t) => [
@@ -67,11 +68,12 @@ export const materials = pgTable(
     index('materials_inci_trgm_idx').using('gin', sql`${t.inci} gin_trgm_ops`),
     index('materials_search_text_trgm_idx').using('gin', sql`${t.searchText} gin_trgm_ops`),
     workshopKey('materials', t),
+    // Restrict: a supplier that materials name is archived, not deleted out from under them.
     workshopReference(
       'materials_supplier_fk',
       { workshopId: t.workshopId, column: t.supplierId },
       suppliers,
-      'set null',
+      'restrict',
     ),
   ],
 );

@@ -1,5 +1,5 @@
 import { index, pgTable, text, uuid } from 'drizzle-orm/pg-core';
-import { id, timestamps, workshopKey } from './columns';
+import { archivedAt, id, timestamps, workshopKey } from './columns';
 import { workshops } from './workshops';
 
 /** A company the workshop buys materials from. */
@@ -15,6 +15,7 @@ export const suppliers = pgTable(
     email: text(),
     website: text(),
     notes: text(),
+    archivedAt: archivedAt(),
     ...timestamps,
   },
   (t) => [
