@@ -4,6 +4,7 @@ import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { formulas, formulaVersions, lots, materials } from '../../apps/api/src/db/schema';
 import { seedDemo } from '../../apps/api/src/seed/demo-seed';
 import { seedDemoWorkspace } from '../../apps/api/src/seed/demo-workspace-seed';
+import { demoMaterials } from '../../apps/api/src/seed/hollowmere-materials';
 import { buildMaterial } from '../support/row-builders';
 import { buildWorkshop } from '../support/workshop-builder';
 import { startApiHarness, TEST_JWT_SECRET, type ApiHarness } from '../support/api-harness';
@@ -55,6 +56,15 @@ describe('the demo workspace seed', () => {
 
     expect(await seedDemoWorkspace(h.handle.db, w.id)).toBe('already-seeded');
     expect(await countOf(formulas, w.id)).toBe(5);
+  });
+
+  it("spells the function as the UI does, 'colourant', in every material and blend component", () => {
+    const functions = Object.values(demoMaterials).flatMap((m) => [
+      ...(m.functions ?? []),
+      ...(m.components ?? []).flatMap((c) => c.functions ?? []),
+    ]);
+    expect(functions).toContain('colourant');
+    expect(functions.filter((f) => /color/i.test(f))).toEqual([]);
   });
 
   it('never adds to a workshop that already has materials of its own', async () => {
