@@ -53,6 +53,14 @@ export const materials = pgTable(
     searchText: text().generatedAlwaysAs(
       sql`lower(trade_name || E'\\n' || inci || E'\\n' || coalesce(us_name, '') || E'\\n' || coalesce(cas, ''))`,
     ),
+    /**
+     * The INCI names of a blend's components, lower-cased, for the same filter: a match here only
+     * ranks below a match in `searchText` (the material's own names). The JSON text of the list,
+     * since a generated column cannot aggregate; a query naming a quote or backslash misses it.
+     */
+    componentSearchText: text().generatedAlwaysAs(
+      sql`lower(jsonb_path_query_array(components, '$[*].inci')::text)`,
+    ),
     archivedAt: archivedAt(),
     ...timestamps,
   },
@@ -67,6 +75,10 @@ export const materials = pgTable(
     index('materials_trade_name_trgm_idx').using('gin', sql`${t.tradeName} gin_trgm_ops`),
     index('materials_inci_trgm_idx').using('gin', sql`${t.inci} gin_trgm_ops`),
     index('materials_search_text_trgm_idx').using('gin', sql`${t.searchText} gin_trgm_ops`),
+    index('materials_component_search_text_trgm_idx').using(
+      'gin',
+      sql`${t.componentSearchText} gin_trgm_ops`,
+    ),
     workshopKey('materials', t),
     // Restrict: a supplier that materials name is archived, not deleted out from under them.
     workshopReference(

@@ -1,0 +1,2 @@
+ALTER TABLE "materials" ADD COLUMN "component_search_text" text GENERATED ALWAYS AS (lower(jsonb_path_query_array(components, '$[*].inci')::text)) STORED;--> statement-breakpoint
+CREATE INDEX "materials_component_search_text_trgm_idx" ON "materials" USING gin ("component_search_text" gin_trgm_ops);
