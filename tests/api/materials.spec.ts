@@ -192,6 +192,53 @@ describe('GET /api/materials', () => {
     expect(await names('salt_')).toEqual([]); // LIKE wildcards match only themselves
   });
 
+  it("matches a blend component's INCI too, ranks own-name matches first and says where each row matched", async () => {
+    const ws = await buildWorkshop(h.handle.db, TEST_JWT_SECRET, { roles: ['viewer'] });
+    const blend = aMaterial({
+      tradeName: 'Aroma blend',
+      inci: 'Parfum',
+      category: 'fragrance',
+      components: [
+        { inci: 'Benzyl Alcohol', percent: 40 },
+        { inci: 'Linalyl Acetate', percent: 60 },
+      ],
+    });
+    await buildMaterial(h.handle.db, ws.id, blend);
+    // Its own INCI and its one component both match: that counts as a match on its own name.
+    const zest = aMaterial({
+      tradeName: 'Zest',
+      inci: 'Linalool',
+      components: [{ inci: 'Linalool', percent: 100 }],
+    });
+    await buildMaterial(h.handle.db, ws.id, zest);
+    await buildMaterial(h.handle.db, ws.id, aMaterial({ tradeName: 'Cocoa Butter' }));
+    const list = async (qs: string) =>
+      materialPageSchema.parse(
+        (await request(h.app).get(`/api/materials?${qs}`).set(bearer(ws.members.viewer))).body,
+      );
+    const rows = async (qs: string) =>
+      (await list(qs)).items.map((m) => [m.tradeName, m.matchedIn, m.matchedComponent]);
+
+    // By name alone "Aroma blend" sorts first; its match is only inside a component, so it follows.
+    expect(await rows('q=LINAL&sort=tradeName')).toEqual([
+      ['Zest', 'name', undefined],
+      ['Aroma blend', 'components', 'Linalyl Acetate'],
+    ]);
+    expect(await rows('q=linal&sort=tradeName&dir=desc')).toEqual([
+      ['Zest', 'name', undefined],
+      ['Aroma blend', 'components', 'Linalyl Acetate'],
+    ]);
+    expect((await list('q=linal&pageSize=1&page=2')).items.map((m) => m.tradeName)).toEqual([
+      'Aroma blend',
+    ]);
+    expect((await list('q=linal')).total).toBe(2);
+    expect(await rows('q=parfum')).toEqual([['Aroma blend', 'name', undefined]]);
+    // Without a text filter nothing matched anything.
+    const unfiltered = (await request(h.app).get('/api/materials').set(bearer(ws.members.viewer)))
+      .body.items;
+    expect(unfiltered.map((m: object) => 'matchedIn' in m)).toEqual([false, false, false]);
+  });
+
   it('with ids=a,b,c answers the full records of those materials in one request', async () => {
     const ws = await buildWorkshop(h.handle.db, TEST_JWT_SECRET, { roles: ['viewer'] });
     const other = await buildWorkshop(h.handle.db, TEST_JWT_SECRET, { roles: ['viewer'] });

@@ -2,7 +2,9 @@ import {
   summariseCalibrations,
   type Material,
   type MaterialFields,
+  type MaterialListItem,
   type MaterialListQuery,
+  type MaterialPage,
   type MaterialsById,
 } from '@batchproof/shared';
 import type { AuthUser } from '../auth/authenticate';
@@ -19,11 +21,38 @@ export function toMaterial(row: repo.MaterialRow): Material {
   };
 }
 
-/** A page of the caller's workshop's materials. */
-export async function listMaterials(db: Database, actor: AuthUser, q: MaterialListQuery) {
+/**
+ * A page of the caller's workshop's materials. Filtered by text, each row says whether the
+ * material's own names matched or only one of its blend's components did (and which).
+ */
+export async function listMaterials(
+  db: Database,
+  actor: AuthUser,
+  q: MaterialListQuery,
+): Promise<MaterialPage> {
   const { items, total } = await repo.pageMaterials(db, actor.workshopId, q);
-  return { items: items.map(withIsoDates), total, page: q.page, pageSize: q.pageSize };
+  return {
+    items: items.map(({ ownMatch, matchedComponent, ...row }) => ({
+      ...withIsoDates(row),
+      ...matchOf(ownMatch, matchedComponent),
+    })),
+    total,
+    page: q.page,
+    pageSize: q.pageSize,
+  };
 }
+
+function matchOf(
+  ownMatch: boolean | null,
+  component: string | null,
+): Pick<MaterialListItem, 'matchedIn' | 'matchedComponent'> {
+  if (ownMatch === null) return {};
+  if (ownMatch) return { matchedIn: 'name' };
+  return component === null
+    ? { matchedIn: 'components' }
+    : { matchedIn: 'components', matchedComponent: component };
+}
+
 
 /** One material of the caller's workshop; 404 for any other. */
 export async function getMaterial(db: Database, actor: AuthUser, id: string) {

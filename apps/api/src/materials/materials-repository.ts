@@ -1,4 +1,4 @@
-import { and, eq, inArray, like, sql, type SQL } from 'drizzle-orm';
+import { and, desc, eq, inArray, like, or, sql, type SQL } from 'drizzle-orm';
 import type { MaterialFields, MaterialListQuery } from '@batchproof/shared';
 import {
   containsPattern,
@@ -57,26 +57,63 @@ const sortColumns = {
   updatedAt: materials.updatedAt,
 } as const;
 
+/**
+ * The text filter's two tests: the material's own trade name, INCI, US name and CAS (lower-cased
+ * in one column), and its blend components' INCI names. PostgreSQL lower-cases the pattern too,
+ * so both sides fold case the same way.
+ */
+function textMatch(q: string) {
+  const pattern = sql`lower(${containsPattern(q)})`;
+  return {
+    pattern,
+    own: like(materials.searchText, pattern),
+    component: like(materials.componentSearchText, pattern),
+  };
+}
+
 function listWhere(workshopId: string, q: MaterialListQuery) {
   const conditions: (SQL | undefined)[] = [eq(materials.workshopId, workshopId)];
-  // Trade name, INCI, US name and CAS, lower-cased in one column; PostgreSQL lower-cases the
-  // pattern too, so both sides fold case the same way.
-  if (q.q) conditions.push(like(materials.searchText, sql`lower(${containsPattern(q.q)})`));
+  if (q.q) {
+    const match = textMatch(q.q);
+    conditions.push(or(match.own, match.component));
+  }
   if (q.category) conditions.push(eq(materials.category, q.category));
   if (q.supplierId) conditions.push(eq(materials.supplierId, q.supplierId));
   return and(...conditions);
 }
 
-/** One page of the workshop's materials, filtered, sorted and paged in SQL. */
+/**
+ * What the text filter found in each row: whether the material's own names matched (null when the
+ * list is not filtered by text) and, when only a component did, that component's INCI name.
+ */
+function matchColumns(q: MaterialListQuery) {
+  if (!q.q) {
+    return { ownMatch: sql<boolean | null>`null`, matchedComponent: sql<string | null>`null` };
+  }
+  const { pattern, own } = textMatch(q.q);
+  return {
+    ownMatch: sql<boolean | null>`${own}`,
+    matchedComponent: sql<string | null>`case when ${own} then null else (
+      select c ->> 'inci' from jsonb_array_elements(${materials.components}) as c
+      where lower(c ->> 'inci') like ${pattern} limit 1) end`,
+  };
+}
+
+/**
+ * One page of the workshop's materials, filtered, sorted and paged in SQL. Filtered by text, the
+ * materials whose own names match come first (then the chosen order), and those found only
+ * through a blend component after them.
+ */
 export async function pageMaterials(db: Database, workshopId: string, q: MaterialListQuery) {
   const where = listWhere(workshopId, q);
   const { limit, offset } = pageWindow(q);
+  const order = listOrder(sortColumns[q.sort], q.dir, materials.id);
   const rows = await db
-    .select({ ...summaryColumns, total: totalColumn(materials, where) })
+    .select({ ...summaryColumns, ...matchColumns(q), total: totalColumn(materials, where) })
     .from(materials)
     .leftJoin(suppliers, eq(suppliers.id, materials.supplierId))
     .where(where)
-    .orderBy(...listOrder(sortColumns[q.sort], q.dir, materials.id))
+    .orderBy(...(q.q ? [desc(textMatch(q.q).own), ...order] : order))
     .limit(limit)
     .offset(offset);
   return withTotal(db, rows, { table: materials, where, page: q.page });
