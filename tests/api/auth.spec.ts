@@ -233,7 +233,8 @@ describe('invitations by e-mail', () => {
     const again = await request(h.app)
       .post('/api/auth/invitations/accept')
       .send({ token, name: 'Again', password: 'invited-password' });
-    expect(again.status).toBe(404);
+    expect(again.status).toBe(410);
+    expect(again.body.error.code).toBe('invitation_used');
 
     const signIn = await request(h.app)
       .post('/api/auth/sign-in')

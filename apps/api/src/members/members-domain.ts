@@ -28,7 +28,10 @@ export async function listInvitations(db: Database, actor: AuthUser) {
   return { items: (await repo.listPendingInvitations(db, actor.workshopId)).map(iso) };
 }
 
-/** Creates an invitation and e-mails its one-time link. */
+/**
+ * Creates an invitation and e-mails its one-time link. An invitation to the same address in this
+ * workshop that was not accepted yet is replaced: one link stays valid, the newest.
+ */
 export async function invite(
   db: Database,
   mailer: Mailer,
@@ -42,13 +45,18 @@ export async function invite(
     });
   }
   const token = newOpaqueToken();
-  const created = await repo.insertInvitation(db, {
-    workshopId: actor.workshopId,
-    email: input.email,
-    role: input.role,
-    tokenHash: hashToken(token),
-    invitedBy: actor.id,
-    expiresAt: new Date(Date.now() + INVITATION_DAYS * 86_400_000),
+  const created = await db.transaction(async (tx) => {
+    await repo.lockInvitationsTo(tx, actor.workshopId, input.email);
+    const replaced = await repo.deleteUnacceptedInvitationsTo(tx, actor.workshopId, input.email);
+    const row = await repo.insertInvitation(tx, {
+      workshopId: actor.workshopId,
+      email: input.email,
+      role: input.role,
+      tokenHash: hashToken(token),
+      invitedBy: actor.id,
+      expiresAt: new Date(Date.now() + INVITATION_DAYS * 86_400_000),
+    });
+    return { ...row, replaced };
   });
   const workshop = await db.query.workshops.findFirst({
     where: (w, { eq }) => eq(w.id, actor.workshopId),
@@ -70,9 +78,46 @@ export async function revokeInvitation(db: Database, actor: AuthUser, id: string
   if (!(await repo.deleteInvitation(db, actor.workshopId, id))) throw notFound('That invitation');
 }
 
+/** Refusals of an invitation link, one code each, so the accept page can say which it is. */
+const linkRefusals = {
+  unknown: () =>
+    new AppError(
+      404,
+      'invitation_unknown',
+      'This invitation link is not valid: it may be incomplete, withdrawn or replaced by a newer ' +
+        'invitation. Open the link in the latest invitation e-mail, or ask the workshop owner to ' +
+        'invite you again.',
+    ),
+  used: () =>
+    new AppError(
+      410,
+      'invitation_used',
+      'This invitation has already been used to join the workshop. Sign in with the invited ' +
+        'e-mail instead.',
+    ),
+  expired: () =>
+    new AppError(
+      410,
+      'invitation_expired',
+      `This invitation has expired (links last ${INVITATION_DAYS} days). Ask the workshop owner ` +
+        'to send a new one.',
+    ),
+};
+
+/**
+ * The invitation a link's token names, if it can still be accepted; otherwise the refusal says
+ * which it is: unknown (never issued, revoked or replaced), used, or expired.
+ */
+async function usableInvitation(db: Database, token: string) {
+  const found = await repo.findInvitationByToken(db, hashToken(token));
+  if (!found) throw linkRefusals.unknown();
+  if (found.acceptedAt) throw linkRefusals.used();
+  if (found.expiresAt.getTime() <= Date.now()) throw linkRefusals.expired();
+  return found;
+}
+
 export async function previewInvitation(db: Database, token: string): Promise<InvitationPreview> {
-  const found = await repo.findLiveInvitation(db, hashToken(token));
-  if (!found) throw notFound('That invitation (it may have expired or been used)');
+  const found = await usableInvitation(db, token);
   return {
     email: found.email,
     role: found.role,
@@ -85,9 +130,9 @@ export async function previewInvitation(db: Database, token: string): Promise<In
 export async function acceptInvitation(db: Database, input: AcceptInvitation): Promise<AuthUser> {
   const passwordHash = await hashPassword(input.password);
   return db.transaction(async (tx) => {
-    const found = await repo.findLiveInvitation(tx, hashToken(input.token));
-    if (!found) throw notFound('That invitation (it may have expired or been used)');
-    if (!(await repo.markInvitationAccepted(tx, found.id))) throw notFound('That invitation');
+    const found = await usableInvitation(tx, input.token);
+    // Another acceptance of the same link committed first: this one is the second use.
+    if (!(await repo.markInvitationAccepted(tx, found.id))) throw linkRefusals.used();
     if (await repo.countUsersWithEmail(tx, found.email)) {
       throw conflict('This e-mail already belongs to a Batchproof account. Sign in instead.');
     }

@@ -1,4 +1,4 @@
-import { and, asc, count, desc, eq, gt, isNull } from 'drizzle-orm';
+import { and, asc, count, desc, eq, gt, isNull, sql, type SQL } from 'drizzle-orm';
 import type { MemberListQuery, Role } from '@batchproof/shared';
 import type { Database } from '../db/database';
 import { invitations, users, workshops } from '../db/schema';
@@ -98,41 +98,63 @@ export async function insertInvitation(
   return created!;
 }
 
-export async function deleteInvitation(db: Database, workshopId: string, id: string) {
-  const [row] = await db
+/**
+ * Holds, until the transaction ends, the right to change one address's invitations in one
+ * workshop, so two invitations sent at once cannot both stay pending.
+ */
+export async function lockInvitationsTo(tx: Database, workshopId: string, email: string) {
+  await tx.execute(
+    sql`select pg_advisory_xact_lock(hashtextextended(${`invitation:${workshopId}:${email}`}, 0))`,
+  );
+}
+
+/** Deletes the workshop's invitations that `which` picks, as long as they were not accepted. */
+function deleteUnaccepted(db: Database, workshopId: string, which: SQL) {
+  return db
     .delete(invitations)
-    .where(
-      and(
-        eq(invitations.workshopId, workshopId),
-        eq(invitations.id, id),
-        isNull(invitations.acceptedAt),
-      ),
-    )
-    .returning({ id: invitations.id });
+    .where(and(eq(invitations.workshopId, workshopId), which, isNull(invitations.acceptedAt)))
+    .returning({ id: invitations.id, expiresAt: invitations.expiresAt });
+}
+
+/**
+ * Deletes the invitations to `email` in the workshop that were not accepted (live or expired),
+ * and answers how many of them were still live.
+ */
+export async function deleteUnacceptedInvitationsTo(
+  tx: Database,
+  workshopId: string,
+  email: string,
+) {
+  const rows = await deleteUnaccepted(tx, workshopId, eq(invitations.email, email));
+  const now = Date.now();
+  return rows.filter((r) => r.expiresAt.getTime() > now).length;
+}
+
+export async function deleteInvitation(db: Database, workshopId: string, id: string) {
+  const [row] = await deleteUnaccepted(db, workshopId, eq(invitations.id, id));
   return row;
 }
 
-/** A live invitation by token hash, with its workshop's name and the inviter's name. */
-export async function findLiveInvitation(db: Database, tokenHash: string) {
+/**
+ * The invitation a token names, live or not, with its workshop's name and the inviter's name;
+ * undefined when no invitation has that token (never issued, revoked or replaced).
+ */
+export async function findInvitationByToken(db: Database, tokenHash: string) {
   const [row] = await db
     .select({
       id: invitations.id,
       workshopId: invitations.workshopId,
       email: invitations.email,
       role: invitations.role,
+      expiresAt: invitations.expiresAt,
+      acceptedAt: invitations.acceptedAt,
       workshopName: workshops.name,
       invitedBy: users.name,
     })
     .from(invitations)
     .innerJoin(workshops, eq(workshops.id, invitations.workshopId))
     .leftJoin(users, eq(users.id, invitations.invitedBy))
-    .where(
-      and(
-        eq(invitations.tokenHash, tokenHash),
-        isNull(invitations.acceptedAt),
-        gt(invitations.expiresAt, new Date()),
-      ),
-    );
+    .where(eq(invitations.tokenHash, tokenHash));
   return row;
 }
 

@@ -17,6 +17,12 @@ export const errorCodeSchema = z.enum([
   'idempotency_key_reused',
   /** The database cannot be reached right now (503); the request may be retried. */
   'service_unavailable',
+  /** An invitation link whose token was never issued, or was revoked or replaced (404). */
+  'invitation_unknown',
+  /** An invitation link already used to join (410). */
+  'invitation_used',
+  /** An invitation link past its expiry (410). */
+  'invitation_expired',
   'internal',
 ]);
 export type ErrorCode = z.infer<typeof errorCodeSchema>;

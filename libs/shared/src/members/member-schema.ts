@@ -18,6 +18,11 @@ export const invitationSchema = z.object({
   role: roleSchema,
   createdAt: z.string(),
   expiresAt: z.string(),
+  /**
+   * On the answer to an invitation only: how many pending invitations to the same address this
+   * one replaced (their links stop working).
+   */
+  replaced: z.number().int().optional(),
 });
 export type Invitation = z.infer<typeof invitationSchema>;
 export const invitationListSchema = z.object({ items: z.array(invitationSchema) });

@@ -40,17 +40,34 @@ async function openInvitation() {
   return { harness, backend, preview, loader: TestbedHarnessEnvironment.loader(harness.fixture) };
 }
 
+const INVITATION = {
+  email: 'tomas@example.com',
+  role: 'formulator',
+  workshopName: 'Hollowmere Bathworks',
+  invitedBy: 'Ada Marsh',
+};
+
+type Opened = Awaited<ReturnType<typeof openInvitation>>;
+
+/** Fills in the name and password and presses Join. */
+async function join(page: Opened, name: string) {
+  const fill = async (label: string, value: string) => {
+    const field = await page.loader.getHarness(
+      MatFormFieldHarness.with({ floatingLabelText: label }),
+    );
+    await ((await field.getControl()) as MatInputHarness).setValue(value);
+  };
+  await fill('Your name', name);
+  await fill('Choose a password', 'a-long-enough-password');
+  await (await page.loader.getHarness(MatButtonHarness.with({ text: /^Join/ }))).click();
+}
+
 describe('AcceptInvitePage', () => {
   beforeEach(() => localStorage.clear());
 
   it('shows the workshop, the role with what it may do, and who sent the invitation', async () => {
     const page = await openInvitation();
-    page.preview.flush({
-      email: 'tomas@example.com',
-      role: 'formulator',
-      workshopName: 'Hollowmere Bathworks',
-      invitedBy: 'Ada Marsh',
-    });
+    page.preview.flush(INVITATION);
     await page.harness.fixture.whenStable();
 
     const text = page.harness.routeNativeElement!.textContent!;
@@ -60,38 +77,79 @@ describe('AcceptInvitePage', () => {
     expect(text).toContain('tomas@example.com');
   });
 
-  it('says so plainly when the link has expired or was used', async () => {
+  /** Words the page shows for each refusal: the page's own, not the API's message. */
+  const refusals = [
+    {
+      code: 'invitation_used',
+      status: 410,
+      heading: 'This invitation has already been used',
+      advice: 'sign in with',
+      link: 'Go to sign-in',
+    },
+    {
+      code: 'invitation_expired',
+      status: 410,
+      heading: 'This invitation has expired',
+      advice: 'Ask the workshop owner to send a new invitation',
+      link: 'Go to sign-in',
+    },
+    {
+      code: 'invitation_unknown',
+      status: 404,
+      heading: 'This invitation link is not valid',
+      advice: 'replaced by a newer one',
+      link: 'Go to sign-in',
+    },
+  ] as const;
+
+  for (const r of refusals) {
+    it(`says plainly why the link cannot be used (${r.code})`, async () => {
+      const page = await openInvitation();
+      page.preview.flush(
+        { error: { code: r.code, message: 'A message the page does not show.' } },
+        { status: r.status, statusText: 'Gone' },
+      );
+      await page.harness.fixture.whenStable();
+
+      const alert = page.harness.routeNativeElement!.querySelector('[role=alert]')!.textContent!;
+      expect(alert).toContain(r.heading);
+      expect(alert).toContain(r.advice);
+      expect(alert).not.toContain('A message the page does not show.');
+      const others = refusals.filter((o) => o.code !== r.code).map((o) => o.heading);
+      for (const other of others) expect(alert).not.toContain(other);
+      expect(page.harness.routeNativeElement!.textContent).toContain(r.link);
+    });
+  }
+
+  it('when the link is used up while the form is open, says so instead of the form', async () => {
     const page = await openInvitation();
-    page.preview.flush(
-      { error: { code: 'not_found', message: 'That invitation was not found.' } },
-      { status: 404, statusText: 'Not Found' },
-    );
+    page.preview.flush(INVITATION);
+    await page.harness.fixture.whenStable();
+    await join(page, 'Tomas');
+
+    page.backend
+      .expectOne('/api/auth/invitations/accept')
+      .flush(
+        { error: { code: 'invitation_used', message: 'Used.' } },
+        { status: 410, statusText: 'Gone' },
+      );
     await page.harness.fixture.whenStable();
 
-    expect(page.harness.routeNativeElement!.querySelector('[role=alert]')?.textContent).toContain(
-      'This invitation has expired or has already been used.',
+    const root = page.harness.routeNativeElement!;
+    await vi.waitFor(() =>
+      expect(root.querySelector('[role=alert]')?.textContent).toContain(
+        'This invitation has already been used',
+      ),
     );
+    expect(await page.loader.getAllHarnesses(MatButtonHarness.with({ text: /^Join/ }))).toEqual([]);
   });
 
   it('accepts with the token, a name and a password, then lands signed in at home', async () => {
     const page = await openInvitation();
-    page.preview.flush({
-      email: 'tomas@example.com',
-      role: 'formulator',
-      workshopName: 'Hollowmere Bathworks',
-      invitedBy: 'Ada Marsh',
-    });
+    page.preview.flush(INVITATION);
     await page.harness.fixture.whenStable();
 
-    const fill = async (label: string, value: string) => {
-      const field = await page.loader.getHarness(
-        MatFormFieldHarness.with({ floatingLabelText: label }),
-      );
-      await ((await field.getControl()) as MatInputHarness).setValue(value);
-    };
-    await fill('Your name', 'Tomas Reed');
-    await fill('Choose a password', 'a-long-enough-password');
-    await (await page.loader.getHarness(MatButtonHarness.with({ text: /^Join/ }))).click();
+    await join(page, 'Tomas Reed');
 
     const req = page.backend.expectOne('/api/auth/invitations/accept');
     expect(req.request.body).toEqual({

@@ -6,12 +6,36 @@ import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router, RouterLink } from '@angular/router';
-import { acceptInvitationSchema, ROLE_DESCRIPTIONS } from '@batchproof/shared';
+import { acceptInvitationSchema, type ErrorCode, ROLE_DESCRIPTIONS } from '@batchproof/shared';
 import { errorMessage, showRequestError, validateForm } from '../../forms/form-errors';
 import { ApiError, messageOf } from '../../http/api-error';
 import { AuthApi } from '../auth-api';
 import { AuthCard } from '../auth-card/auth-card';
 import { Session } from '../session';
+
+/** What the page says for each reason an invitation link cannot be used, keyed by the API's code. */
+const LINK_REFUSALS: Partial<Record<ErrorCode, { heading: string; advice: string }>> = {
+  invitation_used: {
+    heading: 'This invitation has already been used.',
+    advice:
+      'If you joined with it, sign in with the invited e-mail and the password you chose. ' +
+      'If you did not, ask the workshop owner to invite you again.',
+  },
+  invitation_expired: {
+    heading: 'This invitation has expired.',
+    advice: 'Ask the workshop owner to send a new invitation.',
+  },
+  invitation_unknown: {
+    heading: 'This invitation link is not valid.',
+    advice:
+      'It may be incomplete, withdrawn, or replaced by a newer one. Open the link in the latest ' +
+      'invitation e-mail, or ask the workshop owner to invite you again.',
+  },
+};
+
+/** The refusal words for an error, when it is one of the invitation link's refusals. */
+const refusalOf = (error: unknown) =>
+  error instanceof ApiError ? LINK_REFUSALS[error.code as ErrorCode] : undefined;
 
 /** Where an invitation link lands: shows who invited whom, then takes a name and password. */
 @Component({
@@ -46,14 +70,18 @@ export default class AcceptInvitePage {
   protected readonly errorMessage = errorMessage;
   protected readonly roleDescriptions = ROLE_DESCRIPTIONS;
 
-  /** Why the invitation cannot be shown, in words for the invitee. */
+  /** Why the link cannot be used, from opening it or from a refused acceptance. */
+  protected readonly refusal = computed(
+    () => this.submitRefusal() ?? refusalOf(this.invitation.error()),
+  );
+  /** Why the invitation cannot be shown when it is not the link's fault (network, too many tries). */
   protected readonly loadError = computed(() => {
     const error = this.invitation.error();
-    if (!error) return '';
-    return error instanceof ApiError && error.status === 404
-      ? 'This invitation has expired or has already been used. Ask the workshop owner to send a new one.'
-      : messageOf(error);
+    return error ? messageOf(error) : '';
   });
+  private readonly submitRefusal = signal<{ heading: string; advice: string } | undefined>(
+    undefined,
+  );
 
   protected submit(): void {
     if (this.submitting()) return;
@@ -68,7 +96,9 @@ export default class AcceptInvitePage {
       },
       error: (err: unknown) => {
         this.submitting.set(false);
-        this.notice.set(showRequestError(this.form, err));
+        const refusal = refusalOf(err);
+        if (refusal) this.submitRefusal.set(refusal);
+        else this.notice.set(showRequestError(this.form, err));
       },
     });
   }

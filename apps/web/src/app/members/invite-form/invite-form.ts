@@ -68,7 +68,12 @@ export class InviteForm {
       next: (invitation) => {
         this.submitting.set(false);
         this.form.reset();
-        this.snackBar.open(`Invitation sent to ${invitation.email}.`, 'OK', { duration: 5000 });
+        const replaced = invitation.replaced
+          ? ' It replaces the earlier invitation, whose link no longer works.'
+          : '';
+        this.snackBar.open(`Invitation sent to ${invitation.email}.${replaced}`, 'OK', {
+          duration: 5000,
+        });
         this.invited.emit(invitation);
       },
       error: (err: unknown) => {

@@ -5,6 +5,7 @@ import { MatButtonHarness } from '@angular/material/button/testing';
 import { MatFormFieldHarness } from '@angular/material/form-field/testing';
 import { MatInputHarness } from '@angular/material/input/testing';
 import { MatSelectHarness } from '@angular/material/select/testing';
+import { MatSnackBarHarness } from '@angular/material/snack-bar/testing';
 import { MatSortHarness } from '@angular/material/sort/testing';
 import { MatRowHarness, MatTableHarness } from '@angular/material/table/testing';
 import { Router } from '@angular/router';
@@ -52,6 +53,16 @@ async function flushReads(page: Page, invitations?: unknown[]): Promise<TestRequ
   if (invitations) page.backend.expectOne('/api/members/invitations').flush({ items: invitations });
   await page.harness.fixture.whenStable();
   return req;
+}
+
+/** Types an e-mail into the invite form and sends it. */
+async function sendInvitation(page: Page, address: string) {
+  const email = await page.loader.getHarness(
+    MatFormFieldHarness.with({ floatingLabelText: 'E-mail' }),
+  );
+  await ((await email.getControl()) as MatInputHarness).setValue(address);
+  await (await page.loader.getHarness(MatButtonHarness.with({ text: /Send invitation/ }))).click();
+  return email;
 }
 
 async function cellTexts(rows: MatRowHarness[]) {
@@ -143,17 +154,38 @@ describe('MembersPage', () => {
     page.backend.expectNone('/api/members/invitations');
   });
 
+  it('says the earlier link stopped working when an invitation replaces a pending one', async () => {
+    const page = await openMembersAs('owner');
+    await flushReads(page, []);
+
+    await sendInvitation(page, 'wren@example.com');
+    page.backend.expectOne({ method: 'POST', url: '/api/members/invitations' }).flush(
+      {
+        id: 'i2',
+        email: 'wren@example.com',
+        role: 'formulator',
+        createdAt: '2026-03-01T10:00:00.000Z',
+        expiresAt: '2026-03-08T10:00:00.000Z',
+        replaced: 1,
+      },
+      { status: 201, statusText: 'Created' },
+    );
+    const reload = await vi.waitFor(() => page.backend.expectOne('/api/members/invitations'));
+    reload.flush({ items: [] });
+
+    const snack = await TestbedHarnessEnvironment.documentRootLoader(
+      page.harness.fixture,
+    ).getHarness(MatSnackBarHarness);
+    expect(await snack.getMessage()).toBe(
+      'Invitation sent to wren@example.com. It replaces the earlier invitation, whose link no longer works.',
+    );
+  });
+
   it("puts the server's message beside the e-mail when an invitation is refused", async () => {
     const page = await openMembersAs('owner');
     await flushReads(page, []);
 
-    const email = await page.loader.getHarness(
-      MatFormFieldHarness.with({ floatingLabelText: 'E-mail' }),
-    );
-    await ((await email.getControl()) as MatInputHarness).setValue('tomas@example.com');
-    await (
-      await page.loader.getHarness(MatButtonHarness.with({ text: /Send invitation/ }))
-    ).click();
+    const email = await sendInvitation(page, 'tomas@example.com');
 
     const req = page.backend.expectOne({ method: 'POST', url: '/api/members/invitations' });
     expect(req.request.body).toEqual({ email: 'tomas@example.com', role: 'formulator' });
