@@ -2,10 +2,10 @@ import { randomUUID } from 'node:crypto';
 import { eq, sql, TransactionRollbackError } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { DatabaseHandle } from '../../apps/api/src/db/database';
-import { materials, suppliers } from '../../apps/api/src/db/schema';
+import { formulaVersions, materials, suppliers, users } from '../../apps/api/src/db/schema';
 import { buildLot, buildMaterial, buildSupplier } from '../support/row-builders';
 import { openMigratedTestDatabase } from '../support/test-database';
-import { buildWorkshop } from '../support/workshop-builder';
+import { addMember, buildWorkshop } from '../support/workshop-builder';
 import { TEST_JWT_SECRET } from '../support/api-harness';
 
 // The application filters every query by workshop; these checks are about the database on its
@@ -180,16 +180,31 @@ describe('composite workshop keys: the database refuses a row pointing into anot
       });
   });
 
-  it('deleting a supplier clears only the reference, keeping the material in its workshop', async () => {
+  it('deleting a member clears only the reference, keeping the version in its workshop', async () => {
+    const member = await addMember(handle.db, TEST_JWT_SECRET, mine.workshopId, 'formulator');
+    await handle.db
+      .update(formulaVersions)
+      .set({ releasedBy: member.id })
+      .where(eq(formulaVersions.id, mine.versionId));
+    await handle.db.delete(users).where(eq(users.id, member.id));
+    const [row] = await handle.db
+      .select()
+      .from(formulaVersions)
+      .where(eq(formulaVersions.id, mine.versionId));
+    expect(row).toMatchObject({ releasedBy: null, workshopId: mine.workshopId });
+  });
+
+  it('a supplier that a material names cannot be deleted (archive it instead)', async () => {
     const supplier = await buildSupplier(handle.db, mine.workshopId);
     const material = await buildMaterial(handle.db, mine.workshopId);
     await handle.db
       .update(materials)
       .set({ supplierId: supplier.id })
       .where(eq(materials.id, material.id));
-    await handle.db.delete(suppliers).where(eq(suppliers.id, supplier.id));
-    const [row] = await handle.db.select().from(materials).where(eq(materials.id, material.id));
-    expect(row).toMatchObject({ supplierId: null, workshopId: mine.workshopId });
+    const error = await databaseError(
+      handle.db.delete(suppliers).where(eq(suppliers.id, supplier.id)),
+    );
+    expect(error).toMatchObject({ code: '23503', constraint: 'materials_supplier_fk' });
   });
 
   it('every foreign key between two workshop tables includes workshop_id on both sides', async () => {

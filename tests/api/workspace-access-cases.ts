@@ -333,6 +333,29 @@ export function workspaceAccessCases(ctx: () => { h: ApiHarness; a: BuiltWorksho
       }),
       expected: read(200, 404),
     },
+    {
+      route: 'DELETE /api/formulas/:id (never released)',
+      prepare: async () => ({ method: 'delete', path: `/api/formulas/${await formula()}` }),
+      expected: write(204, 404),
+    },
+    // Archive and unarchive: owner and formulator, like every other write to these records.
+    ...(
+      [
+        ['materials', material],
+        ['suppliers', supplier],
+        ['formulas', () => formula()],
+        ['documents', document],
+      ] as const
+    ).flatMap(([feature, make]) =>
+      (['archive', 'unarchive'] as const).map((action) => ({
+        route: `POST /api/${feature}/:id/${action}`,
+        prepare: async (): Promise<WorkspaceRequest> => ({
+          method: 'post',
+          path: `/api/${feature}/${await make()}/${action}`,
+        }),
+        expected: write(200, 404),
+      })),
+    ),
   ];
   return cases;
 }

@@ -95,6 +95,21 @@ const released = async () => {
   await json('post')(h.app, `/api/formulas/${id}/versions/1/release`, w.members.owner.token, {});
   return id;
 };
+/** A record of each archivable kind, made once per fuzzed route. */
+const archivable = {
+  materials: material,
+  suppliers: async () => (await buildSupplier(db(), w.id)).id,
+  formulas: formula,
+  documents: async () => {
+    const res = await upload(h.app, '/api/documents', w.members.owner.token, {
+      kind: 'sds',
+      title: 'SDS',
+      issuedOn: '2025-01-01',
+      materialId: await material(),
+    });
+    return res.body.id as string;
+  },
+};
 const signUpBody = () => ({
   workshopName: 'Fuzzed Suds',
   name: 'Pat Fuzz',
@@ -337,6 +352,17 @@ const cases: FuzzCase[] = [
     }),
     send: json('post'),
   },
+  // Archiving takes no body: whatever is sent, the record is archived or brought back.
+  ...(['materials', 'suppliers', 'formulas', 'documents'] as const).flatMap((feature) =>
+    (['archive', 'unarchive'] as const).map((action): FuzzCase => ({
+      route: `POST /api/${feature}/:id/${action}`,
+      prepare: async () => ({
+        path: `/api/${feature}/${await archivable[feature]()}/${action}`,
+        valid: {},
+      }),
+      send: json('post'),
+    })),
+  ),
 ];
 
 /** Every POST, PUT and PATCH route the app serves, read from its routers. */

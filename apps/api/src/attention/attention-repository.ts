@@ -1,15 +1,17 @@
-import { and, asc, count, desc, eq, gt, inArray, isNotNull, lte, sql } from 'drizzle-orm';
+import { and, asc, count, desc, eq, gt, inArray, isNotNull, isNull, lte, sql } from 'drizzle-orm';
 import type { DocumentKind } from '@batchproof/shared';
 import type { Database } from '../db/database';
 import { documents, formulas, formulaVersions, lots, materials, users } from '../db/schema';
+import { documentInUse } from '../documents/documents-repository';
 import { stockOnHand } from '../lots/lots-repository';
 
 /** The number of rows the query matched before its LIMIT (every matching row is small here). */
 const matched = sql<number>`count(*) over ()`.mapWith(Number);
 
 /**
- * Draft and released versions (never superseded history) whose last check found blocking
- * findings: released ones first, since those are what the workshop sells.
+ * Draft and released versions (never superseded history) of formulas in use (not archived) whose
+ * last check found blocking findings: released ones first, since those are what the workshop
+ * sells.
  */
 export async function blockedVersions(db: Database, workshopId: string, limit: number) {
   return db
@@ -28,6 +30,7 @@ export async function blockedVersions(db: Database, workshopId: string, limit: n
         eq(formulaVersions.workshopId, workshopId),
         inArray(formulaVersions.state, ['draft', 'released']),
         gt(formulaVersions.blockCount, 0),
+        isNull(formulas.archivedAt),
       ),
     )
     .orderBy(
@@ -38,7 +41,10 @@ export async function blockedVersions(db: Database, workshopId: string, limit: n
     .limit(limit);
 }
 
-/** Lots with stock on hand whose expiry falls on or before `cutoff`, soonest first. */
+/**
+ * Lots of materials in use (not archived) with stock on hand whose expiry falls on or before
+ * `cutoff`, soonest first.
+ */
 export async function expiringLotsWithStock(
   db: Database,
   workshopId: string,
@@ -63,22 +69,26 @@ export async function expiringLotsWithStock(
         isNotNull(lots.expiresOn),
         lte(lots.expiresOn, cutoff),
         gt(stockOnHand, 0),
+        isNull(materials.archivedAt),
       ),
     )
     .orderBy(asc(lots.expiresOn), asc(lots.id))
     .limit(limit);
 }
 
-/** Every material of the workshop with its category, by name. */
+/** Every material of the workshop in use (not archived) with its category, by name. */
 export async function materialsByName(db: Database, workshopId: string) {
   return db
     .select({ id: materials.id, tradeName: materials.tradeName, category: materials.category })
     .from(materials)
-    .where(eq(materials.workshopId, workshopId))
+    .where(and(eq(materials.workshopId, workshopId), isNull(materials.archivedAt)))
     .orderBy(asc(materials.tradeName), asc(materials.id));
 }
 
-/** The newest document of each kind in `kinds` of every material of the workshop. */
+/**
+ * The newest document in use (neither archived nor replaced) of each kind in `kinds` of every
+ * material of the workshop.
+ */
 export async function newestMaterialDocuments(
   db: Database,
   workshopId: string,
@@ -96,6 +106,7 @@ export async function newestMaterialDocuments(
         eq(documents.workshopId, workshopId),
         isNotNull(documents.materialId),
         inArray(documents.kind, kinds),
+        documentInUse(),
       ),
     )
     .orderBy(

@@ -46,11 +46,14 @@ export async function withTotal<R extends { total: number }>(
   return { items, total: row?.n ?? 0 };
 }
 
+/** A row's type with its Date fields as ISO strings (a nullable date stays nullable). */
+export type WithIsoDates<T> = {
+  [K in keyof T]: T[K] extends Date ? string : T[K] extends Date | null ? string | null : T[K];
+};
+
 /** Turns Date values into ISO strings, as the shared response schemas expect. */
-export function withIsoDates<T extends object>(
-  row: T,
-): { [K in keyof T]: T[K] extends Date ? string : T[K] } {
+export function withIsoDates<T extends object>(row: T): WithIsoDates<T> {
   return Object.fromEntries(
     Object.entries(row).map(([k, v]) => [k, v instanceof Date ? v.toISOString() : v]),
-  ) as { [K in keyof T]: T[K] extends Date ? string : T[K] };
+  ) as WithIsoDates<T>;
 }

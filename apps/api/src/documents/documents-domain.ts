@@ -10,9 +10,10 @@ import {
   type DocumentStatus,
 } from '@batchproof/shared';
 import type { AuthUser } from '../auth/authenticate';
-import { AppError, notFound } from '../core/app-error';
+import { AppError, conflict, notFound } from '../core/app-error';
 import { withIsoDates } from '../core/list-paging';
 import type { Database } from '../db/database';
+import { deleteLogged } from '../housekeeping/deletion';
 import * as repo from './documents-repository';
 import { safeFilename } from './download-name';
 
@@ -57,6 +58,7 @@ export async function uploadDocument(
   if (input.lotId && !(await repo.lotExists(db, actor.workshopId, input.lotId))) {
     throw fieldError('lotId', 'Choose one of this workshop’s lots');
   }
+  if (input.replacesId) await checkReplaced(db, actor, input);
   const created = await repo.insertDocument(db, {
     workshopId: actor.workshopId,
     materialId: input.materialId ?? null,
@@ -71,15 +73,44 @@ export async function uploadDocument(
     sha256: createHash('sha256').update(file.buffer).digest('hex'),
     content: file.buffer,
     uploadedBy: actor.id,
+    replacesId: input.replacesId ?? null,
   });
   return withIsoDates(created);
 }
 
-/** The documents of one material or one lot of the caller's workshop; 404 for any other. */
+/**
+ * The document a new one replaces must be one of the same material or lot that nothing has
+ * replaced yet: the history is a single line, newest last. (Two replacements racing meet the
+ * unique index on `replaces_id`, which answers 409.)
+ */
+async function checkReplaced(
+  db: Database,
+  actor: AuthUser,
+  input: z.output<typeof documentUploadSchema>,
+) {
+  const old = await repo.findDocument(db, actor.workshopId, input.replacesId!);
+  const sameOwner =
+    old &&
+    (old.materialId ?? undefined) === input.materialId &&
+    (old.lotId ?? undefined) === input.lotId;
+  if (!old || !sameOwner) {
+    throw fieldError('replacesId', 'Choose a document of the same material or lot to replace');
+  }
+  if (old.supersededById) {
+    throw conflict('A newer document already replaced that one; replace the newer one instead.', {
+      replacesId: ['A newer document already replaced this one'],
+    });
+  }
+}
+
+/**
+ * The documents of one material or one lot of the caller's workshop, superseded ones included as
+ * history, archived ones when asked for; 404 for any other.
+ */
 export async function listDocuments(
   db: Database,
   actor: AuthUser,
-  owner: { materialId?: string; lotId?: string },
+  owner: { materialId?: string; lotId?: string; includeArchived?: boolean },
 ) {
   if (
     owner.materialId &&
@@ -107,8 +138,27 @@ export async function getDocumentContent(db: Database, actor: AuthUser, id: stri
   return row;
 }
 
+/**
+ * Deletes a document no newer document replaced (a superseded one is the history of the one
+ * that replaced it; archive it instead), and logs the deletion. Deleting the newest of a line
+ * makes the one it replaced current again.
+ */
 export async function deleteDocument(db: Database, actor: AuthUser, id: string) {
-  if (!(await repo.deleteDocument(db, actor.workshopId, id))) throw notFound('That document');
+  await deleteLogged(db, actor, {
+    subjectType: 'document',
+    label: 'That document',
+    id,
+    find: (tx) => repo.findDocument(tx, actor.workshopId, id),
+    check: (_tx, doc) => {
+      if (!doc.supersededById) return;
+      throw conflict(
+        'This document cannot be deleted: a newer document replaced it and keeps it as its ' +
+          'history. Archive it instead, or delete the newer one first.',
+      );
+    },
+    remove: (tx) => repo.deleteDocument(tx, actor.workshopId, id),
+    detail: (doc) => ({ title: doc.title, kind: doc.kind, filename: doc.filename }),
+  });
 }
 
 /**

@@ -1,7 +1,23 @@
-import { and, desc, eq, inArray, type SQL } from 'drizzle-orm';
+import { and, desc, eq, inArray, isNull, sql, type SQL } from 'drizzle-orm';
 import type { DocumentKind } from '@batchproof/shared';
 import type { Database } from '../db/database';
 import { documents, lots, materials } from '../db/schema';
+import { unlessArchived } from '../housekeeping/archiving';
+
+// Spelled out in full: in a single-table select Drizzle renders `${documents.id}` as a bare "id",
+// which inside the subquery would mean the newer document's own id.
+const outer = { id: sql.raw('"documents"."id"'), workshopId: sql.raw('"documents"."workshop_id"') };
+/** The newer document that replaced this one (one at most: a unique index), or null. */
+const supersededById = sql<
+  string | null
+>`(select newer.id from ${documents} as newer where newer.workshop_id = ${outer.workshopId} and newer.replaces_id = ${outer.id})`;
+/** Whether no newer document replaced this one. */
+const notSuperseded = sql`not exists (select 1 from ${documents} as newer where newer.workshop_id = ${outer.workshopId} and newer.replaces_id = ${outer.id})`;
+/**
+ * Whether a document is in use: not archived and not replaced by a newer one. Only these count
+ * towards a material's document status and the home page. For selects from `documents` alone.
+ */
+export const documentInUse = () => and(isNull(documents.archivedAt), notSuperseded);
 
 /** Metadata only: the bytes are read by {@link findDocumentContent} and nowhere else. */
 const metaColumns = {
@@ -16,6 +32,9 @@ const metaColumns = {
   mimeType: documents.mimeType,
   sizeBytes: documents.sizeBytes,
   sha256: documents.sha256,
+  replacesId: documents.replacesId,
+  supersededById,
+  archivedAt: documents.archivedAt,
   createdAt: documents.createdAt,
   updatedAt: documents.updatedAt,
 };
@@ -34,9 +53,12 @@ export async function insertDocument(db: Database, row: NewDocument) {
 export async function listDocuments(
   db: Database,
   workshopId: string,
-  owner: { materialId?: string; lotId?: string },
+  owner: { materialId?: string; lotId?: string; includeArchived?: boolean },
 ) {
-  const conditions: SQL[] = [eq(documents.workshopId, workshopId)];
+  const conditions: (SQL | undefined)[] = [
+    eq(documents.workshopId, workshopId),
+    unlessArchived(documents.archivedAt, owner.includeArchived ?? false),
+  ];
   if (owner.materialId) conditions.push(eq(documents.materialId, owner.materialId));
   if (owner.lotId) conditions.push(eq(documents.lotId, owner.lotId));
   return db
@@ -46,7 +68,10 @@ export async function listDocuments(
     .orderBy(desc(documents.issuedOn), desc(documents.createdAt));
 }
 
-/** The material's documents of the given kinds, newest issue first. */
+/**
+ * The material's documents in use (neither archived nor replaced by a newer one) of the given
+ * kinds, newest issue first.
+ */
 export async function materialDocumentsOfKinds(
   db: Database,
   workshopId: string,
@@ -61,6 +86,7 @@ export async function materialDocumentsOfKinds(
         eq(documents.workshopId, workshopId),
         eq(documents.materialId, materialId),
         inArray(documents.kind, kinds),
+        documentInUse(),
       ),
     )
     .orderBy(desc(documents.issuedOn), desc(documents.createdAt));

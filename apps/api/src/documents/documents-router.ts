@@ -12,6 +12,8 @@ import { multipart } from '../core/multipart';
 import { recordId } from '../core/record-id';
 import { parse } from '../core/validate';
 import type { Database } from '../db/database';
+import { documents } from '../db/schema';
+import { archiveRoutes } from '../housekeeping/archiving';
 import * as domain from './documents-domain';
 import { attachmentDisposition, safeFilename } from './download-name';
 
@@ -65,5 +67,13 @@ export function documentsRouter(deps: { db: Database; authn: Authenticator }) {
     await domain.deleteDocument(db, req.user!, recordId(req.params.id, 'That document'));
     res.status(204).end();
   });
+  router.use(
+    archiveRoutes(db, write, {
+      table: documents,
+      subjectType: 'document',
+      label: 'That document',
+      read: domain.getDocument,
+    }),
+  );
   return router;
 }

@@ -62,6 +62,7 @@ export async function getFormula(db: Database, actor: AuthUser, id: string) {
     name: formula.name,
     productType: formula.productType,
     notes: formula.notes,
+    archivedAt: iso(formula.archivedAt),
     createdAt: formula.createdAt.toISOString(),
     updatedAt: formula.updatedAt.toISOString(),
     versions: versions.map((v) => ({

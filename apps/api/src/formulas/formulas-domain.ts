@@ -12,6 +12,7 @@ import type { AuthUser } from '../auth/authenticate';
 import { AppError, conflict, forbidden, notFound } from '../core/app-error';
 import { parse } from '../core/validate';
 import type { Database } from '../db/database';
+import { deleteLogged } from '../housekeeping/deletion';
 import { evaluateLines } from './formula-evaluation';
 import { getFormula, versionView } from './formula-views';
 import * as repo from './formulas-repository';
@@ -238,4 +239,30 @@ export async function release(
   });
   if ('id' in outcome) return outcome;
   throw refusalError(n, outcome);
+}
+
+/**
+ * Deletes a formula none of whose versions was ever released, and logs it. A released version is
+ * the record of what was made and sold (labels and batches will name it), so such a formula is
+ * archived instead.
+ */
+export async function deleteFormula(db: Database, actor: AuthUser, id: string) {
+  await deleteLogged(db, actor, {
+    subjectType: 'formula',
+    label: 'That formula',
+    id,
+    find: (tx) => repo.findFormula(tx, actor.workshopId, id, true),
+    check: async (tx) => {
+      const released = await repo.countReleasedVersions(tx, actor.workshopId, id);
+      if (released === 0) return;
+      const which = released === 1 ? 'a version was' : `${released} versions were`;
+      throw conflict(
+        `This formula cannot be deleted: ${which} released, and a released version stays as the ` +
+          'record of what was made. Archive it instead: it leaves the lists, and its versions ' +
+          'stay readable.',
+      );
+    },
+    remove: (tx) => repo.deleteFormula(tx, actor.workshopId, id),
+    detail: (formula) => ({ name: formula.name }),
+  });
 }

@@ -8,6 +8,7 @@ import {
   withTotal,
 } from '../core/list-paging';
 import type { Database } from '../db/database';
+import { unlessArchived } from '../housekeeping/archiving';
 import { formulaLines, formulas, formulaVersions, materials } from '../db/schema';
 
 /** A stored version row. */
@@ -50,7 +51,10 @@ const sortColumns = {
 
 /** One page of the workshop's formulas with their latest and released version numbers. */
 export async function pageFormulas(db: Database, workshopId: string, q: FormulaListQuery) {
-  const conditions: (SQL | undefined)[] = [eq(formulas.workshopId, workshopId)];
+  const conditions: (SQL | undefined)[] = [
+    eq(formulas.workshopId, workshopId),
+    unlessArchived(formulas.archivedAt, q.includeArchived),
+  ];
   if (q.q) conditions.push(ilike(formulas.name, containsPattern(q.q)));
   if (q.productType) conditions.push(eq(formulas.productType, q.productType));
   const where = and(...conditions);
@@ -65,6 +69,7 @@ export async function pageFormulas(db: Database, workshopId: string, q: FormulaL
       latestState: latestState.mapWith(String),
       releasedVersion: releasedNumber,
       latestCounts,
+      archivedAt: formulas.archivedAt,
       total: totalColumn(formulas, where),
     })
     .from(formulas)
@@ -233,4 +238,24 @@ export async function updateVersion(
     .update(formulaVersions)
     .set(values)
     .where(and(eq(formulaVersions.workshopId, workshopId), eq(formulaVersions.id, versionId)));
+}
+
+/** How many of the formula's versions were ever released (released or superseded). */
+export async function countReleasedVersions(db: Database, workshopId: string, formulaId: string) {
+  const [row] = await db
+    .select({ n: sql<number>`count(*)::int` })
+    .from(formulaVersions)
+    .where(
+      and(
+        eq(formulaVersions.workshopId, workshopId),
+        eq(formulaVersions.formulaId, formulaId),
+        sql`${formulaVersions.state} <> 'draft'`,
+      ),
+    );
+  return row?.n ?? 0;
+}
+
+/** Deletes a formula; its versions and lines go with it (cascade). */
+export async function deleteFormula(db: Database, workshopId: string, id: string) {
+  await db.delete(formulas).where(and(eq(formulas.workshopId, workshopId), eq(formulas.id, id)));
 }

@@ -17,6 +17,8 @@ import { idempotentCreate } from '../core/idempotency';
 import { recordId } from '../core/record-id';
 import { parse } from '../core/validate';
 import type { Database } from '../db/database';
+import { formulas } from '../db/schema';
+import { archiveRoutes } from '../housekeeping/archiving';
 import * as views from './formula-views';
 import * as domain from './formulas-domain';
 
@@ -54,6 +56,18 @@ export function formulasRouter(deps: { db: Database; authn: Authenticator }) {
     const id = formulaId(req.params.id);
     res.json(await domain.updateFormula(db, req.user!, id, parse(formulaUpdateSchema, req.body)));
   });
+  router.delete('/:id', ...write, async (req, res) => {
+    await domain.deleteFormula(db, req.user!, formulaId(req.params.id));
+    res.status(204).end();
+  });
+  router.use(
+    archiveRoutes(db, write, {
+      table: formulas,
+      subjectType: 'formula',
+      label: 'That formula',
+      read: views.getFormula,
+    }),
+  );
   router.get('/:id/compare', ...read, async (req, res) => {
     const id = formulaId(req.params.id);
     const { from, to } = parse(compareQuerySchema, req.query);

@@ -1,4 +1,4 @@
-import type { LotFields, LotListQuery } from '@batchproof/shared';
+import type { FieldWarning, LotFields, LotListQuery } from '@batchproof/shared';
 import type { AuthUser } from '../auth/authenticate';
 import { AppError, conflict, notFound } from '../core/app-error';
 import { withIsoDates } from '../core/list-paging';
@@ -26,11 +26,43 @@ async function checkMaterial(db: Database, workshopId: string, input: LotFields)
   }
 }
 
-/** Records goods-in. The read-back shares the insert's transaction: if it fails, no lot is left. */
+/**
+ * What the user should know about a lot number: the material already has a lot with it
+ * (ignoring case and spaces). A warning, not a refusal: a supplier may reuse a number.
+ */
+async function lotNumberWarnings(
+  db: Database,
+  workshopId: string,
+  input: LotFields,
+  exceptId: string,
+): Promise<FieldWarning[]> {
+  const same = await repo.lotsNumbered(
+    db,
+    workshopId,
+    input.materialId,
+    input.supplierLotNumber,
+    exceptId,
+  );
+  if (same.length === 0) return [];
+  const days = same.map((l) => l.receivedOn).join(', ');
+  return [
+    {
+      field: 'supplierLotNumber',
+      message: `This material already has lot ${input.supplierLotNumber}, received ${days}. Check this is not the same delivery entered twice.`,
+    },
+  ];
+}
+
+/**
+ * Records goods-in. The read-back shares the insert's transaction: if it fails, no lot is left.
+ * The answer's `warnings` name a lot of the material with the same number.
+ */
 export async function createLot(db: Database, actor: AuthUser, input: LotFields) {
   return db.transaction(async (tx) => {
     await checkMaterial(tx, actor.workshopId, input);
-    return getLot(tx, actor, await repo.insertLot(tx, actor.workshopId, input));
+    const id = await repo.insertLot(tx, actor.workshopId, input);
+    const warnings = await lotNumberWarnings(tx, actor.workshopId, input, id);
+    return { ...(await getLot(tx, actor, id)), warnings };
   });
 }
 
@@ -48,7 +80,8 @@ export async function updateLot(db: Database, actor: AuthUser, id: string, input
     });
   }
   await repo.updateLot(db, actor.workshopId, id, input);
-  return getLot(db, actor, id);
+  const warnings = await lotNumberWarnings(db, actor.workshopId, input, id);
+  return { ...(await getLot(db, actor, id)), warnings };
 }
 
 /** Deletes a lot no batch has drawn from. */

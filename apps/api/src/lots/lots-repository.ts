@@ -1,4 +1,4 @@
-import { and, eq, lte, sql, type SQL } from 'drizzle-orm';
+import { and, asc, eq, lte, ne, sql, type SQL } from 'drizzle-orm';
 import type { LotFields, LotListQuery } from '@batchproof/shared';
 import {
   containsPattern,
@@ -8,6 +8,7 @@ import {
   withTotal,
 } from '../core/list-paging';
 import type { Database } from '../db/database';
+import { foldedText } from '../housekeeping/folded-text';
 import { lotConsumptions, lots, materials, suppliers } from '../db/schema';
 
 /**
@@ -132,4 +133,29 @@ export async function materialExists(db: Database, workshopId: string, materialI
     .from(materials)
     .where(and(eq(materials.workshopId, workshopId), eq(materials.id, materialId)));
   return row !== undefined;
+}
+
+/**
+ * The material's other lots with the same supplier lot number, ignoring case and spaces, oldest
+ * receipt first: the same delivery entered twice, most likely.
+ */
+export async function lotsNumbered(
+  db: Database,
+  workshopId: string,
+  materialId: string,
+  supplierLotNumber: string,
+  exceptId?: string,
+) {
+  return db
+    .select({ id: lots.id, receivedOn: lots.receivedOn })
+    .from(lots)
+    .where(
+      and(
+        eq(lots.workshopId, workshopId),
+        eq(lots.materialId, materialId),
+        sql`${foldedText(lots.supplierLotNumber, '')} = ${foldedText(supplierLotNumber, '')}`,
+        exceptId ? ne(lots.id, exceptId) : undefined,
+      ),
+    )
+    .orderBy(asc(lots.receivedOn), asc(lots.id));
 }

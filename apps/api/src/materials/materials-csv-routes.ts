@@ -4,6 +4,7 @@ import type { Database } from '../db/database';
 import { AppError } from '../core/app-error';
 import { multipart } from '../core/multipart';
 import { checkMaterialsCsv, exportMaterialsCsv, importMaterialsCsv } from './materials-csv';
+import { refuseUtf16 } from './materials-csv-messages';
 
 /** Largest CSV accepted, bytes. */
 const CSV_MAX_BYTES = 5 * 1024 * 1024;
@@ -18,8 +19,14 @@ const csvBody: RequestHandler[] = [
 ];
 
 function csvText(req: express.Request): string {
-  if (req.file) return req.file.buffer.toString('utf8');
-  if (typeof req.body === 'string' && req.body.trim()) return req.body;
+  if (req.file) {
+    refuseUtf16(req.file.buffer);
+    return req.file.buffer.toString('utf8');
+  }
+  if (typeof req.body === 'string' && req.body.trim()) {
+    refuseUtf16(req.body);
+    return req.body;
+  }
   throw new AppError(400, 'validation_failed', 'Send a CSV file.', {
     file: ['Choose a CSV file, or send the CSV as a text/csv body'],
   });

@@ -1,7 +1,6 @@
 import { setImmediate as nextTurn } from 'node:timers/promises';
 import Papa from 'papaparse';
 import {
-  fieldErrorsFromZod,
   MATERIAL_CSV_COLUMNS,
   MATERIAL_CSV_JSON_COLUMNS,
   MATERIAL_CSV_LIST_SEPARATOR,
@@ -21,6 +20,7 @@ import type { AuthUser } from '../auth/authenticate';
 import { AppError } from '../core/app-error';
 import type { Database } from '../db/database';
 import { suppliersByName } from '../suppliers/suppliers-repository';
+import { categoryFromCell, columnErrors } from './materials-csv-messages';
 import { toMaterial } from './materials-domain';
 import * as repo from './materials-repository';
 
@@ -132,6 +132,8 @@ function rowInput(cells: Cells, supplierIds: Map<string, string>) {
   ]) {
     input[k] = cell(k);
   }
+  // The screen's words ("Essential oil") name a category as well as its key.
+  input['category'] = categoryFromCell(cell('category'));
   input['functions'] = cell('functions')
     .split(MATERIAL_CSV_LIST_SEPARATOR)
     .map((f) => f.trim())
@@ -215,7 +217,7 @@ export async function checkMaterialsCsv(db: Database, actor: AuthUser, text: str
     const { input, errors, tradeName, category } = rowInput(cells, supplierIds);
     const result = materialCreateSchema.safeParse(input);
     if (!result.success) {
-      for (const [k, msgs] of Object.entries(fieldErrorsFromZod(result.error))) {
+      for (const [k, msgs] of Object.entries(columnErrors(result.error, category))) {
         (errors[k] ??= []).push(...msgs);
       }
     }

@@ -8,9 +8,10 @@ import {
   type MaterialsById,
 } from '@batchproof/shared';
 import type { AuthUser } from '../auth/authenticate';
-import { AppError, conflict, notFound } from '../core/app-error';
+import { AppError, notFound } from '../core/app-error';
 import { withIsoDates } from '../core/list-paging';
 import type { Database } from '../db/database';
+import { deleteLogged, refuseWhileReferenced } from '../housekeeping/deletion';
 import * as repo from './materials-repository';
 
 /** The API shape of a stored material: ISO dates and the calibration summary. */
@@ -52,7 +53,6 @@ function matchOf(
     ? { matchedIn: 'components' }
     : { matchedIn: 'components', matchedComponent: component };
 }
-
 
 /** One material of the caller's workshop; 404 for any other. */
 export async function getMaterial(db: Database, actor: AuthUser, id: string) {
@@ -102,14 +102,25 @@ export async function updateMaterial(
   return getMaterial(db, actor, id);
 }
 
-/** Deletes a material that no lot or formula uses (their history must stay readable). */
+/**
+ * Deletes a material that no lot, formula line or document refers to (their history must stay
+ * readable; such a material is archived instead), and logs the deletion.
+ */
 export async function deleteMaterial(db: Database, actor: AuthUser, id: string) {
-  if (!(await repo.findMaterial(db, actor.workshopId, id))) throw notFound('That material');
-  const uses = await repo.countMaterialUses(db, actor.workshopId, id);
-  if (uses.lots > 0 || uses.lines > 0) {
-    throw conflict(
-      `This material is used by ${uses.lots} lot(s) and ${uses.lines} formula line(s); it cannot be deleted.`,
-    );
-  }
-  await repo.deleteMaterial(db, actor.workshopId, id);
+  await deleteLogged(db, actor, {
+    subjectType: 'material',
+    label: 'That material',
+    id,
+    find: (tx) => repo.findMaterial(tx, actor.workshopId, id),
+    check: async (tx) => {
+      const uses = await repo.countMaterialUses(tx, actor.workshopId, id);
+      refuseWhileReferenced('this material', [
+        { count: uses.lots, one: 'lot', many: 'lots' },
+        { count: uses.lines, one: 'formula line', many: 'formula lines' },
+        { count: uses.documents, one: 'document', many: 'documents' },
+      ]);
+    },
+    remove: (tx) => repo.deleteMaterial(tx, actor.workshopId, id),
+    detail: (material) => ({ tradeName: material.tradeName }),
+  });
 }

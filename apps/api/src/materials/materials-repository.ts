@@ -8,7 +8,8 @@ import {
   withTotal,
 } from '../core/list-paging';
 import type { Database } from '../db/database';
-import { formulaLines, lots, materials, suppliers } from '../db/schema';
+import { unlessArchived } from '../housekeeping/archiving';
+import { documents, formulaLines, lots, materials, suppliers } from '../db/schema';
 
 /** The full material with its supplier's name. */
 const fullColumns = {
@@ -30,6 +31,7 @@ const fullColumns = {
   allergenDeclaration: materials.allergenDeclaration,
   weightPerVolume: materials.weightPerVolume,
   calibrations: materials.calibrations,
+  archivedAt: materials.archivedAt,
   createdAt: materials.createdAt,
   updatedAt: materials.updatedAt,
 };
@@ -48,6 +50,7 @@ const summaryColumns = {
   colourIndex: materials.colourIndex,
   functions: materials.functions,
   updatedAt: materials.updatedAt,
+  archivedAt: materials.archivedAt,
 };
 const sortColumns = {
   tradeName: materials.tradeName,
@@ -72,7 +75,10 @@ function textMatch(q: string) {
 }
 
 function listWhere(workshopId: string, q: MaterialListQuery) {
-  const conditions: (SQL | undefined)[] = [eq(materials.workshopId, workshopId)];
+  const conditions: (SQL | undefined)[] = [
+    eq(materials.workshopId, workshopId),
+    unlessArchived(materials.archivedAt, q.includeArchived),
+  ];
   if (q.q) {
     const match = textMatch(q.q);
     conditions.push(or(match.own, match.component));
@@ -169,12 +175,13 @@ export async function deleteMaterial(db: Database, workshopId: string, id: strin
   return row?.id;
 }
 
-/** How many lots and formula lines still point at the material. */
+/** How many lots, formula lines and documents still point at the material. */
 export async function countMaterialUses(db: Database, workshopId: string, id: string) {
   const [row] = await db
     .select({
       lots: sql<number>`(select count(*)::int from ${lots} where ${lots.workshopId} = ${workshopId} and ${lots.materialId} = ${id})`,
       lines: sql<number>`(select count(*)::int from ${formulaLines} where ${formulaLines.workshopId} = ${workshopId} and ${formulaLines.materialId} = ${id})`,
+      documents: sql<number>`(select count(*)::int from ${documents} where ${documents.workshopId} = ${workshopId} and ${documents.materialId} = ${id})`,
     })
     .from(sql`(select 1) as one`);
   return row!;
@@ -187,4 +194,16 @@ export async function supplierExists(db: Database, workshopId: string, supplierI
     .from(suppliers)
     .where(and(eq(suppliers.workshopId, workshopId), eq(suppliers.id, supplierId)));
   return row !== undefined;
+}
+
+/**
+ * Every material of the workshop as the CSV import matches it: trade name and supplier, those in
+ * use before archived ones, then oldest first (so a row matches the material most likely meant).
+ */
+export async function materialIdentities(db: Database, workshopId: string) {
+  return db
+    .select({ id: materials.id, tradeName: materials.tradeName, supplierId: materials.supplierId })
+    .from(materials)
+    .where(eq(materials.workshopId, workshopId))
+    .orderBy(sql`${materials.archivedAt} is not null`, materials.createdAt, materials.id);
 }

@@ -11,6 +11,8 @@ import { recordId } from '../core/record-id';
 import { parse } from '../core/validate';
 import type { Database } from '../db/database';
 import { documentStatus } from '../documents/documents-domain';
+import { materials } from '../db/schema';
+import { archiveRoutes } from '../housekeeping/archiving';
 import { materialsCsvRoutes } from './materials-csv-routes';
 import * as domain from './materials-domain';
 
@@ -51,5 +53,13 @@ export function materialsRouter(deps: { db: Database; authn: Authenticator }) {
     await domain.deleteMaterial(db, req.user!, recordId(req.params.id, 'That material'));
     res.status(204).end();
   });
+  router.use(
+    archiveRoutes(db, write, {
+      table: materials,
+      subjectType: 'material',
+      label: 'That material',
+      read: domain.getMaterial,
+    }),
+  );
   return router;
 }

@@ -1,9 +1,10 @@
 import type { z } from 'zod';
-import type { SupplierListQuery, supplierCreateSchema } from '@batchproof/shared';
+import type { FieldWarning, SupplierListQuery, supplierCreateSchema } from '@batchproof/shared';
 import type { AuthUser } from '../auth/authenticate';
 import { notFound } from '../core/app-error';
 import { withIsoDates } from '../core/list-paging';
 import type { Database } from '../db/database';
+import { deleteLogged, refuseWhileReferenced } from '../housekeeping/deletion';
 import * as repo from './suppliers-repository';
 
 /** Supplier fields after parsing with the shared schema. */
@@ -22,11 +23,35 @@ export async function getSupplier(db: Database, actor: AuthUser, id: string) {
   return withIsoDates(row);
 }
 
-export async function createSupplier(db: Database, actor: AuthUser, input: SupplierFields) {
-  const id = await repo.insertSupplier(db, actor.workshopId, input);
-  return getSupplier(db, actor, id);
+/**
+ * What the user should know about a supplier's name: another supplier of the workshop already
+ * has it, ignoring case and spaces. A warning, not a refusal: two companies can share a name.
+ */
+async function nameWarnings(
+  db: Database,
+  workshopId: string,
+  name: string,
+  exceptId?: string,
+): Promise<FieldWarning[]> {
+  const [same] = await repo.suppliersNamed(db, workshopId, name, exceptId);
+  if (!same) return [];
+  const where = same.archivedAt ? ' (archived)' : '';
+  return [
+    {
+      field: 'name',
+      message: `Another supplier is already called “${same.name}”${where}. Check this is not the same company entered twice.`,
+    },
+  ];
 }
 
+/** Creates a supplier; the answer's `warnings` name a supplier with the same name. */
+export async function createSupplier(db: Database, actor: AuthUser, input: SupplierFields) {
+  const id = await repo.insertSupplier(db, actor.workshopId, input);
+  const warnings = await nameWarnings(db, actor.workshopId, input.name, id);
+  return { ...(await getSupplier(db, actor, id)), warnings };
+}
+
+/** Replaces a supplier's fields; the answer's `warnings` name a supplier with the same name. */
 export async function updateSupplier(
   db: Database,
   actor: AuthUser,
@@ -35,10 +60,25 @@ export async function updateSupplier(
 ) {
   if (!(await repo.updateSupplier(db, actor.workshopId, id, input)))
     throw notFound('That supplier');
-  return getSupplier(db, actor, id);
+  const warnings = await nameWarnings(db, actor.workshopId, input.name, id);
+  return { ...(await getSupplier(db, actor, id)), warnings };
 }
 
-/** Deletes a supplier; its materials stay and simply lose the link. */
+/**
+ * Deletes a supplier no material names (archived materials too: their history names it), and
+ * logs the deletion; a supplier still named is archived instead.
+ */
 export async function deleteSupplier(db: Database, actor: AuthUser, id: string) {
-  if (!(await repo.deleteSupplier(db, actor.workshopId, id))) throw notFound('That supplier');
+  await deleteLogged(db, actor, {
+    subjectType: 'supplier',
+    label: 'That supplier',
+    id,
+    find: (tx) => repo.findSupplier(tx, actor.workshopId, id),
+    check: (_tx, supplier) =>
+      refuseWhileReferenced('this supplier', [
+        { count: supplier.materialCount, one: 'material', many: 'materials' },
+      ]),
+    remove: (tx) => repo.deleteSupplier(tx, actor.workshopId, id),
+    detail: (supplier) => ({ name: supplier.name }),
+  });
 }

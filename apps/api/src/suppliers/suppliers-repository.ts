@@ -1,4 +1,4 @@
-import { and, eq, ilike, or, sql, type SQL } from 'drizzle-orm';
+import { and, asc, eq, ilike, ne, or, sql, type SQL } from 'drizzle-orm';
 import type { SupplierListQuery } from '@batchproof/shared';
 import {
   containsPattern,
@@ -8,6 +8,8 @@ import {
   withTotal,
 } from '../core/list-paging';
 import type { Database } from '../db/database';
+import { foldedText } from '../housekeeping/folded-text';
+import { unlessArchived } from '../housekeeping/archiving';
 import { materials, suppliers } from '../db/schema';
 
 /** A supplier row as stored. */
@@ -25,6 +27,7 @@ const columns = {
   email: suppliers.email,
   website: suppliers.website,
   notes: suppliers.notes,
+  archivedAt: suppliers.archivedAt,
   createdAt: suppliers.createdAt,
   updatedAt: suppliers.updatedAt,
   materialCount,
@@ -37,7 +40,10 @@ const sortColumns = {
 
 /** One page of the workshop's suppliers, filtered and sorted in SQL. */
 export async function pageSuppliers(db: Database, workshopId: string, q: SupplierListQuery) {
-  const conditions: (SQL | undefined)[] = [eq(suppliers.workshopId, workshopId)];
+  const conditions: (SQL | undefined)[] = [
+    eq(suppliers.workshopId, workshopId),
+    unlessArchived(suppliers.archivedAt, q.includeArchived),
+  ];
   if (q.q) {
     const p = containsPattern(q.q);
     conditions.push(
@@ -92,6 +98,29 @@ export async function deleteSupplier(db: Database, workshopId: string, id: strin
     .where(and(eq(suppliers.workshopId, workshopId), eq(suppliers.id, id)))
     .returning({ id: suppliers.id });
   return row?.id;
+}
+
+/**
+ * The workshop's other suppliers whose name is `name` once case and runs of white space are
+ * folded (archived ones too), oldest first: a second "Alder  chemicals" is most likely a typo.
+ */
+export async function suppliersNamed(
+  db: Database,
+  workshopId: string,
+  name: string,
+  exceptId?: string,
+) {
+  return db
+    .select({ id: suppliers.id, name: suppliers.name, archivedAt: suppliers.archivedAt })
+    .from(suppliers)
+    .where(
+      and(
+        eq(suppliers.workshopId, workshopId),
+        sql`${foldedText(suppliers.name, ' ')} = ${foldedText(name, ' ')}`,
+        exceptId ? ne(suppliers.id, exceptId) : undefined,
+      ),
+    )
+    .orderBy(asc(suppliers.createdAt), asc(suppliers.id));
 }
 
 /** Suppliers of the workshop by lower-cased name, for the CSV import. */

@@ -9,6 +9,8 @@ import type { Authenticator } from '../auth/authenticate';
 import { recordId } from '../core/record-id';
 import { parse } from '../core/validate';
 import type { Database } from '../db/database';
+import { suppliers } from '../db/schema';
+import { archiveRoutes } from '../housekeeping/archiving';
 import * as domain from './suppliers-domain';
 
 /** `/api/suppliers`: members read, owner and formulator write. */
@@ -36,5 +38,13 @@ export function suppliersRouter(deps: { db: Database; authn: Authenticator }) {
     await domain.deleteSupplier(db, req.user!, recordId(req.params.id, 'That supplier'));
     res.status(204).end();
   });
+  router.use(
+    archiveRoutes(db, write, {
+      table: suppliers,
+      subjectType: 'supplier',
+      label: 'That supplier',
+      read: domain.getSupplier,
+    }),
+  );
   return router;
 }
