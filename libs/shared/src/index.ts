@@ -21,6 +21,7 @@ export * from './formulas/evaluation-input-builder';
 export * from './formulas/formula-scaling-schema';
 export * from './compliance/index';
 export * from './materials/material-csv-schema';
+export * from './materials/material-category-labels';
 export * from './dates/calendar-day';
 export * from './idempotency/idempotency-key';
 export * from './attention/attention-schema';

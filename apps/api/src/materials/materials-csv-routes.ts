@@ -1,8 +1,10 @@
 import express, { Router, type RequestHandler } from 'express';
 import multer from 'multer';
+import { materialImportQuerySchema } from '@batchproof/shared';
 import type { Database } from '../db/database';
 import { AppError } from '../core/app-error';
 import { multipart } from '../core/multipart';
+import { parse } from '../core/validate';
 import { checkMaterialsCsv, exportMaterialsCsv, importMaterialsCsv } from './materials-csv';
 import { refuseUtf16 } from './materials-csv-messages';
 
@@ -50,7 +52,9 @@ export function materialsCsvRoutes(deps: {
     res.json((await checkMaterialsCsv(db, req.user!, csvText(req))).preview);
   });
   router.post('/import', ...write, ...csvBody, async (req, res) => {
-    res.status(201).json(await importMaterialsCsv(db, req.user!, csvText(req)));
+    // `?existing=update`: rows matching a material already on file update it, not copy it.
+    const options = parse(materialImportQuerySchema, req.query);
+    res.status(201).json(await importMaterialsCsv(db, req.user!, csvText(req), options));
   });
   return router;
 }

@@ -10,10 +10,12 @@ import {
   MATERIAL_CSV_NO,
   MATERIAL_CSV_REQUIRED,
   MATERIAL_CSV_YES,
+  duplicateKey,
   materialCreateSchema,
   type Material,
   type MaterialFields,
   type MaterialImportPreview,
+  type MaterialImportQuery,
   type MaterialImportRow,
 } from '@batchproof/shared';
 import type { AuthUser } from '../auth/authenticate';
@@ -25,6 +27,11 @@ import { toMaterial } from './materials-domain';
 import * as repo from './materials-repository';
 
 type Cells = Record<string, string | undefined>;
+/** A valid row: its material's fields, and the existing material it matches, if any. */
+interface ValidRow {
+  fields: MaterialFields;
+  existingId: string | null;
+}
 
 /** The `nano` cell as a boolean: yes/true, no/false or blank (no); anything else is undefined. */
 function readYesNo(value: string): boolean | undefined {
@@ -169,6 +176,20 @@ function rowInput(cells: Cells, supplierIds: Map<string, string>) {
   return { input, errors, tradeName: cell('tradeName'), category: cell('category') };
 }
 
+/** What makes a row "the same material": its trade name (case and spaces folded) and supplier. */
+const identityKey = (tradeName: string, supplierId: string | null) =>
+  `${duplicateKey(tradeName)}\n${supplierId ?? ''}`;
+
+/** The workshop's materials by {@link identityKey}; the first of several with one key wins. */
+async function existingMaterials(db: Database, workshopId: string) {
+  const byKey = new Map<string, string>();
+  for (const m of await repo.materialIdentities(db, workshopId)) {
+    const key = identityKey(m.tradeName, m.supplierId);
+    if (!byKey.has(key)) byKey.set(key, m.id);
+  }
+  return byKey;
+}
+
 /** At most {@link MAX_ROW_MESSAGES} messages for a row, each of a readable length. */
 function boundedErrors(errors: Record<string, string[]>) {
   const out: Record<string, string[]> = {};
@@ -204,13 +225,20 @@ export async function checkMaterialsCsv(db: Database, actor: AuthUser, text: str
     fileErrors.push(
       `The file has more than ${MATERIAL_CSV_MAX_ROWS} rows; import at most ${MATERIAL_CSV_MAX_ROWS} at a time`,
     );
-    const preview: MaterialImportPreview = { fileErrors, rows: [], validCount: 0, errorCount: 0 };
-    return { preview, valid: [] as MaterialFields[] };
+    const preview: MaterialImportPreview = {
+      fileErrors,
+      rows: [],
+      validCount: 0,
+      errorCount: 0,
+      existingCount: 0,
+    };
+    return { preview, valid: [] as ValidRow[] };
   }
   if (cellRows.length === 0) fileErrors.push('The file has no data rows');
 
   const supplierIds = await suppliersByName(db, actor.workshopId);
-  const valid: MaterialFields[] = [];
+  const existing = await existingMaterials(db, actor.workshopId);
+  const valid: ValidRow[] = [];
   const rows: MaterialImportRow[] = [];
   for (const [index, cells] of cellRows.entries()) {
     if (index > 0 && index % ROWS_PER_TURN === 0) await nextTurn();
@@ -222,13 +250,17 @@ export async function checkMaterialsCsv(db: Database, actor: AuthUser, text: str
       }
     }
     const ok = Object.keys(errors).length === 0 && result.success;
-    if (ok) valid.push(result.data);
+    const existingId = ok
+      ? (existing.get(identityKey(result.data.tradeName, result.data.supplierId)) ?? null)
+      : null;
+    if (ok) valid.push({ fields: result.data, existingId });
     rows.push({
       line: index + 2,
       tradeName: clip(tradeName, 200),
       category: clip(category, 100),
       valid: ok,
       errors: boundedErrors(errors),
+      existingId,
     });
   }
   const errorCount = rows.filter((r) => !r.valid).length;
@@ -237,15 +269,23 @@ export async function checkMaterialsCsv(db: Database, actor: AuthUser, text: str
     rows: shownRows(rows),
     validCount: valid.length,
     errorCount,
+    existingCount: valid.filter((r) => r.existingId !== null).length,
   };
   return { preview, valid };
 }
 
 /**
  * Imports the CSV only when the file and every row are valid, in one transaction: either all
- * materials are created or none is.
+ * rows are written or none is. A row matching an existing material (same trade name, ignoring
+ * case and spaces, and same supplier) is created as a second copy, or with `existing: 'update'`
+ * replaces that material's fields, as a full edit would.
  */
-export async function importMaterialsCsv(db: Database, actor: AuthUser, text: string) {
+export async function importMaterialsCsv(
+  db: Database,
+  actor: AuthUser,
+  text: string,
+  options: MaterialImportQuery = { existing: 'create' },
+) {
   const { preview, valid } = await checkMaterialsCsv(db, actor, text);
   if (preview.fileErrors.length > 0 || preview.errorCount > 0) {
     const fieldErrors: Record<string, string[]> = {};
@@ -263,16 +303,24 @@ export async function importMaterialsCsv(db: Database, actor: AuthUser, text: st
       fieldErrors,
     );
   }
+  const update = options.existing === 'update';
+  const toUpdate = update ? valid.filter((r) => r.existingId !== null) : [];
+  const toCreate = update ? valid.filter((r) => r.existingId === null) : valid;
   const ids = await db.transaction(async (tx) => {
-    const all: string[] = [];
-    for (let i = 0; i < valid.length; i += ROWS_PER_INSERT) {
-      all.push(
-        ...(await repo.insertMaterials(tx, actor.workshopId, valid.slice(i, i + ROWS_PER_INSERT))),
-      );
+    const created: string[] = [];
+    for (let i = 0; i < toCreate.length; i += ROWS_PER_INSERT) {
+      const chunk = toCreate.slice(i, i + ROWS_PER_INSERT).map((r) => r.fields);
+      created.push(...(await repo.insertMaterials(tx, actor.workshopId, chunk)));
     }
-    return all;
+    for (const [index, row] of toUpdate.entries()) {
+      if (index > 0 && index % ROWS_PER_TURN === 0) await nextTurn();
+      await repo.updateMaterial(tx, actor.workshopId, row.existingId!, row.fields);
+    }
+    // In file order: each row's new id, or the id of the material it updated.
+    const next = created.values();
+    return valid.map((r) => (update && r.existingId !== null ? r.existingId : next.next().value!));
   });
-  return { imported: ids.length, ids };
+  return { imported: ids.length, ids, updated: toUpdate.length };
 }
 
 const json = (v: unknown) =>

@@ -1,22 +1,7 @@
-import { MATERIAL_CATEGORIES, type MaterialCategory } from '@batchproof/shared';
+import { MATERIAL_CATEGORIES, MATERIAL_CATEGORY_LABELS } from '@batchproof/shared';
 
-/** What each material category is called on screen. */
-export const CATEGORY_LABELS: Readonly<Record<MaterialCategory, string>> = {
-  base: 'Base',
-  acid: 'Acid',
-  binder: 'Binder',
-  hardener: 'Hardener',
-  oil: 'Oil',
-  butter: 'Butter',
-  emulsifier: 'Emulsifier',
-  surfactant: 'Surfactant',
-  colourant: 'Colourant',
-  fragrance: 'Fragrance',
-  'essential-oil': 'Essential oil',
-  preservative: 'Preservative',
-  additive: 'Additive',
-  other: 'Other',
-};
+/** What each material category is called on screen (shared: the CSV import reads these words too). */
+export const CATEGORY_LABELS = MATERIAL_CATEGORY_LABELS;
 
 /** Every category with its label, in the shared order, for pickers. */
 export const CATEGORY_OPTIONS = MATERIAL_CATEGORIES.map((category) => ({
