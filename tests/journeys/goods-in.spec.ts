@@ -2,6 +2,7 @@ import { randomBytes } from 'node:crypto';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { type JourneyHarness, startJourneyHarness } from './journey-harness';
+import { shownDay } from './material-and-certificate-steps';
 
 /** Creates a material through the API as the signed-in owner; returns its id. */
 async function createMaterial(
@@ -94,7 +95,10 @@ describe('journey: goods-in', () => {
     );
     expect(await page.getByLabel('Supplier lot number').inputValue()).toBe('SB-2231');
     expect(await page.getByLabel('Quantity received').inputValue()).toBe('5000');
-    expect(await page.getByLabel('Expiry date').inputValue()).toBe('2026-02-01');
+    // Typed as 2026-02-01, the day is shown back the way the app writes dates.
+    expect(await page.getByLabel('Expiry date').inputValue()).toBe(
+      await shownDay(page, '2026-02-01'),
+    );
     expect(await page.getByLabel('Notes').inputValue()).toBe('Two tubs, seals intact.');
     await page.waitForTimeout(300); // let the message finish fading in for the screenshot
     await h.screenshot(page, 'goods-in-02-expiry-before-received');

@@ -5,13 +5,15 @@ import path from 'node:path';
 import { type Browser, type BrowserContext, chromium, type Page } from 'playwright-core';
 import { createApp } from '../../apps/api/src/app';
 import type { DatabaseHandle } from '../../apps/api/src/db/database';
+import { seedDemo } from '../../apps/api/src/seed/demo-seed';
 import { firstLink, startMailCatcher } from '../support/mail-catcher';
+import { checkLayoutAtWidths } from './layout-checks';
 import { openMigratedTestDatabase } from '../support/test-database';
 
 const ROOT = path.resolve(import.meta.dirname, '../..');
 const WEB_DIST = path.join(ROOT, 'dist/web/browser');
-/** Where screenshots go; `test-output/` is ignored by git. */
-export const OUTPUT_DIR = path.join(ROOT, 'test-output/journeys');
+/** Where screenshots go, `<page>-<width>.png`; `test-output/` is ignored by git. */
+export const OUTPUT_DIR = path.join(ROOT, 'test-output/screenshots');
 
 /** Something the browser did that a journey must not allow. */
 export interface Problem {
@@ -36,10 +38,19 @@ export interface JourneyHarness {
    * from the mail catcher, confirms, and waits for the workshop's home page.
    */
   signUpWorkshop(page: Page, who: WorkshopOwner): Promise<void>;
+  /**
+   * Seeds the demo workshop (Hollowmere Bathworks: suppliers, materials, lots, formulas and one
+   * member per role, `<role>@hollowmere.example`) with `password`, as `npm start` does.
+   */
+  seedDemo(password: string): Promise<void>;
   /** Signs in over the API (not the browser) and returns an access token, for arranging data. */
   apiSignIn(email: string, password: string): Promise<string>;
-  /** Saves a full-page screenshot as `<name>.png` under the output folder. */
-  screenshot(page: Page, name: string): Promise<string>;
+  /**
+   * Checks the page as it stands at 360, 768 and 1280 px wide (no sideways overflow, no clipped
+   * text) and saves a full-page screenshot of each as `<name>-<width>.png` under the output
+   * folder; the window returns to its size. Every page a journey reaches goes through it.
+   */
+  screenshot(page: Page, name: string): Promise<string[]>;
   close(): Promise<void>;
 }
 
@@ -108,6 +119,9 @@ export async function startJourneyHarness(): Promise<JourneyHarness> {
       await page.waitForURL(`${baseUrl}/`);
       await page.getByRole('heading', { name: who.workshop }).waitFor();
     },
+    async seedDemo(password) {
+      await seedDemo(handle.db, password);
+    },
     async apiSignIn(email, password) {
       const res = await fetch(`${baseUrl}/api/auth/sign-in`, {
         method: 'POST',
@@ -141,11 +155,7 @@ export async function startJourneyHarness(): Promise<JourneyHarness> {
       });
       return page;
     },
-    async screenshot(page, name) {
-      const file = path.join(OUTPUT_DIR, `${name}.png`);
-      await page.screenshot({ path: file, fullPage: true });
-      return file;
-    },
+    screenshot: (page, name) => checkLayoutAtWidths(page, name, OUTPUT_DIR),
     async close() {
       for (const context of contexts) await context.close();
       await browser.close();

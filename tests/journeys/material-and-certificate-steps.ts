@@ -33,3 +33,17 @@ export async function choose(page: Page, label: string, option: string | RegExp)
   await page.getByRole('combobox', { name: label, exact: true }).click();
   await page.getByRole('option', { name: option }).click();
 }
+
+/** A `YYYY-MM-DD` day as the app shows it in the browser's locale (e.g. "Mar 1, 2025" in en-US). */
+export async function shownDay(page: Page, day: string): Promise<string> {
+  return page.evaluate(
+    (d) =>
+      new Intl.DateTimeFormat(navigator.language, {
+        day: 'numeric',
+        month: 'short',
+        year: 'numeric',
+        timeZone: 'UTC',
+      }).format(new Date(`${d}T00:00:00Z`)),
+    day,
+  );
+}

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { type JourneyHarness, startJourneyHarness } from './journey-harness';
-import { choose, daysAgo, runId, writeSmallPdf } from './material-and-certificate-steps';
+import { choose, daysAgo, runId, shownDay, writeSmallPdf } from './material-and-certificate-steps';
 
 describe('journey: a formulator records a fragrance oil and files its certificate', () => {
   let h: JourneyHarness;
@@ -103,9 +103,11 @@ describe('journey: a formulator records a fragrance oil and files its certificat
     expect(await row.getByRole('cell').nth(0).textContent()).toContain(
       'IFRA conformity certificate',
     );
-    expect(await row.getByRole('cell').nth(1).textContent()).toContain(issuedOn);
+    // Dates are written one way, in the browser's locale, in the table and in the status alike.
+    const shown = await shownDay(page, issuedOn);
+    expect(await row.getByRole('cell').nth(1).textContent()).toContain(shown);
     await status.getByText('IFRA conformity certificate: On file').waitFor();
-    await status.getByText(`IFRA certificate issued on ${issuedOn}`).waitFor();
+    await status.getByText(`IFRA certificate issued on ${shown}`).waitFor();
     expect(await status.getByText('Safety data sheet: Missing').count()).toBe(1);
     await h.screenshot(page, 'material-05-certificate-uploaded');
 

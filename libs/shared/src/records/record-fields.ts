@@ -44,7 +44,14 @@ export const optionalText = (label: string, max = 200) =>
  */
 export const isoDate = (label: string) =>
   z.iso
-    .date({ error: `Enter ${label} as YYYY-MM-DD` })
+    .date({
+      // A missing date is asked for plainly (a date picker sends none for text it cannot read);
+      // only text in another form is told the wire format.
+      error: (issue) =>
+        issue.input === undefined || issue.input === null
+          ? `Enter ${label}`
+          : `Enter ${label} as YYYY-MM-DD`,
+    })
     .refine((v) => !v.startsWith('0000-'), { error: `Enter ${label} in year 1 or later` });
 
 /** An optional calendar date; empty means none. */

@@ -45,6 +45,8 @@ export function showFieldErrors(form: FormGroup, fieldErrors: Record<string, str
 export function errorMessage(control: AbstractControl): string {
   const errors = control.errors;
   if (!errors) return '';
+  // Text a date field could not read: the field holds no date, so say so before any other message.
+  if (errors['matDatepickerParse']) return 'Not a date: pick one from the calendar.';
   const message: unknown = errors[SCHEMA_ERROR];
   if (typeof message === 'string') return message;
   if (errors['required']) return 'This field is required.';

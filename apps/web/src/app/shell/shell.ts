@@ -98,6 +98,16 @@ export default class Shell {
     });
   }
 
+  /**
+   * Moves focus past the toolbar and the navigation to the page's content, so keyboard and
+   * screen-reader users start where the work is (the router would treat the bare fragment as a
+   * navigation, so the link's default is prevented).
+   */
+  protected skipToContent(event: Event, main: HTMLElement): void {
+    event.preventDefault();
+    main.focus();
+  }
+
   protected closeIfOverlay(sidenav: MatSidenav): void {
     if (this.narrow()) void sidenav.close();
   }

@@ -21,6 +21,7 @@ import { DocumentUpload } from '../document-upload/document-upload';
 import { DOCUMENT_KIND_LABELS, fileSize } from '../document-kinds';
 import { DocumentsApi } from '../documents-api';
 import { saveFile } from '../save-file';
+import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
 
 /**
  * The supplier documents of one material or one lot: the list (each file downloadable), the
@@ -30,6 +31,7 @@ import { saveFile } from '../save-file';
 @Component({
   selector: 'bp-document-panel',
   imports: [
+    CalendarDayPipe,
     MatButton,
     MatIcon,
     MatIconButton,

@@ -1,6 +1,8 @@
 import { ChangeDetectionStrategy, Component, input } from '@angular/core';
 import { MatIcon } from '@angular/material/icon';
 import type { DocumentStatus } from '@batchproof/shared';
+import { browserLocale } from '../../dates/calendar-day-adapter';
+import { formatDay } from '../../dates/calendar-day-pipe';
 import { DOCUMENT_KIND_LABELS } from '../document-kinds';
 
 type State = DocumentStatus['entries'][number]['state'];
@@ -36,7 +38,7 @@ const STATES: Record<State, { icon: string; word: string }> = {
               <span class="kind"
                 >{{ labels[e.kind] }}: <strong>{{ states[e.state].word }}</strong></span
               >
-              <span class="message">{{ e.message }}</span>
+              <span class="message">{{ message(e) }}</span>
             </span>
           </li>
         }
@@ -95,4 +97,11 @@ export class DocumentStatusList {
 
   protected readonly labels = DOCUMENT_KIND_LABELS;
   protected readonly states = STATES;
+  private readonly locale = browserLocale();
+
+  /** The API's sentence with its issue date written the way every date on screen is. */
+  protected message(entry: DocumentStatus['entries'][number]): string {
+    const day = entry.latest?.issuedOn;
+    return day ? entry.message.replace(day, formatDay(day, this.locale)) : entry.message;
+  }
 }

@@ -11,7 +11,7 @@ import {
 } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
-import { MatError, MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
+import { MatError, MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
@@ -30,6 +30,8 @@ import { ApiError } from '../../http/api-error';
 import { SubmissionKey } from '../../http/submission-key';
 import { DOCUMENT_KIND_OPTIONS, fileSize } from '../document-kinds';
 import { DocumentsApi } from '../documents-api';
+import { MatDatepickerModule } from '@angular/material/datepicker';
+import { provideCalendarDays } from '../../dates/calendar-day-adapter';
 
 const MAX_SIZE_WORDS = fileSize(DOCUMENT_MAX_BYTES);
 
@@ -46,6 +48,8 @@ const REFUSALS: Partial<Record<number, string>> = {
 @Component({
   selector: 'bp-document-upload',
   imports: [
+    MatDatepickerModule,
+    MatSuffix,
     ReactiveFormsModule,
     MatButton,
     MatError,
@@ -58,6 +62,8 @@ const REFUSALS: Partial<Record<number, string>> = {
     MatProgressBar,
     MatSelect,
   ],
+  // Dates typed and shown in the browser's locale, held as YYYY-MM-DD.
+  providers: [provideCalendarDays()],
   templateUrl: './document-upload.html',
   styleUrl: './document-upload.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import {
   ChangeDetectionStrategy,
   Component,
@@ -31,6 +30,7 @@ import { createFormulaForm } from './formula-form';
 import { FormulaLines } from './formula-lines';
 import { ProfileFields } from './profile-fields';
 import { VersionHistory } from './version-history';
+import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
 
 const sameIds = (a: readonly string[], b: readonly string[]) => a.join() === b.join();
 
@@ -42,7 +42,7 @@ const sameIds = (a: readonly string[], b: readonly string[]) => a.join() === b.j
 @Component({
   selector: 'bp-formula-page',
   imports: [
-    DatePipe,
+    CalendarDayPipe,
     ReactiveFormsModule,
     MatButton,
     MatError,

@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, input, linkedSignal } from '@angular/core';
 import { FormsModule } from '@angular/forms';
 import { MatAnchor } from '@angular/material/button';
@@ -8,6 +7,7 @@ import { MatOption, MatSelect } from '@angular/material/select';
 import { RouterLink } from '@angular/router';
 import type { Formula } from '@batchproof/shared';
 import { SEVERITIES, SeverityLabel } from '../severity/severity-label';
+import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
 
 /**
  * A formula's versions, newest first, with their state and the server's finding counts; and a
@@ -16,7 +16,7 @@ import { SEVERITIES, SeverityLabel } from '../severity/severity-label';
 @Component({
   selector: 'bp-version-history',
   imports: [
-    DatePipe,
+    CalendarDayPipe,
     FormsModule,
     MatAnchor,
     MatFormField,
@@ -43,10 +43,10 @@ import { SEVERITIES, SeverityLabel } from '../severity/severity-label';
           <span class="when">
             @if (v.releasedAt) {
               released
-              <time [attr.datetime]="v.releasedAt">{{ v.releasedAt | date: 'd MMM y' }}</time>
+              <time [attr.datetime]="v.releasedAt">{{ v.releasedAt | day }}</time>
             } @else {
               changed
-              <time [attr.datetime]="v.updatedAt">{{ v.updatedAt | date: 'd MMM y, HH:mm' }}</time>
+              <time [attr.datetime]="v.updatedAt">{{ v.updatedAt | day: 'time' }}</time>
             }
           </span>
           @if (v.counts; as counts) {

@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { MatButton } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
@@ -25,12 +24,13 @@ import { FormulasApi } from '../formulas-api';
 import { PRODUCT_TYPE_LABELS } from '../product-types';
 import { SEVERITIES, SeverityLabel } from '../severity/severity-label';
 import { NewFormulaDialog } from './new-formula-dialog';
+import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
 
 /** The workshop's formulas, filtered, sorted and paged on the server through the URL. */
 @Component({
   selector: 'bp-formula-list-page',
   imports: [
-    DatePipe,
+    CalendarDayPipe,
     MatButton,
     MatFormField,
     MatIcon,

@@ -9,6 +9,7 @@ import {
 import { MatIcon } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
 import type { Attention } from '@batchproof/shared';
+import { browserLocale } from '../../dates/calendar-day-adapter';
 import { allClearSentence, attentionGroups } from './attention-rows';
 
 /**
@@ -95,6 +96,10 @@ export class AttentionList {
   readonly attention = input.required<Attention>();
 
   private readonly locale = inject(LOCALE_ID);
-  protected readonly groups = computed(() => attentionGroups(this.attention(), this.locale));
+  /** Dates follow the browser's language, as everywhere (dates/calendar-day-adapter). */
+  private readonly dateLocale = browserLocale();
+  protected readonly groups = computed(() =>
+    attentionGroups(this.attention(), this.locale, this.dateLocale),
+  );
   protected readonly allClear = computed(() => allClearSentence(this.attention()));
 }

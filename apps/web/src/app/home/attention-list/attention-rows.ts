@@ -1,10 +1,11 @@
-import { formatDate, formatNumber } from '@angular/common';
+import { formatNumber } from '@angular/common';
 import {
   ATTENTION_EXPIRY_DAYS,
   type Attention,
   type AttentionItem,
   type AttentionKind,
 } from '@batchproof/shared';
+import { formatDay } from '../../dates/calendar-day-pipe';
 
 /** One row on the home page: an icon, a plain sentence and where it leads. */
 export interface AttentionRow {
@@ -111,9 +112,13 @@ const KINDS: {
 };
 
 /** The attention answer as groups of rows, in the order the API ranks the kinds. */
-export function attentionGroups(attention: Attention, locale: string): AttentionGroup[] {
+export function attentionGroups(
+  attention: Attention,
+  locale: string,
+  dateLocale = locale,
+): AttentionGroup[] {
   const f: Formats = {
-    date: (day) => formatDate(day, 'mediumDate', locale),
+    date: (day) => formatDay(day, dateLocale),
     number: (n) => formatNumber(n, locale, '1.0-3'),
   };
   const groups = new Map<AttentionKind, AttentionRow[]>();

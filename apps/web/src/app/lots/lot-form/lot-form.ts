@@ -10,7 +10,7 @@ import {
 } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
-import { MatError, MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
+import { MatError, MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
@@ -28,6 +28,8 @@ import { SubmissionKey } from '../../http/submission-key';
 import { isoDay } from '../lot-expiry';
 import { LotsApi } from '../lots-api';
 import { MaterialPicker } from '../material-picker/material-picker';
+import { MatDatepickerModule } from '@angular/material/datepicker';
+import { provideCalendarDays } from '../../dates/calendar-day-adapter';
 
 /**
  * Records a delivery (goods-in) or corrects one. The form is validated with the shared
@@ -36,6 +38,8 @@ import { MaterialPicker } from '../material-picker/material-picker';
 @Component({
   selector: 'bp-lot-form',
   imports: [
+    MatDatepickerModule,
+    MatSuffix,
     ReactiveFormsModule,
     MatButton,
     MatError,
@@ -49,6 +53,8 @@ import { MaterialPicker } from '../material-picker/material-picker';
     MatSelect,
     MaterialPicker,
   ],
+  // Dates typed and shown in the browser's locale, held as YYYY-MM-DD.
+  providers: [provideCalendarDays()],
   templateUrl: './lot-form.html',
   styleUrl: './lot-form.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

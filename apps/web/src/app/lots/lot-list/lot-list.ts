@@ -1,4 +1,4 @@
-import { DatePipe, DecimalPipe } from '@angular/common';
+import { DecimalPipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { MatAnchor, MatButton } from '@angular/material/button';
 import { MatFormField, MatLabel, MatPrefix } from '@angular/material/form-field';
@@ -16,6 +16,7 @@ import { injectUrlListQuery, keepLastValue } from '../../lists/url-list-query';
 import { EXPIRY_FILTERS, EXPIRY_FLAGS, expiresBeforeFor, expiryState } from '../lot-expiry';
 import { LotsApi } from '../lots-api';
 import { MaterialPicker } from '../material-picker/material-picker';
+import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
 
 /**
  * Goods-in: every lot the workshop received, with its stock on hand, filtered, sorted and paged
@@ -24,7 +25,7 @@ import { MaterialPicker } from '../material-picker/material-picker';
 @Component({
   selector: 'bp-lot-list',
   imports: [
-    DatePipe,
+    CalendarDayPipe,
     DecimalPipe,
     MatAnchor,
     MatButton,

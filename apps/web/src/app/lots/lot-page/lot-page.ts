@@ -1,4 +1,4 @@
-import { DatePipe, DecimalPipe } from '@angular/common';
+import { DecimalPipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
 import { MatButton } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
@@ -14,6 +14,7 @@ import { LotForm } from '../lot-form/lot-form';
 import { EXPIRY_FLAGS, expiryState } from '../lot-expiry';
 import { LotsApi } from '../lots-api';
 import { DeleteLotDialog, type DeleteLotData } from './delete-lot-dialog';
+import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
 
 /**
  * One lot (`/lots/:id`) or a new delivery (`/lots/new`, optionally `?materialId=…`): the form for
@@ -23,7 +24,7 @@ import { DeleteLotDialog, type DeleteLotData } from './delete-lot-dialog';
 @Component({
   selector: 'bp-lot-page',
   imports: [
-    DatePipe,
+    CalendarDayPipe,
     DecimalPipe,
     DocumentPanel,
     LotForm,

@@ -8,6 +8,8 @@ import { EditableRow } from '../../forms/editable-row';
 import { errorMessage } from '../../forms/form-errors';
 import { formChanges } from '../material-form/form-changes';
 import { type AllergenGroup, MaterialFormModel } from '../material-form/material-form-model';
+import { MatDatepickerModule } from '@angular/material/datepicker';
+import { provideCalendarDays } from '../../dates/calendar-day-adapter';
 
 const round = (n: number) => Math.round(n * 1000) / 1000;
 
@@ -18,6 +20,7 @@ const round = (n: number) => Math.round(n * 1000) / 1000;
 @Component({
   selector: 'bp-allergen-declaration-editor',
   imports: [
+    MatDatepickerModule,
     EditableRow,
     ReactiveFormsModule,
     MatButton,
@@ -28,13 +31,17 @@ const round = (n: number) => Math.round(n * 1000) / 1000;
     MatLabel,
     MatSuffix,
   ],
+  // Dates typed and shown in the browser's locale, held as YYYY-MM-DD.
+  providers: [provideCalendarDays()],
   template: `
     @let s = state();
     <section [formGroup]="group()" aria-labelledby="allergen-heading">
       <h3 id="allergen-heading">Allergen declaration</h3>
       <mat-form-field class="date">
         <mat-label>Declaration date</mat-label>
-        <input matInput type="date" formControlName="documentDate" />
+        <input matInput [matDatepicker]="documentDatePicker" formControlName="documentDate" />
+        <mat-datepicker-toggle matIconSuffix [for]="documentDatePicker" />
+        <mat-datepicker #documentDatePicker />
         <mat-error>{{ errorMessage(group().controls.documentDate) }}</mat-error>
       </mat-form-field>
       @if (s.count === 0) {

@@ -8,6 +8,8 @@ import { EditableRow } from '../../forms/editable-row';
 import { errorMessage } from '../../forms/form-errors';
 import { formChanges } from '../material-form/form-changes';
 import { type IfraGroup, MaterialFormModel } from '../material-form/material-form-model';
+import { MatDatepickerModule } from '@angular/material/datepicker';
+import { provideCalendarDays } from '../../dates/calendar-day-adapter';
 
 /**
  * The supplier's IFRA conformity certificate for a fragrance or essential oil: the maximum
@@ -16,6 +18,7 @@ import { type IfraGroup, MaterialFormModel } from '../material-form/material-for
 @Component({
   selector: 'bp-ifra-certificate-editor',
   imports: [
+    MatDatepickerModule,
     EditableRow,
     ReactiveFormsModule,
     MatButton,
@@ -27,6 +30,8 @@ import { type IfraGroup, MaterialFormModel } from '../material-form/material-for
     MatLabel,
     MatSuffix,
   ],
+  // Dates typed and shown in the browser's locale, held as YYYY-MM-DD.
+  providers: [provideCalendarDays()],
   template: `
     @let s = state();
     <section [formGroup]="group()" aria-labelledby="ifra-heading">
@@ -34,7 +39,9 @@ import { type IfraGroup, MaterialFormModel } from '../material-form/material-for
       <div class="dates">
         <mat-form-field>
           <mat-label>Certificate issue date</mat-label>
-          <input matInput type="date" formControlName="issuedOn" />
+          <input matInput [matDatepicker]="issuedOnPicker" formControlName="issuedOn" />
+          <mat-datepicker-toggle matIconSuffix [for]="issuedOnPicker" />
+          <mat-datepicker #issuedOnPicker />
           <mat-error>{{ errorMessage(group().controls.issuedOn) }}</mat-error>
         </mat-form-field>
         <mat-form-field>

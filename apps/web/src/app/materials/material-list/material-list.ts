@@ -23,6 +23,7 @@ import { injectUrlListQuery, keepLastValue } from '../../lists/url-list-query';
 import { MaterialImport } from '../material-import/material-import';
 import { CATEGORY_LABELS, CATEGORY_OPTIONS } from '../material-labels';
 import { MaterialsApi } from '../materials-api';
+import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
 
 /**
  * The workshop's materials, filtered, sorted and paged on the server through the URL's query
@@ -31,6 +32,7 @@ import { MaterialsApi } from '../materials-api';
 @Component({
   selector: 'bp-material-list',
   imports: [
+    CalendarDayPipe,
     MatAnchor,
     MatButton,
     MatFormField,

@@ -17,6 +17,8 @@ import {
   MEASURES,
   type WeightPerVolumeGroup,
 } from '../material-form/material-form-model';
+import { MatDatepickerModule } from '@angular/material/datepicker';
+import { provideCalendarDays } from '../../dates/calendar-day-adapter';
 
 /**
  * Grams per cup, spoon, millilitre and drop, and the maker's own calibrations (a weighed amount
@@ -25,6 +27,7 @@ import {
 @Component({
   selector: 'bp-weight-per-volume-editor',
   imports: [
+    MatDatepickerModule,
     EditableRow,
     DecimalPipe,
     ReactiveFormsModule,
@@ -38,6 +41,8 @@ import {
     MatSelect,
     MatSuffix,
   ],
+  // Dates typed and shown in the browser's locale, held as YYYY-MM-DD.
+  providers: [provideCalendarDays()],
   templateUrl: './weight-per-volume-editor.html',
   styleUrl: './weight-per-volume-editor.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,13 +1,13 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, input, output } from '@angular/core';
 import { MatButton } from '@angular/material/button';
 import { MatIcon } from '@angular/material/icon';
 import type { Invitation } from '@batchproof/shared';
+import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
 
 /** Invitations sent but not yet accepted, each with a way to take it back. */
 @Component({
   selector: 'bp-invitation-list',
-  imports: [DatePipe, MatButton, MatIcon],
+  imports: [CalendarDayPipe, MatButton, MatIcon],
   template: `
     <h2 id="pending-heading">Pending invitations</h2>
     @if (invitations().length === 0) {
@@ -22,9 +22,7 @@ import type { Invitation } from '@batchproof/shared';
               <span class="email">{{ invitation.email }}</span>
               <span class="meta">
                 <span class="role">{{ invitation.role }}</span> · link expires
-                <time [attr.datetime]="invitation.expiresAt">{{
-                  invitation.expiresAt | date: 'd MMM y'
-                }}</time>
+                <time [attr.datetime]="invitation.expiresAt">{{ invitation.expiresAt | day }}</time>
               </span>
             </div>
             <button

@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import {
   ChangeDetectionStrategy,
   Component,
@@ -39,6 +38,7 @@ import {
   RemoveMemberDialog,
   type RemoveMemberData,
 } from '../remove-member-dialog/remove-member-dialog';
+import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
 
 /**
  * The workshop's members and their roles, sorted on the server. Owners also change roles,
@@ -47,7 +47,7 @@ import {
 @Component({
   selector: 'bp-members-page',
   imports: [
-    DatePipe,
+    CalendarDayPipe,
     MatButton,
     MatIcon,
     MatIconButton,

@@ -80,7 +80,9 @@ describe('ReferenceListPage', () => {
     expect(rows['label']!.text[0]).toContain('Coumarin');
     expect(rows['details']!.text[0]).toContain('91-64-5');
     expect(rows['source']!.text[0]).toContain('Annex III');
-    expect(rows['status']!.text[1]).toContain('From memory');
+    // "How sure" explains itself: what each level rests on, and that an unconfirmed rule warns.
+    expect(rows['status']!.text[0]).toContain("Confirmed in the regulation's text");
+    expect(rows['status']!.text[1]).toContain('Not yet confirmed: warns, never blocks');
     expect(harness.routeNativeElement!.querySelector('h1')!.textContent).toContain(
       'Labelled fragrance allergens',
     );

@@ -13,19 +13,24 @@ import { messageOf } from '../../http/api-error';
 import { injectUrlListQuery, keepLastValue } from '../../lists/url-list-query';
 import { referenceDetails } from '../reference-details';
 import { ReferenceListsApi } from '../reference-lists-api';
+import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
 
-/** How sure we are of a row, in words (the tags of the regulatory sources file). */
+/**
+ * How sure we are of a row, in words that say what it rests on and, for an unconfirmed row, what
+ * the engine does with it (the tags of the regulatory sources file).
+ */
 const STATUS_WORDS: Record<ReferenceRowView['status'], string> = {
-  C: 'Confirmed in the primary text',
+  C: "Confirmed in the regulation's text",
   C2: 'Confirmed in a secondary source',
-  CALC: 'Computed from confirmed values',
-  M: 'From memory, not yet confirmed',
+  CALC: 'Derived from confirmed values',
+  M: 'Not yet confirmed: warns, never blocks',
 };
 
 /** One reference list as a table filtered, sorted and paged on the server via the URL. */
 @Component({
   selector: 'bp-reference-list-page',
   imports: [
+    CalendarDayPipe,
     MatFormField,
     MatIcon,
     MatInput,
