@@ -26,10 +26,14 @@ const WITH_ERRORS: MaterialImportPreview = {
       tradeName: '',
       category: 'glitter',
       valid: false,
-      errors: { tradeName: ['Trade name is required'], category: ['Choose a category: base, …'] },
+      errors: {
+        tradeName: ['Trade name is required'],
+        category: ['"glitter" is not a category. Write one of: Base, Acid, …'],
+      },
     },
+    { line: 5, tradeName: 'Lavender Oil', category: 'essential-oil', valid: true, errors: {} },
   ],
-  validCount: 1,
+  validCount: 2,
   errorCount: 2,
 };
 
@@ -66,24 +70,66 @@ async function preview(o: Opened, answer: MaterialImportPreview) {
 }
 
 describe('MaterialImport', () => {
-  it('shows each row that needs attention with its messages and keeps Import disabled', async () => {
+  it('lists the problems by row above the table, by the file’s column and the screen’s words, and keeps Import disabled', async () => {
     const o = await openImport();
     await preview(o, WITH_ERRORS);
+
+    // Outside the table, so no cell width can cut a reason short.
+    const list = o.el.querySelector('[aria-label="Rows that need attention"]')!;
+    expect(list.closest('table')).toBeNull();
+    const rows = [...list.querySelectorAll(':scope > li')].map((li) => li.textContent!.trim());
+    expect(rows).toHaveLength(2);
+    expect(rows[0]).toContain('Line 3 · Pearl Blend');
+    expect(rows[0]).toContain(
+      'Blend components (column components): Components add up to 90 %; they must add up to 100 %',
+    );
+    expect(rows[1]).toContain('Line 4 · no trade name');
+    expect(rows[1]).toContain('Trade name (column tradeName): Trade name is required');
+    expect(rows[1]).toContain('Category (column category): "glitter" is not a category');
+    expect(list.textContent).not.toMatch(/(^|\s)(tradeName|components):/);
 
     const table = await o.loader.getHarness(MatTableHarness);
     const cells = await table.getCellTextByColumnName();
     // Rows that need attention come first.
-    expect(cells['line']!.text).toEqual(['3', '4', '2']);
-    expect(cells['result']!.text[0]).toContain(
-      'components: Components add up to 90 %; they must add up to 100 %',
-    );
-    expect(cells['result']!.text[1]).toContain('tradeName: Trade name is required');
-    expect(cells['result']!.text[2]).toContain('Ready');
-    expect(o.el.querySelector('.counts')?.textContent).toContain('1 row(s) ready');
+    expect(cells['line']!.text).toEqual(['3', '4', '2', '5']);
+    const checks = ['Needs attention (1)', 'Needs attention (2)', 'Ready', 'Ready'];
+    checks.forEach((check, i) => expect(cells['result']!.text[i]).toContain(check));
+    // Categories as the screen names them; a value that is none stays as the file has it.
+    expect(cells['category']!.text).toEqual(['Colourant', 'glitter', 'Colourant', 'Essential oil']);
+    expect(o.el.querySelector('.counts')?.textContent).toContain('2 row(s) ready');
     expect(await (await o.importButton()).isDisabled()).toBe(true);
 
     await (await o.importButton()).click();
     o.backend.expectNone('/api/materials/import');
+  });
+
+  it('names the required columns and asks for CSV UTF-8 before a file is chosen', async () => {
+    const o = await openImport();
+    const lead = o.el.querySelector('.lead')!.textContent!;
+    expect(lead).toContain('the tradeName, inci and category columns are required');
+    expect(lead).toContain('Essential oil');
+    expect(lead).toContain('CSV UTF-8');
+  });
+
+  it('says how to save the file again when the server refuses it as UTF-16', async () => {
+    const o = await openImport();
+    pickFile(o.el.querySelector('input[type=file]')!, new File(['\uFEFFx'], 'm.csv'));
+    o.backend.expectOne('/api/materials/import/preview').flush(
+      {
+        error: {
+          code: 'validation_failed',
+          message: 'This file is saved as UTF-16 ("Unicode text"), which the import cannot read.',
+          fieldErrors: { file: ['In Excel, Save As "CSV UTF-8 (Comma delimited)".'] },
+        },
+      },
+      { status: 400, statusText: 'Bad Request' },
+    );
+    await o.fixture.whenStable();
+
+    const alert = o.el.querySelector('[role=alert]')!.textContent!;
+    expect(alert).toContain('This file is saved as UTF-16');
+    expect(alert).toContain('In Excel, Save As "CSV UTF-8 (Comma delimited)".');
+    expect(await (await o.importButton()).isDisabled()).toBe(true);
   });
 
   it('keeps Import disabled when the file itself has problems', async () => {

@@ -9,6 +9,7 @@ import {
 import { MatButton, MatIconButton } from '@angular/material/button';
 import { MatIcon } from '@angular/material/icon';
 import { MatProgressBar } from '@angular/material/progress-bar';
+import { MatCheckbox } from '@angular/material/checkbox';
 import { MatTableModule } from '@angular/material/table';
 import {
   MATERIAL_CSV_COLUMNS,
@@ -16,20 +17,30 @@ import {
   type MaterialImportResult,
   type MaterialImportRow,
 } from '@batchproof/shared';
-import { messageOf } from '../../http/api-error';
+import { ApiError, messageOf } from '../../http/api-error';
+import { CATEGORY_LABELS } from '../material-labels';
 import { MaterialsApi } from '../materials-api';
+import { columnLabel } from './csv-columns';
 
 /** Most rows the preview table shows; problems come first. */
 const SHOWN_ROWS = 100;
 
+/** One row that needs attention, with its messages in the screen's words. */
+interface RowProblems {
+  line: number;
+  tradeName: string;
+  problems: { where: string; message: string }[];
+}
+
 /**
  * Imports materials from a CSV file in two steps: pick a file and see every row checked by
  * the server, then import, which is offered only when every row is valid (the server writes
- * all rows or none).
+ * all rows or none). The reasons are listed by row above the table, where no cell width can
+ * cut them short; the table only says which rows are ready.
  */
 @Component({
   selector: 'bp-material-import',
-  imports: [MatButton, MatIcon, MatIconButton, MatProgressBar, MatTableModule],
+  imports: [MatButton, MatCheckbox, MatIcon, MatIconButton, MatProgressBar, MatTableModule],
   templateUrl: './material-import.html',
   styleUrl: './material-import.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -48,12 +59,23 @@ export class MaterialImport {
   protected readonly preview = signal<MaterialImportPreview | null>(null);
   protected readonly busy = signal<'checking' | 'importing' | null>(null);
   protected readonly notice = signal('');
+  /** Whether rows matching a material already on file update it rather than add a copy. */
+  protected readonly updateExisting = signal(false);
+  /** What the server added to a refusal of the whole file, such as how to save it as UTF-8. */
+  protected readonly noticeDetails = signal<readonly string[]>([]);
   /** Rows to show: those that need attention first. */
   protected readonly shownRows = computed(() => {
     const rows = this.preview()?.rows ?? [];
     const ordered = [...rows.filter((r) => !r.valid), ...rows.filter((r) => r.valid)];
     return ordered.slice(0, SHOWN_ROWS);
   });
+  /** The rows that need attention with their messages, in line order. */
+  protected readonly rowProblems = computed<RowProblems[]>(() =>
+    this.shownRows()
+      .filter((r) => !r.valid)
+      .sort((a, b) => a.line - b.line)
+      .map((r) => ({ line: r.line, tradeName: r.tradeName, problems: this.problemsOf(r) })),
+  );
   /** Whether the whole file is valid, the only case in which it may be imported. */
   protected readonly importable = computed(() => {
     const p = this.preview();
@@ -69,13 +91,30 @@ export class MaterialImport {
     this.file.set(file);
     this.preview.set(null);
     this.notice.set('');
+    this.noticeDetails.set([]);
     if (file) this.check(file);
   }
 
-  protected errorList(row: MaterialImportRow): { field: string; message: string }[] {
-    return Object.entries(row.errors).flatMap(([field, messages]) =>
-      messages.map((message) => ({ field, message })),
+  /** How many messages a row carries. */
+  protected problemCount(row: MaterialImportRow): number {
+    return Object.values(row.errors).reduce((n, messages) => n + messages.length, 0);
+  }
+
+  /** A category cell as the screen names it; a value that is no category stays as written. */
+  protected categoryLabel(cell: string): string {
+    return (CATEGORY_LABELS as Readonly<Record<string, string>>)[cell] ?? cell;
+  }
+
+  private problemsOf(row: MaterialImportRow) {
+    return Object.entries(row.errors).flatMap(([key, messages]) =>
+      messages.map((message) => ({ where: columnLabel(key), message })),
     );
+  }
+
+  private refused(err: unknown): void {
+    this.busy.set(null);
+    this.notice.set(messageOf(err));
+    this.noticeDetails.set(err instanceof ApiError ? (err.fieldErrors['file'] ?? []) : []);
   }
 
   protected runImport(): void {
@@ -83,15 +122,13 @@ export class MaterialImport {
     if (!file || !this.importable()) return;
     this.busy.set('importing');
     this.notice.set('');
-    this.api.import(file).subscribe({
+    this.noticeDetails.set([]);
+    this.api.import(file, this.updateExisting() ? 'update' : 'create').subscribe({
       next: (result) => {
         this.busy.set(null);
         this.imported.emit(result);
       },
-      error: (err: unknown) => {
-        this.busy.set(null);
-        this.notice.set(messageOf(err));
-      },
+      error: (err: unknown) => this.refused(err),
     });
   }
 
@@ -102,10 +139,7 @@ export class MaterialImport {
         this.busy.set(null);
         this.preview.set(preview);
       },
-      error: (err: unknown) => {
-        this.busy.set(null);
-        this.notice.set(messageOf(err));
-      },
+      error: (err: unknown) => this.refused(err),
     });
   }
 }
