@@ -87,6 +87,27 @@ export async function clippedTextElements(page: Page): Promise<string[]> {
       }
     }
 
+    // A word in a table cell broken across lines (an e-mail address in fragments): a table
+    // should widen its column and scroll in its own box instead.
+    for (const cell of Array.from(document.querySelectorAll('td, th'))) {
+      if (!visible(cell)) continue;
+      const walker = document.createTreeWalker(cell, NodeFilter.SHOW_TEXT);
+      for (let node = walker.nextNode(); node; node = walker.nextNode()) {
+        const text = node.textContent ?? '';
+        for (const match of text.matchAll(/[\p{L}\p{N}@._]{4,}/gu)) {
+          const range = document.createRange();
+          range.setStart(node, match.index);
+          range.setEnd(node, match.index + match[0].length);
+          const tops = new Set(
+            Array.from(range.getClientRects())
+              .filter((r) => r.width > 0)
+              .map((r) => Math.round(r.top)),
+          );
+          if (tops.size > 1) out.push(`word broken mid-word "${match[0]}" in ${describe(cell)}`);
+        }
+      }
+    }
+
     // A hint or error under a form field lives in a fixed-height strip; text that needs more
     // room than the strip spills over the next field or past the field's edge.
     for (const strip of Array.from(

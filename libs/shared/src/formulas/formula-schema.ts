@@ -22,6 +22,9 @@ export type VersionState = z.infer<typeof versionStateSchema>;
 /** Sum of percent lines must hit 100 within this tolerance. */
 export const PERCENT_TOLERANCE = 0.01;
 
+/** Heaviest unit or net quantity a profile names: far beyond any bath product (1 tonne). */
+export const MAX_UNIT_GRAMS = 1e6;
+
 /** How the product is used: decides which rules the engine applies. */
 export const productProfileSchema = z.object({
   use: z.enum(['rinse-off', 'leave-on'], { error: 'Choose rinse-off or leave-on' }),
@@ -47,13 +50,15 @@ export const productProfileSchema = z.object({
   unitMassGrams: z
     .number({ error: 'Enter the unit mass in grams' })
     .gt(0, { error: 'The unit mass must be more than 0 g' })
+    .max(MAX_UNIT_GRAMS, { error: 'The unit mass is too large (1,000,000 g at most)' })
     .nullish()
     .transform((v) => v ?? null),
   netQuantity: z
     .object({
-      amount: z.number({ error: 'Enter the net quantity' }).gt(0, {
-        error: 'The net quantity must be more than 0',
-      }),
+      amount: z
+        .number({ error: 'Enter the net quantity' })
+        .gt(0, { error: 'The net quantity must be more than 0' })
+        .max(MAX_UNIT_GRAMS, { error: 'The net quantity is too large (1,000,000 at most)' }),
       unit: z.enum(['g', 'mL'], { error: 'Net quantity is in g or mL' }),
     })
     .nullish()

@@ -1,10 +1,11 @@
 import { TestbedHarnessEnvironment } from '@angular/cdk/testing/testbed';
 import type { HttpRequest } from '@angular/common/http';
 import type { HttpTestingController, TestRequest } from '@angular/common/http/testing';
+import { MatInputHarness } from '@angular/material/input/testing';
 import type { Type } from '@angular/core';
 import type { Routes } from '@angular/router';
 import { RouterTestingHarness } from '@angular/router/testing';
-import { vi } from 'vitest';
+import { expect, vi } from 'vitest';
 import type {
   Formula,
   FormulaVersion,
@@ -190,3 +191,52 @@ export async function nextRequest(
     { timeout },
   );
 }
+
+/** A page opened by {@link openAs}. */
+export type OpenedPage = Awaited<ReturnType<typeof openAs>>;
+
+/** Answers the one read of the lines' materials, which names every one of them. */
+export async function flushMaterials(page: OpenedPage, materials: Material[]) {
+  const read = await nextRequest(
+    page.backend,
+    (r) => r.method === 'GET' && r.url === '/api/materials',
+  );
+  expect(read.request.params.get('ids')!.split(',').sort()).toEqual(
+    materials.map((m) => m.id).sort(),
+  );
+  read.flush({ items: materials });
+}
+
+/**
+ * Opens `url` (version 1 of the test formula) on `routes` and answers its reads: the formula,
+ * the version, then its lines' materials.
+ */
+export async function openVersionOn(
+  routes: Routes,
+  page: Type<unknown>,
+  url: string,
+  role: Role,
+  version: FormulaVersion,
+  materials: Material[],
+): Promise<OpenedPage> {
+  const opened = await openAs(role, routes, url, page);
+  opened.backend.expectOne(`/api/formulas/${FORMULA_ID}`).flush(aFormula([version]));
+  opened.backend.expectOne(`/api/formulas/${FORMULA_ID}/versions/1`).flush(version);
+  await flushMaterials(opened, materials);
+  await opened.harness.fixture.whenStable();
+  return opened;
+}
+
+/** The input inside the form field labelled `label`. */
+export async function fieldInput(page: OpenedPage, label: string) {
+  const el = Array.from(page.el.querySelectorAll('mat-form-field')).find(
+    (f) => f.querySelector('mat-label')?.textContent?.trim() === label,
+  );
+  if (!el) throw new Error(`No field labelled ${label}`);
+  const id = el.querySelector('input')!.id;
+  return page.loader.getHarness(MatInputHarness.with({ selector: `#${id}` }));
+}
+
+/** The text of the first element matching `selector`, with its white space squashed. */
+export const textOf = (page: OpenedPage, selector: string) =>
+  (page.el.querySelector(selector)?.textContent ?? '').replace(/\s+/g, ' ').trim();

@@ -1,6 +1,7 @@
 import type { Routes } from '@angular/router';
 import { ROLE_SETS } from '@batchproof/shared';
 import { roleGuard } from '../auth/role-guard';
+import { unsavedChangesGuard } from '../forms/unsaved-changes';
 
 /**
  * The formulas area: the list, a formula's versions in the editor, and comparisons. Members
@@ -25,11 +26,13 @@ const formulasRoutes: Routes = [
       {
         path: ':id/versions/:n',
         title: 'Formula · Batchproof',
+        canDeactivate: [unsavedChangesGuard],
         loadComponent: () => import('./formula-editor/formula-page'),
       },
       {
         path: ':id',
         title: 'Formula · Batchproof',
+        canDeactivate: [unsavedChangesGuard],
         loadComponent: () => import('./formula-editor/formula-page'),
       },
     ],

@@ -1,6 +1,7 @@
 import type { Routes } from '@angular/router';
 import { ROLE_SETS } from '@batchproof/shared';
 import { roleGuard } from '../auth/role-guard';
+import { unsavedChangesGuard } from '../forms/unsaved-changes';
 
 /** The suppliers area: the list, a new supplier, and one supplier. */
 const suppliersRoutes: Routes = [
@@ -14,12 +15,14 @@ const suppliersRoutes: Routes = [
     path: 'new',
     title: 'New supplier · Batchproof',
     canActivate: [roleGuard(ROLE_SETS.writers)],
+    canDeactivate: [unsavedChangesGuard],
     loadComponent: () => import('./supplier-page/supplier-page'),
   },
   {
     path: ':id',
     title: 'Supplier · Batchproof',
     canActivate: [roleGuard(ROLE_SETS.members)],
+    canDeactivate: [unsavedChangesGuard],
     loadComponent: () => import('./supplier-page/supplier-page'),
   },
 ];

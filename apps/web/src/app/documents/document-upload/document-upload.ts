@@ -22,10 +22,14 @@ import {
   type DocumentKind,
   documentSchema,
   documentUploadSchema,
-  fieldErrorsFromZod,
   type SupplierDocument,
 } from '@batchproof/shared';
-import { errorMessage, showFieldErrors, showRequestError } from '../../forms/form-errors';
+import {
+  checkForm,
+  errorMessage,
+  showFieldErrors,
+  showRequestError,
+} from '../../forms/form-errors';
 import { ApiError } from '../../http/api-error';
 import { SubmissionKey } from '../../http/submission-key';
 import { DOCUMENT_KIND_OPTIONS, fileSize } from '../document-kinds';
@@ -105,7 +109,7 @@ export class DocumentUpload {
     this.form.controls.file.setValue(file);
     this.form.controls.file.markAsTouched();
     if (file && file.size > DOCUMENT_MAX_BYTES) {
-      this.form.controls.file.setErrors({ schema: REFUSALS[413] });
+      showFieldErrors(this.form, { file: [REFUSALS[413]!] });
     }
     // Offer the file's name as the title when none is typed yet.
     if (file && !this.form.controls.title.value) {
@@ -117,22 +121,25 @@ export class DocumentUpload {
     if (this.uploading()) return;
     this.notice.set('');
     const raw = this.form.getRawValue();
-    const parsed = documentUploadSchema.safeParse({
-      kind: raw.kind,
-      title: raw.title,
-      issuedOn: raw.issuedOn,
-      version: raw.version,
-      materialId: this.materialId(),
-      lotId: this.lotId(),
+    const fileError = !raw.file
+      ? 'Choose a PDF, PNG or JPEG file to upload'
+      : raw.file.size > DOCUMENT_MAX_BYTES
+        ? REFUSALS[413]!
+        : null;
+    const { value, notice } = checkForm(this.form, {
+      schema: documentUploadSchema,
+      body: {
+        kind: raw.kind,
+        title: raw.title,
+        issuedOn: raw.issuedOn,
+        version: raw.version,
+        materialId: this.materialId(),
+        lotId: this.lotId(),
+      },
+      extra: fileError ? { file: [fileError] } : {},
     });
-    const errors = parsed.success ? {} : fieldErrorsFromZod(parsed.error);
-    if (!raw.file) errors['file'] = ['Choose a PDF, PNG or JPEG file to upload'];
-    else if (raw.file.size > DOCUMENT_MAX_BYTES) errors['file'] = [REFUSALS[413]!];
-    if (!parsed.success || errors['file']) {
-      this.notice.set(showFieldErrors(this.form, errors).join(' '));
-      return;
-    }
-    this.send(parsed.data, raw.file!);
+    this.notice.set(notice);
+    if (value) this.send(value, raw.file!);
   }
 
   private send(fields: Parameters<DocumentsApi['upload']>[0], file: File): void {

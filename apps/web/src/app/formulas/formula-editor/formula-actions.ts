@@ -1,5 +1,5 @@
 import type { HttpResourceRef } from '@angular/common/http';
-import { inject, type Signal, signal } from '@angular/core';
+import { computed, inject, type Signal, signal } from '@angular/core';
 import { MatDialog } from '@angular/material/dialog';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router } from '@angular/router';
@@ -11,9 +11,9 @@ import {
   type FormulaVersion,
   formulaVersionInputSchema,
 } from '@batchproof/shared';
+import { checkForm, showRequestError } from '../../forms/form-errors';
 import { ApiError, messageOf } from '../../http/api-error';
 import { SubmissionKey } from '../../http/submission-key';
-import { showContractRequestError, validateContract } from '../form-paths';
 import { FormulasApi } from '../formulas-api';
 import { editorPath, type FormulaForm, toVersionInput } from './formula-form';
 import { ReleaseDialog, type ReleaseOverrideData } from './release-dialog';
@@ -23,17 +23,25 @@ export interface FormulaActionsSource {
   formulaId: Signal<string>;
   form: Signal<FormulaForm | undefined>;
   formula: HttpResourceRef<Formula | undefined>;
+  /** The version on screen: its value is always the server's latest answer about it. */
   version: HttpResourceRef<FormulaVersion | undefined>;
   isOwner: Signal<boolean>;
 }
 
-/** Why the server refused a release, and whether the owner may override it. */
+/** Why the server refuses to release the version, and whether the owner may override it. */
 export interface Refusal {
   message: string;
-  /** Whether it was refused for blocking findings (rather than, say, an unchecked draft). */
+  /** Whether it is refused for blocking findings (rather than, say, an unchecked draft). */
   blocked: boolean;
-  /** The blocking findings of the server's fresh check, as the refusal carried them. */
+  /** The blocking findings of the server's latest check. */
   findings: ComplianceFinding[];
+}
+
+/** A 409 to a release, with the version answer that was on screen when it came. */
+interface RefusalAnswer extends Refusal {
+  number: number;
+  /** The version answer the refusal is newer than; any later answer supersedes the refusal. */
+  after: FormulaVersion;
 }
 
 const SNACK = { duration: 5000 };
@@ -41,6 +49,33 @@ const SNACK = { duration: 5000 };
 /** A resource's value, or undefined while it has none (reading an errored resource throws). */
 const valueOf = <T>(ref: HttpResourceRef<T | undefined>) =>
   ref.hasValue() ? ref.value() : undefined;
+
+/**
+ * Whether the server's stored check of a draft refuses its release, in its own words: a version
+ * that could not be checked, or one with blocking findings. Null when a release would go ahead.
+ */
+export function refusalOf(version: FormulaVersion): Refusal | null {
+  if (version.state !== 'draft') return null;
+  if (!version.evaluation && version.evaluationProblems.length > 0) {
+    const problems = version.evaluationProblems.join('; ');
+    return {
+      message: `Version ${version.number} cannot be checked yet: ${problems}`,
+      blocked: false,
+      findings: [],
+    };
+  }
+  const findings = version.evaluation?.findings.filter((f) => f.severity === 'block') ?? [];
+  const count = version.counts?.block ?? findings.length;
+  if (count === 0) return null;
+  const list = findings.map((f) => `${f.market ?? 'all markets'}: ${f.subject}`).join('; ');
+  return {
+    message:
+      `The server's latest check of version ${version.number} found ${count} blocking ` +
+      `finding(s)${list ? ` (${list})` : ''}.`,
+    blocked: true,
+    findings,
+  };
+}
 
 /**
  * What the editor's buttons do: save the draft (the server re-evaluates it), release it (the
@@ -57,8 +92,22 @@ export class FormulaActions {
   readonly busy = signal<string | null>(null);
   /** A message for above the form (what no field shows). */
   readonly notice = signal('');
-  /** The last release refusal, until the next attempt. */
-  readonly refusal = signal<Refusal | null>(null);
+  /** The last 409 to a release of the version on screen. */
+  private readonly refused = signal<RefusalAnswer | null>(null);
+  /**
+   * The refusal banner, derived from the newest server answer about the version: the 409 itself
+   * until the version is read or saved again, then that answer's own check. A save that clears
+   * the blocks clears the banner with them; one that leaves some updates their count.
+   */
+  readonly refusal = computed<Refusal | null>(() => {
+    const refused = this.refused();
+    const version = valueOf(this.source.version);
+    if (!refused || !version || version.number !== refused.number) return null;
+    if (version === refused.after) return refused;
+    const now = refusalOf(version);
+    // An answer that counts blocks without listing them leaves the refusal's list as the latest.
+    return now?.blocked && now.findings.length === 0 ? { ...now, findings: refused.findings } : now;
+  });
   /** The Idempotency-Key of a new-draft request, kept while it is retried. */
   private readonly draftSubmission = new SubmissionKey();
 
@@ -67,52 +116,57 @@ export class FormulaActions {
   /**
    * Saves the draft: checks it with the shared schemas first, renames the formula if its name or
    * type changed, then replaces the version. On a 400 the messages go beside their fields and
-   * everything typed stays as it is.
+   * everything typed stays as it is. Resolves whether it was saved.
    */
-  save(then?: () => void): void {
+  save(): Promise<boolean> {
     const form = this.source.form();
     const formula = valueOf(this.source.formula);
     const version = valueOf(this.source.version);
-    if (!form || !formula || !version || this.busy()) return;
+    if (!form || !formula || !version || this.busy()) return Promise.resolve(false);
     this.notice.set('');
     const raw = form.getRawValue();
-    const meta = validateContract(
-      form,
-      formulaUpdateSchema,
-      { name: raw.name, productType: raw.productType, notes: formula.notes },
-      (p) => p,
-    );
-    const body = validateContract(form, formulaVersionInputSchema, toVersionInput(raw), editorPath);
+    const meta = checkForm(form, {
+      schema: formulaUpdateSchema,
+      body: { name: raw.name, productType: raw.productType, notes: formula.notes },
+    });
+    const body = checkForm(form, {
+      schema: formulaVersionInputSchema,
+      body: toVersionInput(raw),
+      mapPath: editorPath,
+    });
     if (!meta.value || !body.value) {
       this.notice.set(
         [meta.notice, body.notice].filter(Boolean).join(' ') ||
           'Some fields need attention before the draft can be saved.',
       );
-      return;
+      return Promise.resolve(false);
     }
     const renamed = raw.name !== formula.name || raw.productType !== formula.productType;
     const id = formula.id;
     const rename: Observable<unknown> = renamed ? this.api.update(id, meta.value) : of(null);
     this.busy.set('Saving the draft');
-    rename.pipe(switchMap(() => this.api.saveDraft(id, version.number, body.value!))).subscribe({
-      next: (saved) => {
-        this.busy.set(null);
-        this.source.version.set(saved);
-        form.markAsPristine();
-        if (renamed) this.source.formula.reload();
-        const blocks = saved.counts?.block ?? 0;
-        this.snackBar.open(
-          `Draft version ${saved.number} saved.` +
-            (blocks > 0 ? ` The server's check found ${blocks} blocking finding(s).` : ''),
-          'OK',
-          SNACK,
-        );
-        then?.();
-      },
-      error: (err: unknown) => {
-        this.busy.set(null);
-        this.notice.set(showContractRequestError(form, err, editorPath));
-      },
+    return new Promise((resolve) => {
+      rename.pipe(switchMap(() => this.api.saveDraft(id, version.number, body.value!))).subscribe({
+        next: (saved) => {
+          this.busy.set(null);
+          this.source.version.set(saved);
+          form.markAsPristine();
+          if (renamed) this.source.formula.reload();
+          const blocks = saved.counts?.block ?? 0;
+          this.snackBar.open(
+            `Draft version ${saved.number} saved.` +
+              (blocks > 0 ? ` The server's check found ${blocks} blocking finding(s).` : ''),
+            'OK',
+            SNACK,
+          );
+          resolve(true);
+        },
+        error: (err: unknown) => {
+          this.busy.set(null);
+          this.notice.set(showRequestError(form, err, editorPath));
+          resolve(false);
+        },
+      });
     });
   }
 
@@ -120,9 +174,14 @@ export class FormulaActions {
   release(): void {
     const form = this.source.form();
     if (!form || this.busy()) return;
-    this.refusal.set(null);
-    if (form.dirty) this.save(() => this.sendRelease());
-    else this.sendRelease();
+    this.refused.set(null);
+    if (form.dirty) {
+      void this.save().then((saved) => {
+        if (saved) this.sendRelease();
+      });
+    } else {
+      this.sendRelease();
+    }
   }
 
   /** The owner's release over blocking findings, with a reason asked for in a dialog. */
@@ -178,7 +237,7 @@ export class FormulaActions {
     this.api.release(id, version.number, request).subscribe({
       next: (released) => {
         this.busy.set(null);
-        this.refusal.set(null);
+        this.refused.set(null);
         this.source.version.set(released);
         this.source.formula.reload();
         this.snackBar.open(
@@ -191,9 +250,14 @@ export class FormulaActions {
       error: (err: unknown) => {
         this.busy.set(null);
         if (err instanceof ApiError && err.status === 409) {
-          const blocked = err.code === 'release_blocked';
-          this.refusal.set({ message: err.message, blocked, findings: err.findings });
-          // The server stored its fresh check even though it refused: show that one.
+          this.refused.set({
+            number: version.number,
+            after: version,
+            message: err.message,
+            blocked: err.code === 'release_blocked',
+            findings: err.findings,
+          });
+          // The server stored its fresh check even though it refused: that answer comes next.
           this.source.version.reload();
         } else {
           this.snackBar.open(messageOf(err), 'OK', { duration: 8000 });

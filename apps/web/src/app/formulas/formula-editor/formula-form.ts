@@ -1,16 +1,19 @@
 import type { FormArray, FormControl, FormGroup, NonNullableFormBuilder } from '@angular/forms';
-import type {
-  ComplianceMarket,
-  Formula,
-  FormulaVersion,
-  FormulaVersionInput,
-  ProductType,
+import {
+  type ComplianceMarket,
+  type Formula,
+  formulaUpdateSchema,
+  type FormulaVersion,
+  type FormulaVersionInput,
+  formulaVersionInputSchema,
+  type ProductType,
 } from '@batchproof/shared';
+import { contractErrors, type FieldErrors } from '../../forms/form-errors';
 
 /** How the maker enters amounts: grams per line, or percent per line with a batch total. */
 export type EntryMode = 'grams' | 'percent';
 
-/** One editable line. `materialName` is also the picker's search text. */
+/** One editable line: the material picker holds `materialId`; `materialName` is what it shows. */
 export type LineGroup = FormGroup<{
   materialId: FormControl<string>;
   materialName: FormControl<string>;
@@ -125,13 +128,23 @@ export function toVersionInput(v: FormulaFormValue): FormulaVersionInput {
 }
 
 /**
+ * The contract's messages for everything typed: the formula's name and type (renamed on save) and
+ * the version body, keyed by contract path (`editorPath` places them). Save and the check while
+ * typing both judge the draft with it.
+ */
+export function draftErrors(v: FormulaFormValue): FieldErrors {
+  return {
+    ...contractErrors(formulaUpdateSchema, { name: v.name, productType: v.productType }),
+    ...contractErrors(formulaVersionInputSchema, toVersionInput(v)),
+  };
+}
+
+/**
  * Where a contract path shows in the editor: percent lines and the batch total sit at the top
- * level, and a line's material is named in its picker.
+ * level (a line's `materialId` is its picker's own control).
  */
 export function editorPath(path: string): string {
-  return path
-    .replace(/^byPercent\./, '')
-    .replace(/^lines\.(\d+)\.materialId$/, 'lines.$1.materialName');
+  return path.replace(/^byPercent\./, '');
 }
 
 /**

@@ -6,7 +6,13 @@ import { MatInputHarness } from '@angular/material/input/testing';
 import { MatSelectHarness } from '@angular/material/select/testing';
 import type { HttpRequest } from '@angular/common/http';
 import { TestBed } from '@angular/core/testing';
-import type { ComplianceFinding, ErrorEnvelope, Material, Role } from '@batchproof/shared';
+import type {
+  ComplianceFinding,
+  ErrorEnvelope,
+  FormulaVersion,
+  Material,
+  Role,
+} from '@batchproof/shared';
 import { MaterialsApi } from '../../materials/materials-api';
 import {
   aFormula,
@@ -15,10 +21,15 @@ import {
   BICARB,
   BLUE_BLEND,
   CITRIC,
+  fieldInput,
+  flushMaterials,
   FORMULA_ID,
   nextRequest,
   openAs,
+  type OpenedPage,
+  openVersionOn,
   summaryOf,
+  textOf,
 } from '../formulas-testing';
 import FormulaPage from './formula-page';
 
@@ -29,35 +40,17 @@ const DRAFT = aVersion([
   { material: CITRIC, grams: 100 },
 ]);
 
-type Page = Awaited<ReturnType<typeof openAs>>;
+type Page = OpenedPage;
 
 /** Opens version 1 and answers its reads: formula, version, then its lines' materials. */
-async function openDraft(role: Role = 'formulator', version = DRAFT): Promise<Page> {
-  const page = await openAs(role, ROUTES, URL, FormulaPage);
-  page.backend.expectOne(`/api/formulas/${FORMULA_ID}`).flush(aFormula([version]));
-  page.backend.expectOne(`/api/formulas/${FORMULA_ID}/versions/1`).flush(version);
-  await flushMaterials(page, [BICARB, CITRIC]);
-  await page.harness.fixture.whenStable();
-  return page;
-}
-
-/** Answers the one read of the lines' materials, which names every one of them. */
-async function flushMaterials(page: Page, materials: Material[]) {
-  const read = await nextRequest(
-    page.backend,
-    (r) => r.method === 'GET' && r.url === '/api/materials',
-  );
-  expect(read.request.params.get('ids')!.split(',').sort()).toEqual(
-    materials.map((m) => m.id).sort(),
-  );
-  read.flush({ items: materials });
-}
+const openDraft = (role: Role = 'formulator', version = DRAFT) =>
+  openVersionOn(ROUTES, FormulaPage, URL, role, version, [BICARB, CITRIC]);
 
 const isMaterialsRead = (r: HttpRequest<unknown>) =>
   r.method === 'GET' && r.url === '/api/materials' && r.params.has('ids');
 
 const squash = (t: string | null | undefined) => (t ?? '').replace(/\s+/g, ' ').trim();
-const text = (page: Page, selector: string) => squash(page.el.querySelector(selector)?.textContent);
+const text = textOf;
 
 /** A blocking finding as the server's release refusal carries it. */
 const ULTRAMARINE_BLOCK: ComplianceFinding = {
@@ -71,21 +64,28 @@ const ULTRAMARINE_BLOCK: ComplianceFinding = {
   lines: [2],
 };
 
+/** The draft as the server stores it after the check that blocked its release. */
+const BLOCKED_CHECK = { ...DRAFT, counts: { block: 1, warn: 0, info: 0 } };
+
 /** After a refusal the page reads the version again: the server stored its fresh check. */
-async function flushStoredCheck(page: Page, version = DRAFT) {
+async function flushStoredCheck(page: Page, stored: FormulaVersion) {
   (
     await nextRequest(page.backend, (r) => r.url === `/api/formulas/${FORMULA_ID}/versions/1`)
-  ).flush({ ...version, counts: { block: 1, warn: 0, info: 0 } });
+  ).flush(stored);
   await page.harness.fixture.whenStable();
 }
 
 /** Clicks Release and answers with a 409 carrying `error`, then answers the version's re-read. */
-async function refuseRelease(page: Page, error: ErrorEnvelope['error']) {
+async function refuseRelease(
+  page: Page,
+  error: ErrorEnvelope['error'],
+  stored: FormulaVersion = BLOCKED_CHECK,
+) {
   const clicked = (await releaseButton(page)).click();
   const refused = await nextRequest(page.backend, (r) => r.url.endsWith('/versions/1/release'));
   refused.flush({ error }, { status: 409, statusText: 'Conflict' });
   await clicked;
-  await flushStoredCheck(page);
+  await flushStoredCheck(page, stored);
   return refused;
 }
 
@@ -96,15 +96,7 @@ function releaseButton(page: Page) {
   return page.loader.getHarness(MatButtonHarness.with({ text: /^\S*\s*Release$/ }));
 }
 
-/** The input inside the form field labelled `label`. */
-async function field(page: Page, label: string) {
-  const el = Array.from(page.el.querySelectorAll('mat-form-field')).find(
-    (f) => f.querySelector('mat-label')?.textContent?.trim() === label,
-  );
-  if (!el) throw new Error(`No field labelled ${label}`);
-  const id = el.querySelector('input')!.id;
-  return page.loader.getHarness(MatInputHarness.with({ selector: `#${id}` }));
-}
+const field = fieldInput;
 
 describe('FormulaPage', () => {
   beforeEach(() => localStorage.clear());
@@ -361,10 +353,14 @@ describe('FormulaPage', () => {
 
   it('reads a refusal from its error code: a 409 conflict naming blocking findings offers no override', async () => {
     const page = await openDraft('owner', { ...DRAFT, counts: { block: 1, warn: 0, info: 0 } });
-    await refuseRelease(page, {
-      code: 'conflict',
-      message: 'Version 1 cannot be checked yet: no blocking finding could be computed',
-    });
+    await refuseRelease(
+      page,
+      {
+        code: 'conflict',
+        message: 'Version 1 cannot be checked yet: Line 1 weighs 0 g',
+      },
+      { ...DRAFT, evaluation: null, counts: null, evaluationProblems: ['Line 1 weighs 0 g'] },
+    );
 
     expect(text(page, '.refusal')).toContain('cannot be checked yet');
     expect(await overrideButtons(page)).toHaveLength(0);

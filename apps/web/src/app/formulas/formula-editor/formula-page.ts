@@ -18,15 +18,16 @@ import { RouterLink } from '@angular/router';
 import { map, of, startWith, switchMap } from 'rxjs';
 import { type Material, ROLE_SETS } from '@batchproof/shared';
 import { Session } from '../../auth/session';
-import { errorMessage } from '../../forms/form-errors';
+import { checkWhileTyping, errorMessage, filledInErrors } from '../../forms/form-errors';
+import { type LeavesSafely, warnBeforeUnload } from '../../forms/unsaved-changes';
 import { messageOf } from '../../http/api-error';
 import { FormulasApi } from '../formulas-api';
 import { LiveChecks } from '../live-checks/live-checks';
-import { evaluateDraft, today } from '../live-checks/live-evaluation';
+import { evaluateDraft, type LiveEvaluation, today } from '../live-checks/live-evaluation';
 import { ScalePanel } from '../scaling/scale-panel';
 import { SEVERITIES, SeverityLabel } from '../severity/severity-label';
 import { FormulaActions } from './formula-actions';
-import { createFormulaForm } from './formula-form';
+import { createFormulaForm, draftErrors, editorPath } from './formula-form';
 import { FormulaLines } from './formula-lines';
 import { ProfileFields } from './profile-fields';
 import { VersionHistory } from './version-history';
@@ -34,10 +35,22 @@ import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
 
 const sameIds = (a: readonly string[], b: readonly string[]) => a.join() === b.join();
 
+/** The live check while a typed value is refused: nothing is computed with it. */
+const HELD_BACK: LiveEvaluation = {
+  result: null,
+  problems: ['A value in the form is refused (see the message beside it); put it right to check.'],
+  pending: false,
+  fizz: null,
+  composition: [],
+  totalGrams: 0,
+};
+
 /**
  * A formula version in the editor: the version on the left (profile, lines, notes), its live
  * consequences on the right, computed in the browser by the shared engine as you type. Drafts are
- * saved and released here; released versions are read-only and start new drafts.
+ * saved and released here; released versions are read-only and start new drafts. What the
+ * server says about the version (its state, its check, a refused release) is read from one
+ * answer, the version resource's latest value, by every part of the page.
  */
 @Component({
   selector: 'bp-formula-page',
@@ -64,7 +77,7 @@ const sameIds = (a: readonly string[], b: readonly string[]) => a.join() === b.j
   host: { '(keydown.control.s)': 'saveShortcut($event)' },
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export default class FormulaPage {
+export default class FormulaPage implements LeavesSafely {
   /** The formula's id, from the path. */
   readonly id = input.required<string>();
   /** The version number from the path; the latest version when absent. */
@@ -149,10 +162,17 @@ export default class FormulaPage {
     const error = this.materials.error();
     return error ? `Some materials could not be loaded: ${messageOf(error)}` : '';
   });
-  /** The live check of what is typed now. */
-  protected readonly live = computed(() => {
+  /** The contract's messages for the fields that hold something (shown beside them as typed). */
+  private readonly refusedFields = computed(() => {
+    const s = this.state();
+    const f = this.form();
+    return s && f ? filledInErrors(f, draftErrors(s.value), editorPath) : {};
+  });
+  /** The live check of what is typed now; held back while a typed value is refused. */
+  protected readonly live = computed((): LiveEvaluation | undefined => {
     const s = this.state();
     if (!s) return undefined;
+    if (Object.keys(this.refusedFields()).length > 0) return HELD_BACK;
     const live = evaluateDraft(s.value, this.materialMap(), this.asOf);
     return this.materials.isLoading() ? { ...live, pending: true } : live;
   });
@@ -172,10 +192,28 @@ export default class FormulaPage {
       if (this.readOnly()) f.disable();
       else f.enable();
     });
+    // The contract judges every value as it is typed, so its reason shows beside the field.
+    effect((onCleanup) => {
+      const f = this.form();
+      if (!f) return;
+      const typing = checkWhileTyping(f, () => draftErrors(f.getRawValue()), editorPath);
+      onCleanup(() => typing.unsubscribe());
+    });
+    warnBeforeUnload(() => this.hasUnsavedChanges());
+  }
+
+  /** Whether the draft on screen holds changes not saved yet. */
+  hasUnsavedChanges(): boolean {
+    return !this.readOnly() && !!this.form()?.dirty;
+  }
+
+  /** Saves the draft on the way out of the editor. */
+  saveChanges(): Promise<boolean> {
+    return this.actions.save();
   }
 
   protected saveShortcut(event: Event): void {
     event.preventDefault();
-    if (!this.readOnly()) this.actions.save();
+    if (!this.readOnly()) void this.actions.save();
   }
 }

@@ -13,8 +13,7 @@ import { MatError, MatFormField, MatHint, MatLabel } from '@angular/material/for
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { type ComplianceFinding, releaseSchema } from '@batchproof/shared';
-import { errorMessage } from '../../forms/form-errors';
-import { validateContract } from '../form-paths';
+import { checkForm, errorMessage } from '../../forms/form-errors';
 import { InterpretationNote } from '../live-checks/interpretation-note';
 import { SeverityLabel } from '../severity/severity-label';
 
@@ -131,7 +130,7 @@ export class ReleaseDialog {
 
   protected submit(): void {
     const body = { override: { reason: this.form.controls.reason.value } };
-    const { value, notice } = validateContract(this.form, releaseSchema, body, mapPath);
+    const { value, notice } = checkForm(this.form, { schema: releaseSchema, body, mapPath });
     this.notice.set(notice);
     if (value?.override) this.ref.close(value.override.reason);
   }

@@ -5,13 +5,14 @@ import { MatFormField, MatLabel } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { RouterLink } from '@angular/router';
-import type { Formula } from '@batchproof/shared';
+import type { Formula, FormulaVersion } from '@batchproof/shared';
 import { SEVERITIES, SeverityLabel } from '../severity/severity-label';
 import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
 
 /**
  * A formula's versions, newest first, with their state and the server's finding counts; and a
- * chooser to compare any two of them.
+ * chooser to compare any two of them. The version on screen is listed from the page's latest
+ * answer about it, so a save shows its new counts here at once.
  */
 @Component({
   selector: 'bp-version-history',
@@ -148,12 +149,27 @@ export class VersionHistory {
   readonly formula = input.required<Formula>();
   /** The version on screen. */
   readonly current = input.required<number>();
+  /** The server's latest answer about a version (a read, a save, a release), newer than the history. */
+  readonly latest = input<FormulaVersion>();
 
   protected readonly severities = SEVERITIES;
   protected readonly icons = { draft: 'edit_note', released: 'verified', superseded: 'history' };
-  protected readonly versions = computed(() =>
-    [...this.formula().versions].sort((a, b) => b.number - a.number),
-  );
+  protected readonly versions = computed(() => {
+    const latest = this.latest();
+    return this.formula()
+      .versions.map((v) =>
+        v.number === latest?.number
+          ? {
+              number: v.number,
+              state: latest.state,
+              counts: latest.counts,
+              releasedAt: latest.releasedAt,
+              updatedAt: latest.updatedAt,
+            }
+          : v,
+      )
+      .sort((a, b) => b.number - a.number);
+  });
   /** Compare the version before the one on screen with it, unless the maker picks others. */
   protected readonly from = linkedSignal(() => {
     const older = this.versions().find((v) => v.number < this.current());

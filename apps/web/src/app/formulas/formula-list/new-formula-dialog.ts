@@ -21,9 +21,8 @@ import {
   PRODUCT_TYPES,
   type ProductType,
 } from '@batchproof/shared';
-import { errorMessage } from '../../forms/form-errors';
+import { checkForm, errorMessage, showRequestError } from '../../forms/form-errors';
 import { SubmissionKey } from '../../http/submission-key';
-import { showContractRequestError, validateContract } from '../form-paths';
 import { FormulasApi } from '../formulas-api';
 import { MARKETS, PRODUCT_TYPE_LABELS, startingProfile } from '../product-types';
 
@@ -153,7 +152,11 @@ export class NewFormulaDialog {
       notes: null,
       draft: { lines: [], profile: startingProfile(productType, markets), notes: null },
     };
-    const { value, notice } = validateContract(this.form, formulaCreateSchema, body, mapPath);
+    const { value, notice } = checkForm(this.form, {
+      schema: formulaCreateSchema,
+      body,
+      mapPath,
+    });
     this.notice.set(notice);
     if (!value) return;
     this.saving.set(true);
@@ -164,7 +167,7 @@ export class NewFormulaDialog {
       },
       error: (err: unknown) => {
         this.saving.set(false);
-        this.notice.set(showContractRequestError(this.form, err, mapPath));
+        this.notice.set(showRequestError(this.form, err, mapPath));
       },
     });
   }

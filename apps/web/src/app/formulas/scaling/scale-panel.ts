@@ -1,5 +1,12 @@
 import { DecimalPipe } from '@angular/common';
-import { ChangeDetectionStrategy, Component, inject, input, signal } from '@angular/core';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  DestroyRef,
+  inject,
+  input,
+  signal,
+} from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import { MatButtonToggle, MatButtonToggleGroup } from '@angular/material/button-toggle';
@@ -8,14 +15,21 @@ import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { type ScaledVersion, scaleRequestSchema } from '@batchproof/shared';
-import { errorMessage } from '../../forms/form-errors';
-import { showContractRequestError, validateContract } from '../form-paths';
+import {
+  checkForm,
+  checkWhileTyping,
+  contractErrors,
+  errorMessage,
+  filledInErrors,
+  showRequestError,
+} from '../../forms/form-errors';
 import { FormulasApi } from '../formulas-api';
 
 /**
  * Scales the saved version to a batch: a number of units × the unit mass, or a total mass, plus a
  * loss allowance for what sticks to bowls and moulds. Anyone who can read the formula may use it,
- * production included; it changes nothing.
+ * production included; it changes nothing. Sizes the contract refuses are refused beside their
+ * field as they are typed, and a refused input takes the previous result away with it.
  */
 @Component({
   selector: 'bp-scale-panel',
@@ -59,6 +73,18 @@ export class ScalePanel {
   protected readonly notice = signal('');
   protected readonly errorMessage = errorMessage;
 
+  constructor() {
+    const refusals = () => contractErrors(scaleRequestSchema, this.body());
+    const typing = checkWhileTyping(this.form, refusals);
+    const clearing = this.form.valueChanges.subscribe(() => {
+      if (Object.keys(filledInErrors(this.form, refusals())).length > 0) this.scaled.set(null);
+    });
+    inject(DestroyRef).onDestroy(() => {
+      typing.unsubscribe();
+      clearing.unsubscribe();
+    });
+  }
+
   protected chooseBy(by: 'units' | 'total'): void {
     this.by.set(by);
     this.form.controls.by.setValue(by);
@@ -66,15 +92,15 @@ export class ScalePanel {
 
   protected scale(): void {
     if (this.busy()) return;
-    const v = this.form.getRawValue();
-    const unitMass = v.unitMassGrams ?? this.unitMassGrams() ?? undefined;
-    const body =
-      v.by === 'units'
-        ? { units: v.units, unitMassGrams: unitMass, lossPercent: v.lossPercent ?? 0 }
-        : { totalGrams: v.totalGrams, lossPercent: v.lossPercent ?? 0 };
-    const { value, notice } = validateContract(this.form, scaleRequestSchema, body, (p) => p);
+    const { value, notice } = checkForm(this.form, {
+      schema: scaleRequestSchema,
+      body: this.body(),
+    });
     this.notice.set(notice);
-    if (!value) return;
+    if (!value) {
+      this.scaled.set(null);
+      return;
+    }
     this.busy.set(true);
     this.api.scale(this.formulaId(), this.version(), value).subscribe({
       next: (scaled) => {
@@ -83,8 +109,18 @@ export class ScalePanel {
       },
       error: (err: unknown) => {
         this.busy.set(false);
-        this.notice.set(showContractRequestError(this.form, err, (p) => p));
+        this.scaled.set(null);
+        this.notice.set(showRequestError(this.form, err));
       },
     });
+  }
+
+  /** The scale request for what is entered; a blank unit mass uses the profile's. */
+  private body() {
+    const v = this.form.getRawValue();
+    const unitMass = v.unitMassGrams ?? this.unitMassGrams() ?? undefined;
+    return v.by === 'units'
+      ? { units: v.units, unitMassGrams: unitMass, lossPercent: v.lossPercent ?? 0 }
+      : { totalGrams: v.totalGrams, lossPercent: v.lossPercent ?? 0 };
   }
 }

@@ -23,10 +23,9 @@ import {
   volumeToGrams,
   volumeToGramsInputSchema,
 } from '@batchproof/shared';
-import { errorMessage } from '../../forms/form-errors';
+import { checkForm, errorMessage } from '../../forms/form-errors';
 import { lineGroup } from '../formula-editor/formula-form';
 import { MaterialPicker } from '../formula-editor/material-picker';
-import { validateContract } from '../form-paths';
 import { FormulasApi } from '../formulas-api';
 import { MEASURE_NAMES, weightReferences } from './weight-references';
 
@@ -129,12 +128,11 @@ export class VolumeDialog {
       this.notice.set('Choose a material first.');
       return;
     }
-    const { value, notice } = validateContract(
-      this.form,
-      volumeToGramsInputSchema,
-      this.request(),
+    const { value, notice } = checkForm(this.form, {
+      schema: volumeToGramsInputSchema,
+      body: this.request(),
       mapPath,
-    );
+    });
     this.notice.set(notice);
     if (!value) return;
     const grams = Math.round(volumeToGrams(value).grams * 100) / 100;

@@ -105,34 +105,46 @@ export class LotForm {
     const control = this.form().controls.materialId;
     control.setValue(material?.id ?? '');
     control.markAsTouched();
+    control.markAsDirty();
   }
 
-  protected submit(): void {
-    if (this.submitting()) return;
+  /** Whether the form holds changes not saved yet. */
+  hasUnsavedChanges(): boolean {
+    return this.form().dirty;
+  }
+
+  /** Checks and records (or corrects) the lot; resolves whether it was saved. */
+  submit(): Promise<boolean> {
+    if (this.submitting()) return Promise.resolve(false);
     this.notice.set('');
     const form = this.form();
     const value = validateForm(form, lotCreateSchema);
-    if (!value) return;
+    if (!value) return Promise.resolve(false);
     const existing = this.lot();
     this.submitting.set(true);
     const request = existing
       ? this.api.update(existing.id, value)
       : this.api.create(value, this.submission.for(value));
-    request.subscribe({
-      next: (lot) => {
-        this.submitting.set(false);
-        this.submission.done();
-        const what = `Lot ${lot.supplierLotNumber} of ${lot.materialName}`;
-        this.snackBar.open(existing ? `${what} is saved.` : `${what} is recorded.`, 'OK', {
-          duration: 5000,
-        });
-        this.saved.emit(lot);
-      },
-      error: (err: unknown) => {
-        this.submitting.set(false);
-        // The form keeps every value typed; only the messages are added.
-        this.notice.set(showRequestError(form, err));
-      },
+    return new Promise((resolve) => {
+      request.subscribe({
+        next: (lot) => {
+          this.submitting.set(false);
+          this.submission.done();
+          form.markAsPristine();
+          const what = `Lot ${lot.supplierLotNumber} of ${lot.materialName}`;
+          this.snackBar.open(existing ? `${what} is saved.` : `${what} is recorded.`, 'OK', {
+            duration: 5000,
+          });
+          this.saved.emit(lot);
+          resolve(true);
+        },
+        error: (err: unknown) => {
+          this.submitting.set(false);
+          // The form keeps every value typed; only the messages are added.
+          this.notice.set(showRequestError(form, err));
+          resolve(false);
+        },
+      });
     });
   }
 }

@@ -1,5 +1,13 @@
 import { DecimalPipe } from '@angular/common';
-import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  computed,
+  inject,
+  input,
+  signal,
+  viewChild,
+} from '@angular/core';
 import { MatButton } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatIcon } from '@angular/material/icon';
@@ -9,6 +17,7 @@ import { Router, RouterLink } from '@angular/router';
 import { type Lot, ROLE_SETS } from '@batchproof/shared';
 import { Session } from '../../auth/session';
 import { DocumentPanel } from '../../documents/document-panel/document-panel';
+import { FormLeaving, type LeavesSafely } from '../../forms/unsaved-changes';
 import { messageOf } from '../../http/api-error';
 import { LotForm } from '../lot-form/lot-form';
 import { EXPIRY_FLAGS, expiryState } from '../lot-expiry';
@@ -37,7 +46,7 @@ import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
   styleUrl: './lot-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export default class LotPage {
+export default class LotPage implements LeavesSafely {
   /** The lot's id from the path; absent on `/lots/new`. */
   readonly id = input<string>();
   /** The material a new lot starts with, from the query. */
@@ -48,6 +57,13 @@ export default class LotPage {
   private readonly router = inject(Router);
   private readonly dialog = inject(MatDialog);
   private readonly snackBar = inject(MatSnackBar);
+  private readonly lotForm = viewChild(LotForm);
+  private readonly leaving = new FormLeaving(() => {
+    const form = this.lotForm();
+    return form && { hasUnsavedChanges: () => form.hasUnsavedChanges(), save: () => form.submit() };
+  });
+  /** Whether the lot is deleted, so nothing typed in its form is left to save. */
+  private deleted = false;
 
   /** Whether the signed-in member may record and correct lots. */
   protected readonly canRecord = computed(() => this.session.hasRole(ROLE_SETS.goodsIn));
@@ -71,7 +87,16 @@ export default class LotPage {
   /** Why the last delete failed, shown plainly above the lot. */
   protected readonly notice = signal('');
 
+  hasUnsavedChanges(): boolean {
+    return !this.deleted && this.leaving.hasUnsavedChanges();
+  }
+
+  saveChanges(): Promise<boolean> {
+    return this.leaving.saveChanges();
+  }
+
   protected onSaved(lot: Lot): void {
+    if (this.leaving.leaving) return;
     if (this.id()) {
       this.lotResource.set(lot);
     } else {
@@ -98,6 +123,7 @@ export default class LotPage {
     this.api.remove(lot.id).subscribe({
       next: () => {
         this.deleting.set(false);
+        this.deleted = true;
         this.snackBar.open(`Lot ${lot.supplierLotNumber} is deleted.`, 'OK', { duration: 5000 });
         void this.router.navigateByUrl('/lots');
       },

@@ -7,6 +7,7 @@ import {
   type MaterialCategory,
   type MaterialCreate,
 } from '@batchproof/shared';
+import type { PathMap } from '../../forms/form-errors';
 
 /** The measures a material's weight per volume is given in, in the shared order. */
 export const MEASURES = kitchenMeasureSchema.options;
@@ -196,29 +197,19 @@ export function rowErrors(raw: MaterialFormValue): Record<string, string[]> {
 }
 
 /**
- * Moves field messages from the API's paths onto the form's: a maximum keyed by IFRA category
- * goes to that category's row, and a message about one function goes to the functions field.
+ * Where the API's paths live in the form: a maximum keyed by IFRA category goes to that
+ * category's row, and a message about one function goes to the functions field.
  */
-export function toFormPaths(
-  errors: Record<string, string[]>,
-  raw: MaterialFormValue,
-): Record<string, string[]> {
-  const out: Record<string, string[]> = {};
-  const add = (path: string, messages: string[]) => (out[path] ??= []).push(...messages);
+export function materialFormPath(raw: MaterialFormValue): PathMap {
   const ifraPrefix = 'ifraCertificate.maxPercentByIfraCategory';
-  for (const [path, messages] of Object.entries(errors)) {
-    if (path === ifraPrefix) {
-      add('ifraCertificate.limits', messages);
-    } else if (path.startsWith(`${ifraPrefix}.`)) {
+  return (path) => {
+    if (path === ifraPrefix) return 'ifraCertificate.limits';
+    if (path.startsWith(`${ifraPrefix}.`)) {
       const key = path.slice(ifraPrefix.length + 1);
       const row = raw.ifraCertificate.limits.findIndex((l) => l.category.trim() === key);
       const field = key === '' ? 'category' : 'maxPercent';
-      add(row >= 0 ? `ifraCertificate.limits.${row}.${field}` : 'ifraCertificate.limits', messages);
-    } else if (path.startsWith('functions.')) {
-      add('functions', messages);
-    } else {
-      add(path, messages);
+      return row >= 0 ? `ifraCertificate.limits.${row}.${field}` : 'ifraCertificate.limits';
     }
-  }
-  return out;
+    return path.startsWith('functions.') ? 'functions' : path;
+  };
 }

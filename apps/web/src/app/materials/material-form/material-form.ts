@@ -26,15 +26,13 @@ import { MatOption, MatSelect } from '@angular/material/select';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { RouterLink } from '@angular/router';
 import {
-  fieldErrorsFromZod,
   isScentCategory,
   type Material,
   materialCreateSchema,
   ROLE_SETS,
 } from '@batchproof/shared';
 import { Session } from '../../auth/session';
-import { errorMessage, showFieldErrors, showRequestError } from '../../forms/form-errors';
-import { ApiError } from '../../http/api-error';
+import { checkForm, errorMessage, showRequestError } from '../../forms/form-errors';
 import { SuppliersApi } from '../../suppliers/suppliers-api';
 import { AllergenDeclarationEditor } from '../allergen-declaration-editor/allergen-declaration-editor';
 import { BlendEditor } from '../blend-editor/blend-editor';
@@ -44,10 +42,9 @@ import { MaterialsApi } from '../materials-api';
 import { WeightPerVolumeEditor } from '../weight-per-volume-editor/weight-per-volume-editor';
 import { formChanges } from './form-changes';
 import {
+  materialFormPath,
   MaterialFormModel,
-  type MaterialFormValue,
   rowErrors,
-  toFormPaths,
   toMaterialInput,
 } from './material-form-model';
 
@@ -141,51 +138,60 @@ export class MaterialForm {
   protected addFunction(event: MatChipInputEvent): void {
     const name = event.value.trim();
     const control = this.form().controls.functions;
-    if (name && !control.value.includes(name)) control.setValue([...control.value, name]);
+    if (name && !control.value.includes(name)) {
+      control.setValue([...control.value, name]);
+      control.markAsDirty();
+    }
     event.chipInput.clear();
   }
 
   protected removeFunction(name: string): void {
     const control = this.form().controls.functions;
     control.setValue(control.value.filter((f) => f !== name));
+    control.markAsDirty();
   }
 
-  protected save(): void {
-    if (this.saving() || !this.canWrite()) return;
+  /** Whether the form holds changes not saved yet. */
+  hasUnsavedChanges(): boolean {
+    return this.canWrite() && this.form().dirty;
+  }
+
+  /** Checks and saves the material; resolves whether it was saved. */
+  save(): Promise<boolean> {
+    if (this.saving() || !this.canWrite()) return Promise.resolve(false);
     this.notice.set('');
     const form = this.form();
     const raw = form.getRawValue();
+    const mapPath = materialFormPath(raw);
     const input = toMaterialInput(raw);
-    const parsed = materialCreateSchema.safeParse(input);
-    const errors = {
-      ...rowErrors(raw),
-      ...(parsed.success ? {} : fieldErrorsFromZod(parsed.error)),
-    };
-    if (Object.keys(errors).length > 0) {
-      const unplaced = showFieldErrors(form, toFormPaths(errors, raw));
-      this.notice.set(['Some fields need attention.', ...unplaced].join(' '));
-      return;
+    const checked = checkForm(form, {
+      schema: materialCreateSchema,
+      body: input,
+      extra: rowErrors(raw),
+      mapPath,
+    });
+    if (!checked.value) {
+      this.notice.set(['Some fields need attention.', checked.notice].filter(Boolean).join(' '));
+      return Promise.resolve(false);
     }
     this.saving.set(true);
     const id = this.material()?.id;
-    (id ? this.api.update(id, input) : this.api.create(input)).subscribe({
-      next: (material) => {
-        this.saving.set(false);
-        this.summary.set(material.calibrationSummary);
-        form.markAsPristine();
-        this.snackBar.open(`Saved ${material.tradeName}.`, 'OK', { duration: 4000 });
-        this.saved.emit(material);
-      },
-      error: (err: unknown) => {
-        this.saving.set(false);
-        this.notice.set(showRequestError(form, onFormPaths(err, raw)));
-      },
+    return new Promise((resolve) => {
+      (id ? this.api.update(id, input) : this.api.create(input)).subscribe({
+        next: (material) => {
+          this.saving.set(false);
+          this.summary.set(material.calibrationSummary);
+          form.markAsPristine();
+          this.snackBar.open(`Saved ${material.tradeName}.`, 'OK', { duration: 4000 });
+          this.saved.emit(material);
+          resolve(true);
+        },
+        error: (err: unknown) => {
+          this.saving.set(false);
+          this.notice.set(showRequestError(form, err, mapPath));
+          resolve(false);
+        },
+      });
     });
   }
-}
-
-/** The same error with its field paths moved onto the form's. */
-function onFormPaths(err: unknown, raw: MaterialFormValue): unknown {
-  if (!(err instanceof ApiError)) return err;
-  return new ApiError(err.status, err.code, err.message, toFormPaths(err.fieldErrors, raw));
 }

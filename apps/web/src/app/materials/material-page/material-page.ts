@@ -1,10 +1,19 @@
-import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  computed,
+  inject,
+  input,
+  signal,
+  viewChild,
+} from '@angular/core';
 import { MatButton } from '@angular/material/button';
 import { MatIcon } from '@angular/material/icon';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { Router, RouterLink } from '@angular/router';
 import type { Material } from '@batchproof/shared';
 import { DocumentPanel } from '../../documents/document-panel/document-panel';
+import { FormLeaving, type LeavesSafely } from '../../forms/unsaved-changes';
 import { messageOf } from '../../http/api-error';
 import { MaterialForm } from '../material-form/material-form';
 import { CATEGORY_LABELS } from '../material-labels';
@@ -56,11 +65,13 @@ import { MaterialsApi } from '../materials-api';
   styleUrl: './material-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export default class MaterialPage {
+export default class MaterialPage implements LeavesSafely {
   /** The material's id from the path; unset on `/materials/new`. */
   readonly id = input<string>();
 
   private readonly router = inject(Router);
+  private readonly materialForm = viewChild(MaterialForm);
+  private readonly leaving = new FormLeaving(() => this.materialForm());
   protected readonly material = inject(MaterialsApi).material(this.id);
   /** The latest saved copy, so the heading follows a renamed material without a reload. */
   private readonly saved = signal<Material | null>(null);
@@ -79,7 +90,16 @@ export default class MaterialPage {
     return error ? messageOf(error) : '';
   });
 
+  hasUnsavedChanges(): boolean {
+    return this.leaving.hasUnsavedChanges();
+  }
+
+  saveChanges(): Promise<boolean> {
+    return this.leaving.saveChanges();
+  }
+
   protected onCreated(material: Material): void {
+    if (this.leaving.leaving) return;
     void this.router.navigate(['/materials', material.id], { replaceUrl: true });
   }
 

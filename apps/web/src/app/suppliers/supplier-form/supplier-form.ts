@@ -130,25 +130,35 @@ export class SupplierForm {
   protected readonly saving = signal(false);
   protected readonly notice = signal('');
 
-  protected save(): void {
-    if (this.saving() || !this.canWrite()) return;
+  /** Whether the form holds changes not saved yet. */
+  hasUnsavedChanges(): boolean {
+    return this.canWrite() && this.form().dirty;
+  }
+
+  /** Checks and saves the supplier; resolves whether it was saved. */
+  save(): Promise<boolean> {
+    if (this.saving() || !this.canWrite()) return Promise.resolve(false);
     this.notice.set('');
     const form = this.form();
     const value = validateForm(form, supplierCreateSchema);
-    if (!value) return;
+    if (!value) return Promise.resolve(false);
     this.saving.set(true);
     const id = this.supplier()?.id;
-    (id ? this.api.update(id, value) : this.api.create(value)).subscribe({
-      next: (supplier) => {
-        this.saving.set(false);
-        form.markAsPristine();
-        this.snackBar.open(`Saved ${supplier.name}.`, 'OK', { duration: 4000 });
-        this.saved.emit(supplier);
-      },
-      error: (err: unknown) => {
-        this.saving.set(false);
-        this.notice.set(showRequestError(form, err));
-      },
+    return new Promise((resolve) => {
+      (id ? this.api.update(id, value) : this.api.create(value)).subscribe({
+        next: (supplier) => {
+          this.saving.set(false);
+          form.markAsPristine();
+          this.snackBar.open(`Saved ${supplier.name}.`, 'OK', { duration: 4000 });
+          this.saved.emit(supplier);
+          resolve(true);
+        },
+        error: (err: unknown) => {
+          this.saving.set(false);
+          this.notice.set(showRequestError(form, err));
+          resolve(false);
+        },
+      });
     });
   }
 }

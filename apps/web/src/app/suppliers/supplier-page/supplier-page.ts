@@ -1,9 +1,18 @@
-import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  computed,
+  inject,
+  input,
+  signal,
+  viewChild,
+} from '@angular/core';
 import { MatAnchor, MatButton } from '@angular/material/button';
 import { MatIcon } from '@angular/material/icon';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { Router, RouterLink } from '@angular/router';
 import type { Supplier } from '@batchproof/shared';
+import { FormLeaving, type LeavesSafely } from '../../forms/unsaved-changes';
 import { messageOf } from '../../http/api-error';
 import { SupplierForm } from '../supplier-form/supplier-form';
 import { SuppliersApi } from '../suppliers-api';
@@ -62,11 +71,13 @@ import { SuppliersApi } from '../suppliers-api';
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export default class SupplierPage {
+export default class SupplierPage implements LeavesSafely {
   /** The supplier's id from the path; unset on `/suppliers/new`. */
   readonly id = input<string>();
 
   private readonly router = inject(Router);
+  private readonly supplierForm = viewChild(SupplierForm);
+  private readonly leaving = new FormLeaving(() => this.supplierForm());
   protected readonly supplier = inject(SuppliersApi).supplier(this.id);
   /** The latest saved copy, so the heading follows a renamed supplier. */
   protected readonly saved = signal<Supplier | null>(null);
@@ -81,7 +92,16 @@ export default class SupplierPage {
     return error ? messageOf(error) : '';
   });
 
+  hasUnsavedChanges(): boolean {
+    return this.leaving.hasUnsavedChanges();
+  }
+
+  saveChanges(): Promise<boolean> {
+    return this.leaving.saveChanges();
+  }
+
   protected onCreated(supplier: Supplier): void {
+    if (this.leaving.leaving) return;
     void this.router.navigate(['/suppliers', supplier.id], { replaceUrl: true });
   }
 }
