@@ -1,7 +1,6 @@
 import { HttpClient, httpResource } from '@angular/common/http';
-import { inject, Injectable, type Signal, signal } from '@angular/core';
-import { rxResource, takeUntilDestroyed } from '@angular/core/rxjs-interop';
-import { forkJoin, map, type Observable, of, shareReplay } from 'rxjs';
+import { inject, Injectable } from '@angular/core';
+import { map, type Observable } from 'rxjs';
 import {
   formulaPageSchema,
   type Formula,
@@ -12,10 +11,6 @@ import {
   type FormulaVersion,
   type FormulaVersionInput,
   formulaVersionSchema,
-  type Material,
-  MAX_MATERIAL_IDS,
-  materialPageSchema,
-  materialsByIdSchema,
   type ReleaseRequest,
   type ScaleRequest,
   scaledVersionSchema,
@@ -23,32 +18,18 @@ import {
   versionComparisonSchema,
 } from '@batchproof/shared';
 import { idempotencyHeaders } from '../http/submission-key';
-import { MaterialsApi } from '../materials/materials-api';
 
 const enc = encodeURIComponent;
 const formulaUrl = (id: string) => `/api/formulas/${enc(id)}`;
 const versionUrl = (id: string, n: number) => `${formulaUrl(id)}/versions/${n}`;
 
-/** The workshop's formulas and their versions. Reads are resources; call them in a field. */
+/**
+ * The workshop's formulas and their versions. Reads are resources; call them in a field. The
+ * materials their lines name are read through `MaterialsApi`, the app's one read model of them.
+ */
 @Injectable({ providedIn: 'root' })
 export class FormulasApi {
   private readonly http = inject(HttpClient);
-  /** Full material records already asked for, shared by every line naming them. */
-  private readonly materialCache = new Map<string, Observable<Material>>();
-  /** Moves on whenever a cached material is replaced, so open editors read it again. */
-  private readonly cacheRevision = signal(0);
-
-  constructor() {
-    // A material saved in the materials screens replaces the cached copy: the editor's live
-    // check must read what the server will read on the next save, never a stale record.
-    inject(MaterialsApi)
-      .saved.pipe(takeUntilDestroyed())
-      .subscribe((material) => {
-        if (!this.materialCache.has(material.id)) return;
-        this.materialCache.set(material.id, of(material));
-        this.cacheRevision.update((n) => n + 1);
-      });
-  }
 
   /** One page of formulas, filtered, sorted and paged on the server. */
   list(query: () => FormulaListQuery) {
@@ -63,6 +44,7 @@ export class FormulasApi {
         };
         if (q.q) params['q'] = q.q;
         if (q.productType) params['productType'] = q.productType;
+        if (q.includeArchived) params['includeArchived'] = 'true';
         return { url: '/api/formulas', params };
       },
       { parse: (body) => formulaPageSchema.parse(body) },
@@ -102,75 +84,6 @@ export class FormulasApi {
       },
       { parse: (body) => versionComparisonSchema.parse(body) },
     );
-  }
-
-  /** Materials whose name, INCI or CAS contains `q`, for the line picker (no request while null). */
-  searchMaterials(q: () => string | null) {
-    return httpResource(
-      () => {
-        const text = q();
-        if (text === null) return undefined;
-        const params: Record<string, string | number> = { pageSize: 10, sort: 'tradeName' };
-        if (text.trim()) params['q'] = text.trim();
-        return { url: '/api/materials', params };
-      },
-      { parse: (body) => materialPageSchema.parse(body).items },
-    );
-  }
-
-  /**
-   * The full records (blend components, certificates, weights per volume) of the materials in
-   * `ids`, keyed by id: what the live check needs. The ids not cached yet are asked for in one
-   * request, each once per page load, and read again from the cache when one of them is saved in
-   * the materials screens.
-   */
-  materials(ids: Signal<readonly string[]>) {
-    return rxResource({
-      params: () => ({ ids: ids(), revision: this.cacheRevision() }),
-      stream: ({ params }) => {
-        if (params.ids.length === 0) return of(new Map<string, Material>());
-        this.readUncached(params.ids);
-        return forkJoin(params.ids.map((id) => this.materialCache.get(id)!)).pipe(
-          map((list) => new Map(list.map((m) => [m.id, m]))),
-        );
-      },
-    });
-  }
-
-  /** One material's full record, cached for the life of the app (a save here replaces it). */
-  material(id: string): Observable<Material> {
-    this.readUncached([id]);
-    return this.materialCache.get(id)!;
-  }
-
-  /**
-   * Caches a read of every id in `ids` not cached yet: one `GET /api/materials?ids=…` for them
-   * all (in chunks of the most the API takes), in place of one request per material.
-   */
-  private readUncached(ids: readonly string[]) {
-    const missing = [...new Set(ids)].filter((id) => !this.materialCache.has(id));
-    for (let i = 0; i < missing.length; i += MAX_MATERIAL_IDS) {
-      const chunk = missing.slice(i, i + MAX_MATERIAL_IDS);
-      const found = this.http
-        .get<unknown>('/api/materials', { params: { ids: chunk.join(',') } })
-        .pipe(
-          map((body) => new Map(materialsByIdSchema.parse(body).items.map((m) => [m.id, m]))),
-          shareReplay({ bufferSize: 1, refCount: false }),
-        );
-      for (const id of chunk) {
-        const one = found.pipe(
-          map((byId) => {
-            const material = byId.get(id);
-            if (!material) throw new Error('That material is not in this workshop.');
-            return material;
-          }),
-          shareReplay({ bufferSize: 1, refCount: false }),
-        );
-        this.materialCache.set(id, one);
-        // A failed or missing read is not cached, so the next look tries again.
-        one.subscribe({ error: () => this.materialCache.delete(id) });
-      }
-    }
   }
 
   /** Creates a formula with its first draft; `key` makes a retried submission create it once. */

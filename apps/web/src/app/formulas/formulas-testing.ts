@@ -6,48 +6,16 @@ import type { Type } from '@angular/core';
 import type { Routes } from '@angular/router';
 import { RouterTestingHarness } from '@angular/router/testing';
 import { expect, vi } from 'vitest';
-import type {
-  Formula,
-  FormulaVersion,
-  Material,
-  MaterialSummary,
-  ProductProfile,
-  Role,
-} from '@batchproof/shared';
+import type { Formula, FormulaVersion, Material, ProductProfile, Role } from '@batchproof/shared';
 import { signedInAs } from '../auth/signed-in-as';
+import { aMaterial } from '../materials/materials-testing';
+
+export { aMaterial, summaryOf } from '../materials/materials-testing';
 
 /** Test data and page set-up for the formulas specs (imported by specs only). */
 
 const STAMP = '2026-11-01T10:00:00.000Z';
 export const FORMULA_ID = '7d3c1f1e-1c1a-4c8e-9a59-0c7a4f2b9e01';
-
-/** A full material record as `GET /api/materials/:id` returns it. */
-export function aMaterial(id: string, fields: Partial<Material>): Material {
-  return {
-    id,
-    createdAt: STAMP,
-    updatedAt: STAMP,
-    tradeName: 'Material',
-    inci: 'Aqua',
-    usName: null,
-    cas: null,
-    ec: null,
-    functions: [],
-    category: 'other',
-    supplierId: null,
-    supplierName: null,
-    notes: null,
-    colourIndex: null,
-    nano: false,
-    components: [],
-    ifraCertificate: null,
-    allergenDeclaration: null,
-    weightPerVolume: {},
-    calibrations: [],
-    calibrationSummary: [],
-    ...fields,
-  };
-}
 
 export const BICARB = aMaterial('1b7f0c52-5a43-4d7e-8a51-6f0d2f4a0001', {
   tradeName: 'Bicarb, fine',
@@ -71,24 +39,6 @@ export const BLUE_BLEND = aMaterial('1b7f0c52-5a43-4d7e-8a51-6f0d2f4a0003', {
     { inci: 'Ultramarines', percent: 15, colourIndex: 'CI 77007', functions: ['colorant'] },
   ],
 });
-
-/** The list row of a material. */
-export function summaryOf(m: Material): MaterialSummary {
-  const { id, tradeName, inci, usName, cas, category, supplierId, supplierName } = m;
-  return {
-    id,
-    tradeName,
-    inci,
-    usName,
-    cas,
-    category,
-    supplierId,
-    supplierName,
-    colourIndex: m.colourIndex,
-    functions: m.functions,
-    updatedAt: m.updatedAt,
-  };
-}
 
 /** A bath product sold in the US and the EU. */
 export const BATH_PROFILE: ProductProfile = {

@@ -7,15 +7,10 @@ import {
   type LotListQuery,
   lotPageSchema,
   lotSchema,
-  materialPageSchema,
-  materialSummarySchema,
 } from '@batchproof/shared';
 import { idempotencyHeaders } from '../http/submission-key';
 
-/** How many materials the picker offers at once; typing narrows them. */
-const MATERIAL_OPTIONS = 20;
-
-/** Goods-in: the workshop's lots, and the materials a lot can be of. Reads are resources. */
+/** Goods-in: the workshop's lots. Reads are resources. */
 @Injectable({ providedIn: 'root' })
 export class LotsApi {
   private readonly http = inject(HttpClient);
@@ -44,30 +39,6 @@ export class LotsApi {
   lot(id: () => string | undefined) {
     return httpResource(() => (id() ? `/api/lots/${encodeURIComponent(id()!)}` : undefined), {
       parse: (body) => lotSchema.parse(body),
-    });
-  }
-
-  /** Materials whose names match `q`, for a picker; nothing is read while `q` is undefined. */
-  materialOptions(q: () => string | undefined) {
-    return httpResource(
-      () => {
-        const text = q();
-        if (text === undefined) return undefined;
-        const params: Record<string, string | number> = {
-          sort: 'tradeName',
-          pageSize: MATERIAL_OPTIONS,
-        };
-        if (text.trim()) params['q'] = text.trim();
-        return { url: '/api/materials', params };
-      },
-      { parse: (body) => materialPageSchema.parse(body).items },
-    );
-  }
-
-  /** One material's identity (name, INCI), read while `id` gives one. */
-  material(id: () => string | undefined) {
-    return httpResource(() => (id() ? `/api/materials/${encodeURIComponent(id()!)}` : undefined), {
-      parse: (body) => materialSummarySchema.parse(body),
     });
   }
 

@@ -18,6 +18,7 @@ import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { MatTooltip } from '@angular/material/tooltip';
 import { errorMessage } from '../../forms/form-errors';
+import { MaterialPicker } from '../../materials/material-picker/material-picker';
 import { VolumeDialog, type VolumeLine } from '../scaling/volume-dialog';
 import {
   type EntryMode,
@@ -28,7 +29,6 @@ import {
   type LineSeed,
   switchEntry,
 } from './formula-form';
-import { MaterialPicker } from './material-picker';
 
 const EMPTY_LINE: LineSeed = { materialId: '', materialName: '', grams: null, percent: null };
 

@@ -21,6 +21,7 @@ import { Session } from '../../auth/session';
 import { checkWhileTyping, errorMessage, filledInErrors } from '../../forms/form-errors';
 import { type LeavesSafely, warnBeforeUnload } from '../../forms/unsaved-changes';
 import { messageOf } from '../../http/api-error';
+import { MaterialsApi } from '../../materials/materials-api';
 import { FormulasApi } from '../formulas-api';
 import { LiveChecks } from '../live-checks/live-checks';
 import { evaluateDraft, type LiveEvaluation, today } from '../live-checks/live-evaluation';
@@ -149,7 +150,7 @@ export default class FormulaPage implements LeavesSafely {
         .sort(),
     { equal: sameIds },
   );
-  private readonly materials = this.api.materials(this.materialIds);
+  private readonly materials = inject(MaterialsApi).materials(this.materialIds);
   /** The lines' full materials; the last set stays while another line's material loads. */
   private readonly materialMap = linkedSignal<
     ReadonlyMap<string, Material> | undefined,

@@ -24,9 +24,8 @@ import {
   volumeToGramsInputSchema,
 } from '@batchproof/shared';
 import { checkForm, errorMessage } from '../../forms/form-errors';
-import { lineGroup } from '../formula-editor/formula-form';
-import { MaterialPicker } from '../formula-editor/material-picker';
-import { FormulasApi } from '../formulas-api';
+import { MaterialPicker } from '../../materials/material-picker/material-picker';
+import { MaterialsApi } from '../../materials/materials-api';
 import { MEASURE_NAMES, weightReferences } from './weight-references';
 
 /** A line measured by volume and converted to grams. */
@@ -70,17 +69,10 @@ const mapPath = (path: string) => (path.startsWith('weightPerVolume') ? 'referen
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class VolumeDialog {
-  private readonly api = inject(FormulasApi);
+  private readonly materials = inject(MaterialsApi);
   private readonly ref = inject<MatDialogRef<VolumeDialog, VolumeLine>>(MatDialogRef);
   private readonly fb = inject(NonNullableFormBuilder);
 
-  /** The picker's line: only its material is used. */
-  protected readonly line = lineGroup(this.fb, {
-    materialId: '',
-    materialName: '',
-    grams: null,
-    percent: null,
-  });
   protected readonly form = this.fb.group({
     amount: this.fb.control<number | null>(null),
     unit: 'cup' as KitchenMeasure,
@@ -94,7 +86,7 @@ export class VolumeDialog {
   private readonly pickedId = signal<string | undefined>(undefined);
   protected readonly material = rxResource<Material | undefined, string | undefined>({
     params: () => this.pickedId(),
-    stream: ({ params }) => (params ? this.api.material(params) : of(undefined)),
+    stream: ({ params }) => (params ? this.materials.record(params) : of(undefined)),
   });
   /** Weights per volume the material carries, the maker's own weighings first. */
   protected readonly references = computed(() => {
@@ -117,7 +109,7 @@ export class VolumeDialog {
     return parsed.success ? volumeToGrams(parsed.data) : null;
   });
 
-  protected choose(id: string): void {
+  protected choose(id: string | undefined): void {
     this.pickedId.set(id);
     this.form.controls.reference.setValue('');
   }

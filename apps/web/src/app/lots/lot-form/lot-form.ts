@@ -16,18 +16,12 @@ import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { MatSnackBar } from '@angular/material/snack-bar';
-import {
-  type Lot,
-  lotCreateSchema,
-  LOT_UNITS,
-  type LotUnit,
-  type MaterialSummary,
-} from '@batchproof/shared';
+import { type Lot, lotCreateSchema, LOT_UNITS, type LotUnit } from '@batchproof/shared';
 import { errorMessage, showRequestError, validateForm } from '../../forms/form-errors';
 import { SubmissionKey } from '../../http/submission-key';
+import { MaterialPicker } from '../../materials/material-picker/material-picker';
 import { isoDay } from '../lot-expiry';
 import { LotsApi } from '../lots-api';
-import { MaterialPicker } from '../material-picker/material-picker';
 import { MatDatepickerModule } from '@angular/material/datepicker';
 import { provideCalendarDays } from '../../dates/calendar-day-adapter';
 
@@ -99,13 +93,6 @@ export class LotForm {
       unitCost: this.fb.control<number | null>(lot?.unitCost ?? null),
       notes: lot?.notes ?? '',
     });
-  }
-
-  protected pickMaterial(material: MaterialSummary | null): void {
-    const control = this.form().controls.materialId;
-    control.setValue(material?.id ?? '');
-    control.markAsTouched();
-    control.markAsDirty();
   }
 
   /** Whether the form holds changes not saved yet. */

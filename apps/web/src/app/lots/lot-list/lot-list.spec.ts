@@ -5,25 +5,19 @@ import { MatSortHarness } from '@angular/material/sort/testing';
 import { MatTableHarness } from '@angular/material/table/testing';
 import { Router } from '@angular/router';
 import { RouterTestingHarness } from '@angular/router/testing';
-import type { Lot, LotPage, MaterialSummary, Role } from '@batchproof/shared';
+import type { Lot, LotPage, Role } from '@batchproof/shared';
 import { signedInAs } from '../../auth/signed-in-as';
+import { aMaterial, answerMaterialsRead } from '../../materials/materials-testing';
 import { addDays } from '../lot-expiry';
 import LotList from './lot-list';
 
 const SHEA = '0b4c7a52-2c1e-4a55-9d5e-6f1f3b2a9c01';
-const SHEA_MATERIAL: MaterialSummary = {
-  id: SHEA,
+/** Shea butter's full record, as the one material read model reads it. */
+const SHEA_MATERIAL = aMaterial(SHEA, {
   tradeName: 'Shea butter, refined',
   inci: 'Butyrospermum Parkii Butter',
-  usName: null,
-  cas: null,
   category: 'butter',
-  supplierId: null,
-  supplierName: null,
-  colourIndex: null,
-  functions: [],
-  updatedAt: '2026-01-01T00:00:00.000Z',
-};
+});
 
 function lot(overrides: Partial<Lot>): Lot {
   return {
@@ -94,7 +88,7 @@ describe('LotList', () => {
     );
     const req = backend.expectOne(isLots);
     // The material filter shows the chosen material's name, read by its id.
-    backend.expectOne(`/api/materials/${SHEA}`).flush(SHEA_MATERIAL);
+    await answerMaterialsRead(backend, [SHEA_MATERIAL]);
     req.flush({ ...PAGE, page: 2, pageSize: 50, total: 52 });
     await harness.fixture.whenStable();
 

@@ -12,10 +12,10 @@ import { RouterLink } from '@angular/router';
 import { type Lot, lotListQuerySchema, ROLE_SETS } from '@batchproof/shared';
 import { Session } from '../../auth/session';
 import { ListCard } from '../../lists/list-card';
+import { MaterialPicker } from '../../materials/material-picker/material-picker';
 import { injectUrlListQuery, keepLastValue } from '../../lists/url-list-query';
 import { EXPIRY_FILTERS, EXPIRY_FLAGS, expiresBeforeFor, expiryState } from '../lot-expiry';
 import { LotsApi } from '../lots-api';
-import { MaterialPicker } from '../material-picker/material-picker';
 import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
 
 /**

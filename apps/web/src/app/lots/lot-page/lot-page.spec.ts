@@ -12,6 +12,7 @@ import { Router } from '@angular/router';
 import { RouterTestingHarness } from '@angular/router/testing';
 import type { Lot, MaterialSummary, Role } from '@batchproof/shared';
 import { signedInAs } from '../../auth/signed-in-as';
+import { aMaterial, answerMaterialsRead } from '../../materials/materials-testing';
 import LotPage from './lot-page';
 
 const SHEA = '0b4c7a52-2c1e-4a55-9d5e-6f1f3b2a9c01';
@@ -33,6 +34,13 @@ function material(id: string, tradeName: string, inci: string): MaterialSummary 
     updatedAt: '2026-01-01T00:00:00.000Z',
   };
 }
+
+/** Shea butter's full record, as the one material read model reads it. */
+const SHEA_RECORD = aMaterial(SHEA, {
+  tradeName: 'Shea butter, refined',
+  inci: 'Butyrospermum Parkii Butter',
+  category: 'butter',
+});
 
 const LOT: Lot = {
   id: LOT_ID,
@@ -95,9 +103,7 @@ describe('LotPage', () => {
 
   it("shows the server's field messages beside the fields and keeps what was typed", async () => {
     const page = await openAs('formulator', `/lots/new?materialId=${SHEA}`);
-    page.backend
-      .expectOne(`/api/materials/${SHEA}`)
-      .flush(material(SHEA, 'Shea butter, refined', 'Butyrospermum Parkii Butter'));
+    await answerMaterialsRead(page.backend, [SHEA_RECORD]);
     await page.harness.fixture.whenStable();
     expect(await page.value('Material')).toBe('Shea butter, refined');
 
@@ -147,9 +153,7 @@ describe('LotPage', () => {
 
   it('sends one Idempotency-Key per submission: a retry after a lost answer reuses it, a changed form gets a new one', async () => {
     const page = await openAs('formulator', `/lots/new?materialId=${SHEA}`);
-    page.backend
-      .expectOne(`/api/materials/${SHEA}`)
-      .flush(material(SHEA, 'Shea butter, refined', 'Butyrospermum Parkii Butter'));
+    await answerMaterialsRead(page.backend, [SHEA_RECORD]);
     await page.harness.fixture.whenStable();
     await page.fill('Supplier lot number', 'SB-2231');
     await page.fill('Quantity received', '5000');
@@ -179,9 +183,7 @@ describe('LotPage', () => {
 
   it('refuses an expiry before the day received with the shared message, sending nothing', async () => {
     const page = await openAs('owner', `/lots/new?materialId=${SHEA}`);
-    page.backend
-      .expectOne(`/api/materials/${SHEA}`)
-      .flush(material(SHEA, 'Shea butter, refined', 'Butyrospermum Parkii Butter'));
+    await answerMaterialsRead(page.backend, [SHEA_RECORD]);
     await page.harness.fixture.whenStable();
 
     await page.fill('Supplier lot number', 'SB-1');
