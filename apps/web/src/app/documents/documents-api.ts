@@ -8,6 +8,8 @@ import { idempotencyHeaders } from '../http/submission-key';
 export interface DocumentOwner {
   materialId?: string;
   lotId?: string;
+  /** Whether archived documents are listed too. */
+  includeArchived?: boolean;
 }
 
 /** Supplier documents on materials and lots. Reads are resources; call them in a field. */
@@ -24,6 +26,7 @@ export class DocumentsApi {
         const params: Record<string, string> = o.materialId
           ? { materialId: o.materialId }
           : { lotId: o.lotId! };
+        if (o.includeArchived) params['includeArchived'] = 'true';
         return { url: '/api/documents', params };
       },
       { parse: (body) => documentListSchema.parse(body).items },

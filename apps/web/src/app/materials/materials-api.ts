@@ -154,10 +154,9 @@ export class MaterialsApi {
       .pipe(map((body) => materialImportPreviewSchema.parse(body)));
   }
 
-  /** Imports a CSV file; the API writes every row or none. Cached records are read again. */
   /**
    * Imports a CSV file; the API writes every row or none. `existing: 'update'` updates the
-   * materials on file that rows match, in place of adding copies.
+   * materials on file that rows match, in place of adding copies. Cached records are read again.
    */
   import(file: File, existing: 'create' | 'update' = 'create'): Observable<MaterialImportResult> {
     const url =

@@ -27,6 +27,7 @@ export class SuppliersApi {
           pageSize: q.pageSize,
         };
         if (q.q) params['q'] = q.q;
+        if (q.includeArchived) params['includeArchived'] = 'true';
         return { url: '/api/suppliers', params };
       },
       { parse: (body) => supplierPageSchema.parse(body) },

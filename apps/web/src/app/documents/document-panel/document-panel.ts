@@ -20,6 +20,8 @@ import { DocumentStatusList } from '../document-status-list/document-status-list
 import { DocumentUpload } from '../document-upload/document-upload';
 import { DOCUMENT_KIND_LABELS, fileSize } from '../document-kinds';
 import { DocumentsApi } from '../documents-api';
+import { ArchivedToggle } from '../../housekeeping/archived-toggle';
+import { RecordActions } from '../../housekeeping/record-actions';
 import { saveFile } from '../save-file';
 import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
 
@@ -40,6 +42,8 @@ import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
     MatTooltip,
     DocumentStatusList,
     DocumentUpload,
+    ArchivedToggle,
+    RecordActions,
   ],
   templateUrl: './document-panel.html',
   styleUrl: './document-panel.scss',
@@ -59,9 +63,16 @@ export class DocumentPanel {
 
   /** Whether the signed-in member may upload documents. */
   protected readonly canWrite = computed(() => this.session.hasRole(ROLE_SETS.writers));
+  /** Whether archived documents are listed too. */
+  protected readonly showArchived = signal(false);
+  /** The document whose replace, archive and delete buttons are shown. */
+  protected readonly selected = signal<SupplierDocument | null>(null);
+  /** The document the next upload replaces, if any. */
+  protected readonly replacing = signal<SupplierDocument | null>(null);
   protected readonly documents = this.api.list(() => ({
     materialId: this.materialId(),
     lotId: this.lotId(),
+    includeArchived: this.showArchived(),
   }));
   protected readonly status = this.api.status(this.materialId);
   protected readonly rows = computed(() =>
@@ -80,7 +91,14 @@ export class DocumentPanel {
   /** The id of the document being downloaded, if any. */
   protected readonly downloading = signal<string | null>(null);
 
+  protected onDeleted(): void {
+    this.selected.set(null);
+    this.reload();
+  }
+
   protected onUploaded(doc: SupplierDocument): void {
+    this.replacing.set(null);
+    this.selected.set(null);
     this.documents.reload();
     this.status.reload();
     this.uploaded.emit(doc);

@@ -3,6 +3,7 @@ import {
   ChangeDetectionStrategy,
   Component,
   type ElementRef,
+  effect,
   inject,
   input,
   output,
@@ -77,6 +78,8 @@ export class DocumentUpload {
   readonly materialId = input<string>();
   /** The lot the document belongs to (give this or `materialId`). */
   readonly lotId = input<string>();
+  /** An older document this upload replaces (it stays on file as superseded history). */
+  readonly replaces = input<SupplierDocument | null>(null);
   /** Emits each document once the API has stored it. */
   readonly uploaded = output<SupplierDocument>();
 
@@ -102,6 +105,11 @@ export class DocumentUpload {
   protected readonly progress = signal<number | null>(null);
   protected readonly notice = signal('');
   protected readonly chosen = signal<File | null>(null);
+  /** A replacement is of the same kind as the document it replaces. */
+  private readonly sameKindAsReplaced = effect(() => {
+    const old = this.replaces();
+    if (old) this.form.controls.kind.setValue(old.kind);
+  });
 
   protected choose(event: Event): void {
     const file = (event.target as HTMLInputElement).files?.[0] ?? null;
@@ -135,6 +143,7 @@ export class DocumentUpload {
         version: raw.version,
         materialId: this.materialId(),
         lotId: this.lotId(),
+        replacesId: this.replaces()?.id,
       },
       extra: fileError ? { file: [fileError] } : {},
     });

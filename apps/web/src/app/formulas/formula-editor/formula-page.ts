@@ -28,6 +28,7 @@ import { evaluateDraft, type LiveEvaluation, today } from '../live-checks/live-e
 import { ScalePanel } from '../scaling/scale-panel';
 import { SEVERITIES, SeverityLabel } from '../severity/severity-label';
 import { FormulaActions } from './formula-actions';
+import { FormulaHousekeeping } from './formula-housekeeping';
 import { createFormulaForm, draftErrors, editorPath } from './formula-form';
 import { FormulaLines } from './formula-lines';
 import { ProfileFields } from './profile-fields';
@@ -56,6 +57,7 @@ const HELD_BACK: LiveEvaluation = {
 @Component({
   selector: 'bp-formula-page',
   imports: [
+    FormulaHousekeeping,
     CalendarDayPipe,
     ReactiveFormsModule,
     MatButton,

@@ -21,6 +21,7 @@ import { Session } from '../../auth/session';
 import { ListCard } from '../../lists/list-card';
 import { injectUrlListQuery, keepLastValue } from '../../lists/url-list-query';
 import { FormulasApi } from '../formulas-api';
+import { ArchivedToggle } from '../../housekeeping/archived-toggle';
 import { PRODUCT_TYPE_LABELS } from '../product-types';
 import { SEVERITIES, SeverityLabel } from '../severity/severity-label';
 import { NewFormulaDialog } from './new-formula-dialog';
@@ -30,6 +31,7 @@ import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
 @Component({
   selector: 'bp-formula-list-page',
   imports: [
+    ArchivedToggle,
     CalendarDayPipe,
     MatButton,
     MatFormField,

@@ -4,6 +4,7 @@ import {
   computed,
   inject,
   input,
+  linkedSignal,
   output,
   signal,
   untracked,
@@ -22,6 +23,7 @@ import { SubmissionKey } from '../../http/submission-key';
 import { MaterialPicker } from '../../materials/material-picker/material-picker';
 import { isoDay } from '../lot-expiry';
 import { LotsApi } from '../lots-api';
+import { FieldWarnings } from '../../forms/field-warnings';
 import { MatDatepickerModule } from '@angular/material/datepicker';
 import { provideCalendarDays } from '../../dates/calendar-day-adapter';
 
@@ -44,6 +46,7 @@ import { provideCalendarDays } from '../../dates/calendar-day-adapter';
     MatLabel,
     MatOption,
     MatProgressBar,
+    FieldWarnings,
     MatSelect,
     MaterialPicker,
   ],
@@ -60,6 +63,8 @@ export class LotForm {
   readonly presetMaterialId = input<string | undefined>();
   /** Emits the lot as the API stored it, after each save. */
   readonly saved = output<Lot>();
+  /** Warnings of the save that recorded the lot, shown until the next save. */
+  readonly initialWarnings = input<Lot['warnings']>([]);
 
   private readonly api = inject(LotsApi);
   private readonly fb = inject(NonNullableFormBuilder);
@@ -68,6 +73,8 @@ export class LotForm {
   protected readonly errorMessage = errorMessage;
   protected readonly submitting = signal(false);
   protected readonly notice = signal('');
+  /** What the last save said about the lot number (already received); never blocks. */
+  protected readonly lotNumberWarnings = linkedSignal(() => this.initialWarnings() ?? []);
   /** The Idempotency-Key of a new lot's submission, kept while it is retried. */
   private readonly submission = new SubmissionKey();
 
@@ -122,6 +129,7 @@ export class LotForm {
           this.snackBar.open(existing ? `${what} is saved.` : `${what} is recorded.`, 'OK', {
             duration: 5000,
           });
+          this.lotNumberWarnings.set(lot.warnings ?? []);
           this.saved.emit(lot);
           resolve(true);
         },

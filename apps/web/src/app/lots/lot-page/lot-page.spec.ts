@@ -322,4 +322,38 @@ describe('LotPage', () => {
     expect(page.text()).toContain('3,250.5 g');
     expect(page.text()).toContain('Two tubs.');
   });
+  it('refuses a received date in the future beside the field, sending nothing', async () => {
+    const page = await openAs('owner', `/lots/new?materialId=${SHEA}`);
+    await answerMaterialsRead(page.backend, [SHEA_RECORD]);
+    await page.harness.fixture.whenStable();
+
+    await page.fill('Supplier lot number', 'SB-1');
+    await page.fill('Quantity received', '250');
+    await page.fill('Received on', '2999-03-01');
+    await page.click(/Record lot/);
+
+    expect(await page.errors('Received on')).toEqual(['The received date cannot be in the future']);
+    page.backend.expectNone((r) => r.method === 'POST');
+  });
+
+  it('records a lot whose number was already received, and shows the warning on its page', async () => {
+    const page = await openAs('production', `/lots/new?materialId=${SHEA}`);
+    await answerMaterialsRead(page.backend, [SHEA_RECORD]);
+    await page.harness.fixture.whenStable();
+    await page.fill('Supplier lot number', 'SB-2231');
+    await page.fill('Quantity received', '5000');
+    await page.fill('Received on', '2026-03-01');
+    await page.click(/Record lot/);
+
+    const warning = {
+      field: 'supplierLotNumber',
+      message:
+        'This material already has lot SB-2231, received 2026-02-01. Check this is not the same delivery entered twice.',
+    };
+    const post = await sent(page.backend, (r) => r.method === 'POST' && r.url === '/api/lots');
+    post.flush({ ...LOT, warnings: [warning] }, { status: 201, statusText: 'Created' });
+    await vi.waitFor(() => expect(TestBed.inject(Router).url).toBe(`/lots/${LOT_ID}`));
+    await answerLot(page.backend);
+    await vi.waitFor(() => expect(page.text()).toContain(warning.message));
+  });
 });

@@ -69,6 +69,9 @@ export default class LotPage implements LeavesSafely {
   protected readonly canRecord = computed(() => this.session.hasRole(ROLE_SETS.goodsIn));
   /** Whether the signed-in member may delete lots and attach their documents. */
   protected readonly canWrite = computed(() => this.session.hasRole(ROLE_SETS.writers));
+  /** Warnings of the save that opened this page (the lot number was already received). */
+  protected readonly createdWarnings: Lot['warnings'] =
+    (this.router.currentNavigation()?.extras.state?.['warnings'] as Lot['warnings']) ?? [];
   protected readonly lotResource = this.api.lot(this.id);
   protected readonly lot = computed<Lot | null>(() =>
     this.lotResource.hasValue() ? this.lotResource.value() : null,
@@ -101,7 +104,11 @@ export default class LotPage implements LeavesSafely {
       this.lotResource.set(lot);
     } else {
       // The lot page is where its documents are attached, so a new lot opens there.
-      void this.router.navigate(['/lots', lot.id], { replaceUrl: true });
+      // The warnings of the save go along, so the lot's own page shows them.
+      void this.router.navigate(['/lots', lot.id], {
+        replaceUrl: true,
+        state: { warnings: lot.warnings ?? [] },
+      });
     }
   }
 

@@ -23,6 +23,7 @@ import { injectUrlListQuery, keepLastValue } from '../../lists/url-list-query';
 import { MaterialImport } from '../material-import/material-import';
 import { CATEGORY_LABELS, CATEGORY_OPTIONS } from '../material-labels';
 import { MaterialsApi } from '../materials-api';
+import { ArchivedToggle } from '../../housekeeping/archived-toggle';
 import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
 
 /**
@@ -32,6 +33,7 @@ import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
 @Component({
   selector: 'bp-material-list',
   imports: [
+    ArchivedToggle,
     CalendarDayPipe,
     MatAnchor,
     MatButton,

@@ -18,6 +18,7 @@ import { messageOf } from '../../http/api-error';
 import { MaterialForm } from '../material-form/material-form';
 import { CATEGORY_LABELS } from '../material-labels';
 import { MaterialsApi } from '../materials-api';
+import { RecordActions } from '../../housekeeping/record-actions';
 
 /**
  * A new material (`/materials/new`) or one material (`/materials/:id`): the form on the left,
@@ -25,7 +26,15 @@ import { MaterialsApi } from '../materials-api';
  */
 @Component({
   selector: 'bp-material-page',
-  imports: [MatButton, MatIcon, MatProgressBar, RouterLink, DocumentPanel, MaterialForm],
+  imports: [
+    MatButton,
+    MatIcon,
+    MatProgressBar,
+    RouterLink,
+    DocumentPanel,
+    MaterialForm,
+    RecordActions,
+  ],
   template: `
     <nav class="crumbs" aria-label="Breadcrumb"><a routerLink="/materials">Materials</a></nav>
     <header class="title-row">
@@ -34,6 +43,16 @@ import { MaterialsApi } from '../materials-api';
         <span class="category">{{ category() }}</span>
       }
     </header>
+    @if (material.hasValue()) {
+      <bp-record-actions
+        class="housekeeping"
+        kind="materials"
+        [recordId]="material.value().id"
+        [name]="heading()"
+        [archived]="material.value().archivedAt"
+        (deleted)="onDeleted()"
+      />
+    }
     @if (material.isLoading()) {
       <mat-progress-bar mode="indeterminate" aria-label="Loading the material" />
     }
@@ -101,6 +120,10 @@ export default class MaterialPage implements LeavesSafely {
   protected onCreated(material: Material): void {
     if (this.leaving.leaving) return;
     void this.router.navigate(['/materials', material.id], { replaceUrl: true });
+  }
+
+  protected onDeleted(): void {
+    void this.router.navigate(['/materials'], { replaceUrl: true });
   }
 
   protected onSaved(material: Material): void {

@@ -4,6 +4,7 @@ import {
   computed,
   inject,
   input,
+  linkedSignal,
   output,
   signal,
 } from '@angular/core';
@@ -14,10 +15,16 @@ import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { MatSnackBar } from '@angular/material/snack-bar';
-import { ROLE_SETS, type Supplier, supplierCreateSchema } from '@batchproof/shared';
+import {
+  type FieldWarning,
+  ROLE_SETS,
+  type Supplier,
+  supplierCreateSchema,
+} from '@batchproof/shared';
 import { Session } from '../../auth/session';
 import { errorMessage, showRequestError, validateForm } from '../../forms/form-errors';
 import { SuppliersApi } from '../suppliers-api';
+import { FieldWarnings } from '../../forms/field-warnings';
 
 /** A supplier's name and contact details; read-only for members who may not write. */
 @Component({
@@ -32,6 +39,7 @@ import { SuppliersApi } from '../suppliers-api';
     MatInput,
     MatLabel,
     MatProgressBar,
+    FieldWarnings,
   ],
   template: `
     @let f = form();
@@ -53,6 +61,7 @@ import { SuppliersApi } from '../suppliers-api';
         <input matInput formControlName="name" autocomplete="organization" />
         <mat-error>{{ errorMessage(f.controls.name) }}</mat-error>
       </mat-form-field>
+      <bp-field-warnings [warnings]="nameWarnings()" />
       <mat-form-field>
         <mat-label>Contact person</mat-label>
         <input matInput formControlName="contact" autocomplete="off" />
@@ -105,6 +114,8 @@ export class SupplierForm {
   readonly supplier = input<Supplier | null>(null);
   /** Emits the supplier as the API stored it after each save. */
   readonly saved = output<Supplier>();
+  /** Warnings of the save that created the supplier, shown until the next save. */
+  readonly initialWarnings = input<readonly FieldWarning[]>([]);
 
   private readonly fb = inject(NonNullableFormBuilder);
   private readonly api = inject(SuppliersApi);
@@ -129,6 +140,8 @@ export class SupplierForm {
   protected readonly errorMessage = errorMessage;
   protected readonly saving = signal(false);
   protected readonly notice = signal('');
+  /** What the last save said about the name (another supplier has it); never blocks. */
+  protected readonly nameWarnings = linkedSignal(() => this.initialWarnings());
 
   /** Whether the form holds changes not saved yet. */
   hasUnsavedChanges(): boolean {
@@ -149,6 +162,7 @@ export class SupplierForm {
         next: (supplier) => {
           this.saving.set(false);
           form.markAsPristine();
+          this.nameWarnings.set(supplier.warnings ?? []);
           this.snackBar.open(`Saved ${supplier.name}.`, 'OK', { duration: 4000 });
           this.saved.emit(supplier);
           resolve(true);

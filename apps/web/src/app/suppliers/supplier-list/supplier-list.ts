@@ -12,12 +12,14 @@ import { Session } from '../../auth/session';
 import { ListCard } from '../../lists/list-card';
 import { injectUrlListQuery, keepLastValue } from '../../lists/url-list-query';
 import { SuppliersApi } from '../suppliers-api';
+import { ArchivedToggle } from '../../housekeeping/archived-toggle';
 import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
 
 /** The workshop's suppliers, filtered, sorted and paged on the server through the URL. */
 @Component({
   selector: 'bp-supplier-list',
   imports: [
+    ArchivedToggle,
     CalendarDayPipe,
     MatAnchor,
     MatButton,

@@ -11,16 +11,17 @@ import { MatAnchor, MatButton } from '@angular/material/button';
 import { MatIcon } from '@angular/material/icon';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { Router, RouterLink } from '@angular/router';
-import type { Supplier } from '@batchproof/shared';
+import type { FieldWarning, Supplier } from '@batchproof/shared';
 import { FormLeaving, type LeavesSafely } from '../../forms/unsaved-changes';
 import { messageOf } from '../../http/api-error';
 import { SupplierForm } from '../supplier-form/supplier-form';
 import { SuppliersApi } from '../suppliers-api';
+import { RecordActions } from '../../housekeeping/record-actions';
 
 /** A new supplier (`/suppliers/new`) or one supplier (`/suppliers/:id`). */
 @Component({
   selector: 'bp-supplier-page',
-  imports: [MatAnchor, MatButton, MatIcon, MatProgressBar, RouterLink, SupplierForm],
+  imports: [MatAnchor, MatButton, MatIcon, MatProgressBar, RecordActions, RouterLink, SupplierForm],
   template: `
     <nav class="crumbs" aria-label="Breadcrumb">
       <a routerLink="/materials">Materials</a> › <a routerLink="/suppliers">Suppliers</a>
@@ -34,6 +35,16 @@ import { SuppliersApi } from '../suppliers-api';
         </a>
       }
     </header>
+    @if (current(); as s) {
+      <bp-record-actions
+        class="housekeeping"
+        kind="suppliers"
+        [recordId]="s.id"
+        [name]="s.name"
+        [archived]="s.archivedAt"
+        (deleted)="onDeleted()"
+      />
+    }
     @if (supplier.isLoading()) {
       <mat-progress-bar mode="indeterminate" aria-label="Loading the supplier" />
     }
@@ -46,7 +57,11 @@ import { SuppliersApi } from '../suppliers-api';
     @if (!id()) {
       <bp-supplier-form (saved)="onCreated($event)" />
     } @else if (supplier.hasValue()) {
-      <bp-supplier-form [supplier]="supplier.value()" (saved)="saved.set($event)" />
+      <bp-supplier-form
+        [supplier]="supplier.value()"
+        [initialWarnings]="createdWarnings"
+        (saved)="saved.set($event)"
+      />
     }
   `,
   styles: `
@@ -76,6 +91,10 @@ export default class SupplierPage implements LeavesSafely {
   readonly id = input<string>();
 
   private readonly router = inject(Router);
+  /** Warnings of the create that opened this page (another supplier has the name). */
+  protected readonly createdWarnings: FieldWarning[] =
+    (this.router.currentNavigation()?.extras.state?.['warnings'] as FieldWarning[] | undefined) ??
+    [];
   private readonly supplierForm = viewChild(SupplierForm);
   private readonly leaving = new FormLeaving(() => this.supplierForm());
   protected readonly supplier = inject(SuppliersApi).supplier(this.id);
@@ -102,6 +121,14 @@ export default class SupplierPage implements LeavesSafely {
 
   protected onCreated(supplier: Supplier): void {
     if (this.leaving.leaving) return;
-    void this.router.navigate(['/suppliers', supplier.id], { replaceUrl: true });
+    // The warnings of the create go along, so the supplier's own page shows them.
+    void this.router.navigate(['/suppliers', supplier.id], {
+      replaceUrl: true,
+      state: { warnings: supplier.warnings ?? [] },
+    });
+  }
+
+  protected onDeleted(): void {
+    void this.router.navigate(['/suppliers'], { replaceUrl: true });
   }
 }
