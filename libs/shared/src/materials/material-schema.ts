@@ -198,8 +198,10 @@ export const materialSchema = z.object({
 export type Material = z.infer<typeof materialSchema>;
 
 /**
- * Query of `GET /api/materials`: `q` matches trade name, INCI, US name and CAS. Archived materials
- * only with `includeArchived=true`, so pickers built on the list never offer them.
+ * Query of `GET /api/materials`: `q` matches trade name, INCI, US name and CAS, and the INCI names
+ * of a blend's components (ranked after own-name matches, see `materialListItemSchema`).
+ * Archived materials only with `includeArchived=true`, so pickers built on the list never offer
+ * them.
  */
 export const materialListQuerySchema = listQuerySchema(
   ['tradeName', 'inci', 'category', 'createdAt', 'updatedAt'],
