@@ -322,6 +322,7 @@ describe('LotPage', () => {
     expect(page.text()).toContain('3,250.5 g');
     expect(page.text()).toContain('Two tubs.');
   });
+
   it('refuses a received date in the future beside the field, sending nothing', async () => {
     const page = await openAs('owner', `/lots/new?materialId=${SHEA}`);
     await answerMaterialsRead(page.backend, [SHEA_RECORD]);
