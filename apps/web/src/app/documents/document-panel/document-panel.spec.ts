@@ -59,7 +59,7 @@ describe('DocumentPanel', () => {
     const cells = await table.getCellTextByColumnName();
     expect(cells['document']!.text[0]).toContain('IFRA conformity certificate');
     expect(cells['document']!.text[0].replace(/\s+/g, ' ')).toContain('Version 2 · ifra.pdf 20 KB');
-    expect(cells['issuedOn']!.text).toEqual(['2026-01-15']);
+    expect(cells['issuedOn']!.text).toEqual(['Jan 15, 2026']);
     const status = p.el.querySelector('bp-document-status-list')!.textContent!;
     expect(status).toContain('Safety data sheet: Missing');
     expect(status).toContain('No safety data sheet on file');
