@@ -113,10 +113,12 @@ const TYPE_DEFAULTS: Record<ProductType, TypeDefaults> = {
 };
 
 /**
- * A starting profile for a new formula of `type`: bath products sit in the bath water (mucous
- * membrane contact), lip products touch the lips and eye-area products the eye area (as the
- * engine also assumes, see `impliedContact`); use and IFRA category come from the type's usual
- * defaults above. Common practice, no published source: the maker confirms each field.
+ * A starting profile for a new formula of `type`: bath products are marked "used in the bath" but
+ * not "touches mucous membranes" — the engine reads bath use as mucous-membrane contact and labels
+ * the findings that rest on it as its interpretation, which a pre-ticked box would hide; lip
+ * products touch the lips and eye-area products the eye area (as the engine also assumes, see
+ * `impliedContact`); use and IFRA category come from the type's usual defaults above. Common
+ * practice, no published source: the maker confirms each field.
  */
 export function startingProfile(type: ProductType, markets: ComplianceMarket[]): Profile {
   const inBath = BATH_PRODUCT_TYPES.includes(type);
@@ -124,7 +126,7 @@ export function startingProfile(type: ProductType, markets: ComplianceMarket[]):
   const { use, ifraCategory } = TYPE_DEFAULTS[type];
   return {
     use,
-    contact: { mucousMembranes: inBath, eyeArea, lips },
+    contact: { mucousMembranes: false, eyeArea, lips },
     inBath,
     adultsOnly: false,
     soldAsSoap: false,
