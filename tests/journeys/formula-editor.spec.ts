@@ -109,6 +109,8 @@ describe('journey: a maker builds a bath formula with live checks, releases it a
     await addLine(page, 'harbour', 'Harbour Blue mica', '1');
     await us.filter({ hasText: 'Ultramarines' }).waitFor();
     expect(await us.textContent()).toContain('Blocks');
+    // 21 CFR 82.3(n) does not name bath products: the block says it rests on Batchproof's reading.
+    expect(await us.textContent()).toContain('Interpretation:');
     await h.screenshot(page, 'formulas-04-editor-us-block');
 
     // Saved and released: the server refuses, naming the block.
