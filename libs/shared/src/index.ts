@@ -25,3 +25,4 @@ export * from './materials/material-category-labels';
 export * from './dates/calendar-day';
 export * from './idempotency/idempotency-key';
 export * from './attention/attention-schema';
+export * from './labels/label-stock';
