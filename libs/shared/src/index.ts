@@ -26,3 +26,4 @@ export * from './dates/calendar-day';
 export * from './idempotency/idempotency-key';
 export * from './attention/attention-schema';
 export * from './labels/label-stock';
+export * from './labels/product-identity';
