@@ -1,8 +1,9 @@
 import request from 'supertest';
-import { ROLE_SETS, ROLES, type Role } from '@batchproof/shared';
+import { BUILT_IN_LABEL_STOCKS, ROLE_SETS, ROLES, type Role } from '@batchproof/shared';
 import { pdfBytes } from '../../fixtures/builders/document-files';
 import { aFormula, aDraft } from '../../fixtures/builders/formula-builder';
 import { aLot } from '../../fixtures/builders/lot-builder';
+import { aSheetLabelStock } from '../../fixtures/builders/label-stock-builder';
 import { buildLot, buildMaterial, buildSupplier } from '../support/row-builders';
 import { aMaterial, aSupplier } from '../../fixtures/builders/material-builder';
 import type { BuiltWorkshop } from '../support/workshop-builder';
@@ -74,6 +75,14 @@ export function workspaceAccessCases(ctx: () => { h: ApiHarness; a: BuiltWorksho
     }
     return res.body.id as string;
   };
+  const labelStock = async () => {
+    const res = await request(ctx().h.app)
+      .post('/api/label-stocks')
+      .set(bearer(ctx().a.members.owner))
+      .send(aSheetLabelStock());
+    return res.body.id as string;
+  };
+  const builtInStock = BUILT_IN_LABEL_STOCKS[0]!.key;
   const csv = () => `tradeName,inci,category\nSea Salt ${Math.random()},Sodium Chloride,base\n`;
 
   const cases: {
@@ -338,6 +347,58 @@ export function workspaceAccessCases(ctx: () => { h: ApiHarness; a: BuiltWorksho
       prepare: async () => ({ method: 'delete', path: `/api/formulas/${await formula()}` }),
       expected: write(204, 404),
     },
+    {
+      route: 'GET /api/label-stocks',
+      prepare: async () => ({ method: 'get', path: '/api/label-stocks' }),
+      expected: read(200, 200),
+    },
+    {
+      route: 'POST /api/label-stocks',
+      prepare: async () => ({
+        method: 'post',
+        path: '/api/label-stocks',
+        body: aSheetLabelStock(),
+      }),
+      expected: write(201, 201),
+    },
+    {
+      route: 'GET /api/label-stocks/:id',
+      prepare: async () => ({ method: 'get', path: `/api/label-stocks/${await labelStock()}` }),
+      expected: read(200, 404),
+    },
+    {
+      route: 'GET /api/label-stocks/:id (built in: every workshop reads it)',
+      prepare: async () => ({ method: 'get', path: `/api/label-stocks/${builtInStock}` }),
+      expected: read(200, 200),
+    },
+    {
+      route: 'PUT /api/label-stocks/:id',
+      prepare: async () => ({
+        method: 'put',
+        path: `/api/label-stocks/${await labelStock()}`,
+        body: aSheetLabelStock(),
+      }),
+      expected: write(200, 404),
+    },
+    {
+      route: 'PUT /api/label-stocks/:id (built in: nobody changes it)',
+      prepare: async () => ({
+        method: 'put',
+        path: `/api/label-stocks/${builtInStock}`,
+        body: aSheetLabelStock(),
+      }),
+      expected: write(409, 409),
+    },
+    {
+      route: 'DELETE /api/label-stocks/:id',
+      prepare: async () => ({ method: 'delete', path: `/api/label-stocks/${await labelStock()}` }),
+      expected: write(204, 404),
+    },
+    {
+      route: 'DELETE /api/label-stocks/:id (built in)',
+      prepare: async () => ({ method: 'delete', path: `/api/label-stocks/${builtInStock}` }),
+      expected: write(409, 409),
+    },
     // Archive and unarchive: owner and formulator, like every other write to these records.
     ...(
       [
@@ -345,6 +406,7 @@ export function workspaceAccessCases(ctx: () => { h: ApiHarness; a: BuiltWorksho
         ['suppliers', supplier],
         ['formulas', () => formula()],
         ['documents', document],
+        ['label-stocks', labelStock],
       ] as const
     ).flatMap(([feature, make]) =>
       (['archive', 'unarchive'] as const).map((action) => ({

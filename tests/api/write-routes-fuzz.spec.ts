@@ -5,6 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { errorEnvelopeSchema } from '@batchproof/shared';
 import { aBathProfile, aDraft, aFormula } from '../../fixtures/builders/formula-builder';
 import { aLot } from '../../fixtures/builders/lot-builder';
+import { aSheetLabelStock } from '../../fixtures/builders/label-stock-builder';
 import { aFragrance, aMaterial, aSupplier } from '../../fixtures/builders/material-builder';
 import { pdfBytes } from '../../fixtures/builders/document-files';
 import { startApiHarness, TEST_JWT_SECRET, type ApiHarness } from '../support/api-harness';
@@ -107,6 +108,15 @@ const archivable = {
       issuedOn: '2025-01-01',
       materialId: await material(),
     });
+    return res.body.id as string;
+  },
+  'label-stocks': async () => {
+    const res = await json('post')(
+      h.app,
+      '/api/label-stocks',
+      w.members.owner.token,
+      aSheetLabelStock(),
+    );
     return res.body.id as string;
   },
 };
@@ -352,16 +362,30 @@ const cases: FuzzCase[] = [
     }),
     send: json('post'),
   },
+  {
+    route: 'POST /api/label-stocks',
+    prepare: async () => ({ path: '/api/label-stocks', valid: aSheetLabelStock() }),
+    send: json('post'),
+  },
+  {
+    route: 'PUT /api/label-stocks/:id',
+    prepare: async () => ({
+      path: `/api/label-stocks/${await archivable['label-stocks']()}`,
+      valid: aSheetLabelStock({ shape: { kind: 'rounded-rectangle', cornerRadiusMm: 3 } }),
+    }),
+    send: json('put'),
+  },
   // Archiving takes no body: whatever is sent, the record is archived or brought back.
-  ...(['materials', 'suppliers', 'formulas', 'documents'] as const).flatMap((feature) =>
-    (['archive', 'unarchive'] as const).map((action): FuzzCase => ({
-      route: `POST /api/${feature}/:id/${action}`,
-      prepare: async () => ({
-        path: `/api/${feature}/${await archivable[feature]()}/${action}`,
-        valid: {},
-      }),
-      send: json('post'),
-    })),
+  ...(['materials', 'suppliers', 'formulas', 'documents', 'label-stocks'] as const).flatMap(
+    (feature) =>
+      (['archive', 'unarchive'] as const).map((action): FuzzCase => ({
+        route: `POST /api/${feature}/:id/${action}`,
+        prepare: async () => ({
+          path: `/api/${feature}/${await archivable[feature]()}/${action}`,
+          valid: {},
+        }),
+        send: json('post'),
+      })),
   ),
 ];
 

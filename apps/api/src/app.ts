@@ -20,6 +20,7 @@ import { materialsRouter } from './materials/materials-router';
 import { suppliersRouter } from './suppliers/suppliers-router';
 import { evaluationsRouter } from './evaluations/evaluations-router';
 import { attentionRouter } from './attention/attention-router';
+import { labelStocksRouter } from './labels/label-stocks-router';
 
 /** Everything the app needs from outside; tests pass their own. */
 export interface AppDeps {
@@ -91,6 +92,7 @@ export function createApp(deps: AppDeps): Express {
   api.use('/lots', lotsRouter({ db: deps.db, authn }));
   api.use('/formulas', formulasRouter({ db: deps.db, authn }));
   api.use('/attention', attentionRouter({ db: deps.db, authn }));
+  api.use('/label-stocks', labelStocksRouter({ db: deps.db, authn }));
   api.use(apiNotFound);
   api.use(errorHandler);
   app.use('/api', api);

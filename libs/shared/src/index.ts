@@ -26,4 +26,5 @@ export * from './dates/calendar-day';
 export * from './idempotency/idempotency-key';
 export * from './attention/attention-schema';
 export * from './labels/label-stock';
+export * from './labels/label-stock-api';
 export * from './labels/product-identity';

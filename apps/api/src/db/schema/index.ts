@@ -9,3 +9,4 @@ export * from './lots';
 export * from './documents';
 export * from './formulas';
 export * from './idempotency';
+export * from './label-stocks';
