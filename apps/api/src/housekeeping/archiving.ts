@@ -23,6 +23,11 @@ export interface Archivable<T> {
   label: string;
   /** Reads the record back as the API answers it, inside the archiving transaction. */
   read: (db: Database, actor: AuthUser, id: string) => Promise<T>;
+  /**
+   * Turns the path's `:id` into a record id, throwing the answer for one that cannot be archived
+   * (404 by default; a feature with read-only records of its own may refuse them otherwise).
+   */
+  idOf?: (raw: unknown) => string;
 }
 
 /** Lists leave archived rows out unless the query asks for them. */
@@ -65,7 +70,7 @@ export function archiveRoutes<T>(db: Database, write: RequestHandler[], what: Ar
     ['/:id/unarchive', false],
   ] as const) {
     router.post(path, ...write, async (req, res) => {
-      const id = recordId(req.params['id'], what.label);
+      const id = what.idOf ? what.idOf(req.params['id']) : recordId(req.params['id'], what.label);
       res.json(await setArchived(db, req.user!, what, id, archived));
     });
   }

@@ -10,7 +10,7 @@ import { idempotentCreate } from '../core/idempotency';
 import { parse } from '../core/validate';
 import type { Database } from '../db/database';
 import { labelStocks } from '../db/schema';
-import { setArchived } from '../housekeeping/archiving';
+import { archiveRoutes } from '../housekeeping/archiving';
 import * as domain from './label-stocks-domain';
 
 /**
@@ -47,20 +47,15 @@ export function labelStocksRouter(deps: { db: Database; authn: Authenticator }) 
     await domain.deleteLabelStock(db, req.user!, domain.ownStockId(req.params.id));
     res.status(204).end();
   });
-  const archivable = {
-    table: labelStocks,
-    subjectType: 'label_stock',
-    label: 'That label stock',
-    read: domain.getLabelStock,
-  };
-  for (const [path, archived] of [
-    ['/:id/archive', true],
-    ['/:id/unarchive', false],
-  ] as const) {
-    router.post(path, ...write, async (req, res) => {
-      const id = domain.ownStockId(req.params['id']);
-      res.json(await setArchived(db, req.user!, archivable, id, archived));
-    });
-  }
+  router.use(
+    archiveRoutes(db, write, {
+      table: labelStocks,
+      subjectType: 'label_stock',
+      label: 'That label stock',
+      read: domain.getLabelStock,
+      // A built-in stock's key is refused with 409 rather than answered as unknown.
+      idOf: domain.ownStockId,
+    }),
+  );
   return router;
 }
