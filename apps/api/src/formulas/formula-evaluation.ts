@@ -16,9 +16,6 @@ export interface GramLine {
   grams: number;
 }
 
-/** Today as YYYY-MM-DD: rules with effective dates are checked as of the day of saving. */
-export const today = (now = new Date()) => todayIso(now);
-
 /**
  * Loads the lines' materials from the caller's workshop. A material id that is unknown here
  * (deleted, mistyped or another workshop's) is a field error on that line, never a leak.
@@ -66,7 +63,8 @@ export async function evaluateLines(
 ): Promise<EvaluationFields> {
   const materials = await loadLineMaterials(db, workshopId, lines);
   const prepared = prepareEvaluation({
-    asOf: today(now),
+    // Rules with effective dates are checked as of the day of saving (the shared calendar day).
+    asOf: todayIso(now),
     productName: formula.name,
     productType: formula.productType,
     profile,

@@ -16,7 +16,7 @@ import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
 import { map, of, startWith, switchMap } from 'rxjs';
-import { type Material, ROLE_SETS } from '@batchproof/shared';
+import { type Material, ROLE_SETS, todayIso } from '@batchproof/shared';
 import { Session } from '../../auth/session';
 import { checkWhileTyping, errorMessage, filledInErrors } from '../../forms/form-errors';
 import { type LeavesSafely, warnBeforeUnload } from '../../forms/unsaved-changes';
@@ -24,7 +24,7 @@ import { messageOf } from '../../http/api-error';
 import { MaterialsApi } from '../../materials/materials-api';
 import { FormulasApi } from '../formulas-api';
 import { LiveChecks } from '../live-checks/live-checks';
-import { evaluateDraft, type LiveEvaluation, today } from '../live-checks/live-evaluation';
+import { evaluateDraft, type LiveEvaluation } from '../live-checks/live-evaluation';
 import { ScalePanel } from '../scaling/scale-panel';
 import { SEVERITIES, SeverityLabel } from '../severity/severity-label';
 import { FormulaActions } from './formula-actions';
@@ -91,7 +91,8 @@ export default class FormulaPage implements LeavesSafely {
   private readonly fb = inject(NonNullableFormBuilder);
   protected readonly errorMessage = errorMessage;
   protected readonly severities = SEVERITIES;
-  private readonly asOf = today();
+  /** The shared calendar day the server also checks against when saving. */
+  private readonly asOf = todayIso();
 
   /** Whether the signed-in member may change formulas. */
   protected readonly canWrite = computed(() => this.session.hasRole(ROLE_SETS.writers));

@@ -6,7 +6,6 @@ import {
   fizzReactants,
   type Material,
   prepareEvaluation,
-  todayIso,
   type ProductType,
 } from '@batchproof/shared';
 import { type FormulaFormValue, lineGrams, profileOf } from '../formula-editor/formula-form';
@@ -32,9 +31,6 @@ export interface LiveEvaluation {
   composition: CompositionLine[];
   totalGrams: number;
 }
-
-/** Today as YYYY-MM-DD, the date the server also checks against when saving. */
-export const today = (now = new Date()) => todayIso(now);
 
 /**
  * Runs the shared compliance engine on the editor's current value through `prepareEvaluation`,
