@@ -60,6 +60,7 @@ const letter30: LabelStockInput = {
 
 describe('inchesToMm', () => {
   it('uses 25.4 mm to the inch, as mathjs does', () => {
+    // International yard and pound agreement (1959): 1 inch = 25.4 mm exactly
     for (const inches of [1, 2.625, 8.5, 11, 10 / 3, 0.125]) {
       expect(inchesToMm(inches)).toBeCloseTo(math.unit(inches, 'inch').toNumber('mm'), 6);
     }
@@ -136,6 +137,7 @@ describe('built-in label stocks', () => {
   });
 
   it('lay a 30-up Letter sheet out row by row', () => {
+    // common practice, no published source: the 30-up sheet's margins and pitches
     const stock = BUILT_IN_LABEL_STOCKS[0]!;
     const boxes = labelPositions(stock);
     expect(boxes[0]).toEqual({
