@@ -28,3 +28,5 @@ export * from './attention/attention-schema';
 export * from './labels/label-stock';
 export * from './labels/label-stock-api';
 export * from './labels/product-identity';
+export * from './labels/label-content';
+export * from './labels/label-run-api';
