@@ -1,5 +1,6 @@
 import * as z from 'zod';
 import { complianceFindingSchema } from '../compliance/evaluation-result-schema';
+import { labelFitProblemSchema, missingLabelElementSchema } from '../labels/label-run-api';
 
 /** Machine-readable error codes the API sends inside the error envelope. */
 export const errorCodeSchema = z.enum([
@@ -13,6 +14,10 @@ export const errorCodeSchema = z.enum([
   'unsupported_media_type',
   /** A release refused for blocking findings; the envelope's `findings` lists them. */
   'release_blocked',
+  /** A print run refused because a chosen market's label lacks required elements (409); see `missing`. */
+  'label_incomplete',
+  /** A print run refused because text cannot fit at its legal minimum size (422); see `fitProblems`. */
+  'label_does_not_fit',
   /** An `Idempotency-Key` already used for a different request. */
   'idempotency_key_reused',
   /** The database cannot be reached right now (503); the request may be retried. */
@@ -39,6 +44,10 @@ export const errorEnvelopeSchema = z.object({
     message: z.string(),
     fieldErrors: z.record(z.string(), z.array(z.string())).optional(),
     findings: z.array(complianceFindingSchema).optional(),
+    /** What each market's label still lacks (`label_incomplete`), each with the field to fill in. */
+    missing: z.array(missingLabelElementSchema).optional(),
+    /** Text that cannot fit at its legal minimum size (`label_does_not_fit`). */
+    fitProblems: z.array(labelFitProblemSchema).optional(),
   }),
 });
 export type ErrorEnvelope = z.infer<typeof errorEnvelopeSchema>;
