@@ -1,7 +1,6 @@
 import { sql } from 'drizzle-orm';
 import {
   check,
-  customType,
   date,
   index,
   integer,
@@ -12,16 +11,11 @@ import {
   uuid,
 } from 'drizzle-orm/pg-core';
 import { DOCUMENT_KINDS } from '@batchproof/shared';
-import { archivedAt, id, timestamps, workshopKey, workshopReference } from './columns';
+import { archivedAt, bytea, id, timestamps, workshopKey, workshopReference } from './columns';
 import { lots } from './lots';
 import { materials } from './materials';
 import { users } from './users';
 import { workshops } from './workshops';
-
-/** PostgreSQL bytea; node-postgres hands it over as a Buffer. */
-const bytea = customType<{ data: Buffer; driverData: Buffer }>({
-  dataType: () => 'bytea',
-});
 
 export const documentKindEnum = pgEnum('document_kind', DOCUMENT_KINDS);
 

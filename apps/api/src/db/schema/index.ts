@@ -10,3 +10,4 @@ export * from './documents';
 export * from './formulas';
 export * from './idempotency';
 export * from './label-stocks';
+export * from './label-runs';

@@ -5,5 +5,7 @@ import { id, timestamps } from './columns';
 export const workshops = pgTable('workshops', {
   id: id(),
   name: text().notNull(),
+  /** The business address printed on labels (the maker's name and address); null until entered. */
+  address: text(),
   ...timestamps,
 });
