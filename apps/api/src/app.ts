@@ -21,6 +21,10 @@ import { suppliersRouter } from './suppliers/suppliers-router';
 import { evaluationsRouter } from './evaluations/evaluations-router';
 import { attentionRouter } from './attention/attention-router';
 import { labelStocksRouter } from './labels/label-stocks-router';
+import { labelRunsRouter } from './labels/label-runs-router';
+import { productIdentityRouter } from './labels/product-identity-router';
+import { publicPageRouter } from './labels/public-page';
+import { workshopRouter } from './workshop/workshop-router';
 
 /** Everything the app needs from outside; tests pass their own. */
 export interface AppDeps {
@@ -90,12 +94,17 @@ export function createApp(deps: AppDeps): Express {
   api.use('/materials', materialsRouter({ db: deps.db, authn }));
   api.use('/documents', documentsRouter({ db: deps.db, authn }));
   api.use('/lots', lotsRouter({ db: deps.db, authn }));
+  api.use('/formulas', productIdentityRouter({ db: deps.db, authn }));
   api.use('/formulas', formulasRouter({ db: deps.db, authn }));
   api.use('/attention', attentionRouter({ db: deps.db, authn }));
   api.use('/label-stocks', labelStocksRouter({ db: deps.db, authn }));
+  api.use('/label-runs', labelRunsRouter({ db: deps.db, authn, appUrl: deps.appUrl }));
+  api.use('/workshop', workshopRouter({ db: deps.db, authn }));
   api.use(apiNotFound);
   api.use(errorHandler);
   app.use('/api', api);
+  // The public ingredients pages: no sign-in, before the web app's fallback.
+  app.use('/p', publicPageRouter({ db: deps.db }));
 
   if (deps.webDist && existsSync(path.join(deps.webDist, 'index.html'))) {
     app.use(webApp(deps.webDist));

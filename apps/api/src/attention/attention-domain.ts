@@ -100,6 +100,20 @@ const COLLECTORS: readonly Collector[] = [
     },
   },
   {
+    kind: 'labels-out-of-date',
+    roles: ROLE_SETS.members,
+    async collect(db, workshopId) {
+      const rows = await repo.formulasWithOutOfDateLabels(db, workshopId, limit);
+      return {
+        total: rows[0]?.matched ?? 0,
+        items: rows.map(({ matched: _matched, ...row }) => ({
+          kind: 'labels-out-of-date',
+          ...row,
+        })),
+      };
+    },
+  },
+  {
     kind: 'invitation-pending',
     roles: ROLE_SETS.ownerOnly,
     async collect(db, workshopId) {

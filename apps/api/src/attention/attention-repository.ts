@@ -1,7 +1,15 @@
 import { and, asc, count, desc, eq, gt, inArray, isNotNull, isNull, lte, sql } from 'drizzle-orm';
 import type { DocumentKind } from '@batchproof/shared';
 import type { Database } from '../db/database';
-import { documents, formulas, formulaVersions, lots, materials, users } from '../db/schema';
+import {
+  documents,
+  formulas,
+  formulaVersions,
+  labelRuns,
+  lots,
+  materials,
+  users,
+} from '../db/schema';
 import { documentInUse } from '../documents/documents-repository';
 import { stockOnHand } from '../lots/lots-repository';
 
@@ -115,6 +123,42 @@ export async function newestMaterialDocuments(
       desc(documents.issuedOn),
       desc(documents.createdAt),
     );
+}
+
+/**
+ * Formulas in use whose newest print run is of a version older than the released one, by name,
+ * with how many of their runs are out of date.
+ */
+export async function formulasWithOutOfDateLabels(db: Database, workshopId: string, limit: number) {
+  const result = await db.execute<{
+    formulaId: string;
+    formulaName: string;
+    releasedVersion: number;
+    printedVersion: number;
+    printedAt: string | Date;
+    runCount: number;
+    matched: number;
+  }>(sql`
+    select ${formulas.id} as "formulaId", ${formulas.name} as "formulaName",
+      ${formulaVersions.number} as "releasedVersion",
+      newest.version_number as "printedVersion", newest.created_at as "printedAt",
+      (select count(*) from ${labelRuns} older
+        where older.workshop_id = ${formulas.workshopId} and older.formula_id = ${formulas.id}
+          and older.version_number < ${formulaVersions.number})::int as "runCount",
+      (count(*) over ())::int as "matched"
+    from ${formulas}
+    join ${formulaVersions} on ${formulaVersions.workshopId} = ${formulas.workshopId}
+      and ${formulaVersions.formulaId} = ${formulas.id} and ${formulaVersions.state} = 'released'
+    join lateral (
+      select r.version_number, r.created_at from ${labelRuns} r
+      where r.workshop_id = ${formulas.workshopId} and r.formula_id = ${formulas.id}
+      order by r.created_at desc limit 1
+    ) newest on true
+    where ${formulas.workshopId} = ${workshopId} and ${formulas.archivedAt} is null
+      and newest.version_number < ${formulaVersions.number}
+    order by ${formulas.name}, ${formulas.id}
+    limit ${limit}`);
+  return result.rows.map((r) => ({ ...r, printedAt: new Date(r.printedAt).toISOString() }));
 }
 
 /** How many materials, lots, formulas and members the workshop has. */

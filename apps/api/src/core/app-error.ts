@@ -1,4 +1,15 @@
-import type { ComplianceFinding, ErrorCode } from '@batchproof/shared';
+import type {
+  ComplianceFinding,
+  ErrorCode,
+  LabelFitProblem,
+  MissingLabelElementRecord,
+} from '@batchproof/shared';
+
+/** A print run's refusal data, sent as the envelope's `missing` or `fitProblems`. */
+export interface LabelRefusal {
+  missing?: MissingLabelElementRecord[];
+  fitProblems?: LabelFitProblem[];
+}
 
 /** An error the API turns into the error envelope with the given status. */
 export class AppError extends Error {
@@ -9,6 +20,8 @@ export class AppError extends Error {
     readonly fieldErrors?: Record<string, string[]>,
     /** The engine's findings behind a refusal, sent as the envelope's `findings`. */
     readonly findings?: ComplianceFinding[],
+    /** What a print run lacks or what does not fit, sent as `missing` or `fitProblems`. */
+    readonly labelRefusal?: LabelRefusal,
   ) {
     super(message);
     this.name = 'AppError';

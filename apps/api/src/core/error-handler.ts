@@ -24,6 +24,7 @@ function toEnvelope(err: unknown) {
         message: err.message,
         fieldErrors: err.fieldErrors,
         findings: err.findings,
+        ...err.labelRefusal,
       },
     });
   }

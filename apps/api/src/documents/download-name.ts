@@ -15,15 +15,22 @@ export function safeFilename(original: string, fallbackExt: string): string {
 }
 
 /**
- * `Content-Disposition: attachment` with the name twice, as RFC 6266 section 4.3 advises: an
- * ASCII `filename` for old clients and an RFC 5987 `filename*=UTF-8''…` that keeps every letter.
+ * `Content-Disposition` with the name twice, as RFC 6266 section 4.3 advises: an ASCII
+ * `filename` for old clients and an RFC 5987 `filename*=UTF-8''…` that keeps every letter.
+ * `inline` lets the browser show it (a PDF preview); `attachment` saves it.
  */
-export function attachmentDisposition(filename: string): string {
+export function contentDisposition(
+  filename: string,
+  disposition: 'attachment' | 'inline' = 'attachment',
+): string {
   const ascii = filename.replace(/[^\x20-\x7e]|["\\%]/g, '_');
   // RFC 5987 attr-char leaves out ' ( ) * which encodeURIComponent keeps.
   const encoded = encodeURIComponent(filename).replace(
     /['()*]/g,
     (c) => `%${c.charCodeAt(0).toString(16).toUpperCase()}`,
   );
-  return `attachment; filename="${ascii}"; filename*=UTF-8''${encoded}`;
+  return `${disposition}; filename="${ascii}"; filename*=UTF-8''${encoded}`;
 }
+
+/** `Content-Disposition: attachment` for a download (see {@link contentDisposition}). */
+export const attachmentDisposition = (filename: string) => contentDisposition(filename);

@@ -50,6 +50,23 @@ export const lotExpiringItemSchema = z.object({
   unit: lotUnitSchema,
 });
 
+/**
+ * A formula whose newest printed labels are of a version older than the one now released: the
+ * labels in use may no longer match the product.
+ */
+export const labelsOutOfDateItemSchema = z.object({
+  kind: z.literal('labels-out-of-date'),
+  formulaId: z.string(),
+  formulaName: z.string(),
+  /** The version the newest labels were printed from. */
+  printedVersion: z.number().int(),
+  releasedVersion: z.number().int(),
+  /** When the newest labels were printed (ISO timestamp). */
+  printedAt: z.string(),
+  /** How many runs of the formula are out of date. */
+  runCount: z.number().int(),
+});
+
 /** An invitation sent and not yet accepted (owners only). */
 export const invitationPendingItemSchema = z.object({
   kind: z.literal('invitation-pending'),
@@ -68,6 +85,7 @@ export const attentionItemSchema = z.discriminatedUnion('kind', [
   formulaBlockedItemSchema,
   materialDocumentsItemSchema,
   lotExpiringItemSchema,
+  labelsOutOfDateItemSchema,
   invitationPendingItemSchema,
 ]);
 export type AttentionItem = z.infer<typeof attentionItemSchema>;

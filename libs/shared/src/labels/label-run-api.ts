@@ -169,9 +169,19 @@ export const labelRunRecordSchema = z.object({
   /** The public ingredients page, for runs printed with a QR code or any run once published. */
   publicPage: z.object({ path: z.string(), withdrawnAt: z.string().nullable() }).nullable(),
   createdAt: z.string(),
-  createdBy: z.object({ id: z.uuid(), name: z.string() }),
+  /** Who printed it; the id is null once that member has left the workshop. */
+  createdBy: z.object({ id: z.uuid().nullable(), name: z.string() }),
 });
 export type LabelRunRecord = z.infer<typeof labelRunRecordSchema>;
+
+/** `GET /api/label-runs?formulaId=`: one formula's runs, or the workshop's latest without it. */
+export const labelRunListQuerySchema = z.object({
+  formulaId: recordIdSchema('formula').optional(),
+});
+export type LabelRunListQuery = z.output<typeof labelRunListQuerySchema>;
+
+/** Most runs one list answers, newest first. */
+export const LABEL_RUN_LIST_MAX = 200;
 
 /** `GET /api/label-runs?formulaId=`: newest first. */
 export const labelRunListSchema = z.object({ items: z.array(labelRunRecordSchema) });

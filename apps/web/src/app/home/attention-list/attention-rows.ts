@@ -98,6 +98,18 @@ const KINDS: {
       text: `${i.materialName}: ${i.documents.map((d) => inSentence(d.message)).join('; ')}.`,
     }),
   },
+  'labels-out-of-date': {
+    icon: 'label_off',
+    heading: (n) =>
+      `${plural(n, 'product has', 'products have')} labels printed from a version older than the released one`,
+    clear: 'every product’s newest labels match its released version',
+    all: { link: '/formulas', label: 'Open the formulas' },
+    row: (i, f) => ({
+      icon: 'label_off',
+      link: `/formulas/${i.formulaId}`,
+      text: `${i.formulaName}: the labels printed on ${f.date(i.printedAt)} are of version ${i.printedVersion}; version ${i.releasedVersion} is released. Print new labels.`,
+    }),
+  },
   'invitation-pending': {
     icon: 'mail',
     heading: (n) => `${plural(n, 'invitation is', 'invitations are')} waiting to be accepted`,
