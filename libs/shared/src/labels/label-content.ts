@@ -1,4 +1,4 @@
-import type { ComplianceMarket } from '../reference-data/reference-row';
+import type { ComplianceMarket, ReferenceStatus } from '../reference-data/reference-row';
 
 /**
  * Label content: what one market's label carries, taken from the engine's result (declaration,
@@ -30,6 +30,13 @@ export type LabelFieldKey = (typeof LABEL_FIELD_KEYS)[number];
 /** Which panel a field sits on when a product has a principal display panel and an information panel. */
 export type LabelPanel = 'front' | 'back';
 
+/**
+ * How sure Batchproof is of a minimum letter height: a reference status (`C`, `C2`, `CALC`, `M`),
+ * or `house` when no published rule gives a number and Batchproof's own minimum applies (common
+ * practice, no published source).
+ */
+export type LetterHeightStatus = ReferenceStatus | 'house';
+
 /** The smallest height the letters of a field may have, and the rule that sets it. */
 export interface LetterHeightMinimum {
   /** Height of the lower-case letters (the "o"), in millimetres. */
@@ -40,6 +47,8 @@ export interface LetterHeightMinimum {
   readonly label: string;
   /** The rule, e.g. `21 CFR 740.2(a)`, or `common practice, no published source`. */
   readonly source: string;
+  /** How sure we are of the rule (set by `letterHeightMinimum`). */
+  readonly status?: LetterHeightStatus;
 }
 
 /** One field of one market's label. */
@@ -61,6 +70,8 @@ export interface LabelField {
   readonly minimum: LetterHeightMinimum;
   /** Also carried on a small-item label (the rest goes on the outer pack and the public page). */
   readonly onSmallLabel: boolean;
+  /** What the maker or the renderer should know about the text, e.g. that `12M` is the PAO symbol's text. */
+  readonly note?: string;
 }
 
 /** A lot barcode's content (GS1 element string from the engine). */
@@ -86,3 +97,7 @@ export interface LabelAreas {
   /** Area of all the labels one product carries, in square inches (21 CFR 701.3(b)'s 12 sq in). */
   readonly labellingAreaSqIn: number;
 }
+
+export * from './label-minimums';
+export * from './label-content-builder';
+export * from './label-missing-elements';
