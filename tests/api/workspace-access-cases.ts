@@ -1,9 +1,15 @@
 import request from 'supertest';
+import { vi } from 'vitest';
 import { BUILT_IN_LABEL_STOCKS, ROLE_SETS, ROLES, type Role } from '@batchproof/shared';
 import { pdfBytes } from '../../fixtures/builders/document-files';
 import { aFormula, aDraft } from '../../fixtures/builders/formula-builder';
 import { aLot } from '../../fixtures/builders/lot-builder';
 import { aSheetLabelStock } from '../../fixtures/builders/label-stock-builder';
+import {
+  aLabelRun,
+  aProductIdentity,
+  aWorkshopLabelDetails,
+} from '../../fixtures/builders/label-run-builder';
 import { buildLot, buildMaterial, buildSupplier } from '../support/row-builders';
 import { aMaterial, aSupplier } from '../../fixtures/builders/material-builder';
 import type { BuiltWorkshop } from '../support/workshop-builder';
@@ -83,6 +89,37 @@ export function workspaceAccessCases(ctx: () => { h: ApiHarness; a: BuiltWorksho
     return res.body.id as string;
   };
   const builtInStock = BUILT_IN_LABEL_STOCKS[0]!.key;
+  /** A released formula of workshop A, printable: A has an address and the formula an identity. */
+  const printable = async () => {
+    const { h, a } = ctx();
+    await request(h.app)
+      .put('/api/workshop/label-details')
+      .set(bearer(a.members.owner))
+      .send(aWorkshopLabelDetails());
+    const id = await formula(true);
+    await request(h.app)
+      .put(`/api/formulas/${id}/identity`)
+      .set(bearer(a.members.owner))
+      .send(aProductIdentity());
+    return id;
+  };
+  /** A print run of workshop A whose PDF is made. */
+  const labelRun = async () => {
+    const { h, a } = ctx();
+    const res = await request(h.app)
+      .post('/api/label-runs')
+      .set(bearer(a.members.owner))
+      .send(aLabelRun(await printable()));
+    const id = res.body.id as string;
+    await vi.waitFor(
+      async () => {
+        const run = await request(h.app).get(`/api/label-runs/${id}`).set(bearer(a.members.owner));
+        if (run.body.status !== 'ready') throw new Error(`run ${id} is ${run.body.status}`);
+      },
+      { timeout: 30_000, interval: 50 },
+    );
+    return id;
+  };
   const csv = () => `tradeName,inci,category\nSea Salt ${Math.random()},Sodium Chloride,base\n`;
 
   const cases: {
@@ -398,6 +435,67 @@ export function workspaceAccessCases(ctx: () => { h: ApiHarness; a: BuiltWorksho
       route: 'DELETE /api/label-stocks/:id (built in)',
       prepare: async () => ({ method: 'delete', path: `/api/label-stocks/${builtInStock}` }),
       expected: write(409, 409),
+    },
+    {
+      route: 'GET /api/workshop/label-details',
+      prepare: async () => ({ method: 'get', path: '/api/workshop/label-details' }),
+      expected: expect(ROLES, 200, 200),
+    },
+    {
+      route: "PUT /api/workshop/label-details (the caller's own workshop)",
+      prepare: async () => ({
+        method: 'put',
+        path: '/api/workshop/label-details',
+        body: aWorkshopLabelDetails(),
+      }),
+      expected: expect(ROLE_SETS.ownerOnly, 200, 200),
+    },
+    {
+      route: 'GET /api/formulas/:id/identity',
+      prepare: async () => ({ method: 'get', path: `/api/formulas/${await formula()}/identity` }),
+      expected: read(200, 404),
+    },
+    {
+      route: 'PUT /api/formulas/:id/identity',
+      prepare: async () => ({
+        method: 'put',
+        path: `/api/formulas/${await formula()}/identity`,
+        body: aProductIdentity(),
+      }),
+      expected: write(200, 404),
+    },
+    {
+      // Production prints from batches, which do not exist yet.
+      route: 'POST /api/label-runs (a released formula of workshop A)',
+      prepare: async () => ({
+        method: 'post',
+        path: '/api/label-runs',
+        body: aLabelRun(await printable()),
+      }),
+      expected: write(201, 404),
+    },
+    {
+      route: 'GET /api/label-runs',
+      prepare: async () => ({ method: 'get', path: '/api/label-runs' }),
+      expected: expect(ROLES, 200, 200),
+    },
+    {
+      route: 'GET /api/label-runs/:id',
+      prepare: async () => ({ method: 'get', path: `/api/label-runs/${await labelRun()}` }),
+      expected: expect(ROLES, 200, 404),
+    },
+    {
+      route: 'GET /api/label-runs/:id/pdf',
+      prepare: async () => ({ method: 'get', path: `/api/label-runs/${await labelRun()}/pdf` }),
+      expected: expect(ROLES, 200, 404),
+    },
+    {
+      route: 'POST /api/label-runs/:id/withdraw',
+      prepare: async () => ({
+        method: 'post',
+        path: `/api/label-runs/${await labelRun()}/withdraw`,
+      }),
+      expected: expect(ROLE_SETS.ownerOnly, 200, 404),
     },
     // Archive and unarchive: owner and formulator, like every other write to these records.
     ...(

@@ -6,6 +6,11 @@ import { errorEnvelopeSchema } from '@batchproof/shared';
 import { aBathProfile, aDraft, aFormula } from '../../fixtures/builders/formula-builder';
 import { aLot } from '../../fixtures/builders/lot-builder';
 import { aSheetLabelStock } from '../../fixtures/builders/label-stock-builder';
+import {
+  aLabelRun,
+  aProductIdentity,
+  aWorkshopLabelDetails,
+} from '../../fixtures/builders/label-run-builder';
 import { aFragrance, aMaterial, aSupplier } from '../../fixtures/builders/material-builder';
 import { pdfBytes } from '../../fixtures/builders/document-files';
 import { startApiHarness, TEST_JWT_SECRET, type ApiHarness } from '../support/api-harness';
@@ -94,6 +99,23 @@ const formula = async () => {
 const released = async () => {
   const id = await formula();
   await json('post')(h.app, `/api/formulas/${id}/versions/1/release`, w.members.owner.token, {});
+  return id;
+};
+/** A released formula the workshop can print: an address, and the formula's identity. */
+const printable = async () => {
+  await json('put')(
+    h.app,
+    '/api/workshop/label-details',
+    w.members.owner.token,
+    aWorkshopLabelDetails(),
+  );
+  const id = await released();
+  await json('put')(
+    h.app,
+    `/api/formulas/${id}/identity`,
+    w.members.owner.token,
+    aProductIdentity(),
+  );
   return id;
 };
 /** A record of each archivable kind, made once per fuzzed route. */
@@ -374,6 +396,46 @@ const cases: FuzzCase[] = [
       valid: aSheetLabelStock({ shape: { kind: 'rounded-rectangle', cornerRadiusMm: 3 } }),
     }),
     send: json('put'),
+  },
+  {
+    route: 'PUT /api/workshop/label-details',
+    prepare: async () => ({ path: '/api/workshop/label-details', valid: aWorkshopLabelDetails() }),
+    send: json('put'),
+  },
+  {
+    route: 'PUT /api/formulas/:id/identity',
+    prepare: async () => ({
+      path: `/api/formulas/${await formula()}/identity`,
+      valid: aProductIdentity({ gtin: '09521234543213' }),
+    }),
+    send: json('put'),
+  },
+  {
+    route: 'POST /api/label-runs',
+    prepare: async () => ({
+      path: '/api/label-runs',
+      valid: aLabelRun(await printable(), {
+        markets: ['US', 'EU'],
+        expiresOn: '2027-01-31',
+        layout: 'panels',
+        placement: { warnings: 'front' },
+        overrideReason: 'Fuzzing',
+      }),
+    }),
+    send: json('post'),
+  },
+  {
+    route: 'POST /api/label-runs/:id/withdraw',
+    prepare: async () => {
+      const run = await json('post')(
+        h.app,
+        '/api/label-runs',
+        w.members.owner.token,
+        aLabelRun(await printable()),
+      );
+      return { path: `/api/label-runs/${run.body.id}/withdraw`, valid: {} };
+    },
+    send: json('post'),
   },
   // Archiving takes no body: whatever is sent, the record is archived or brought back.
   ...(['materials', 'suppliers', 'formulas', 'documents', 'label-stocks'] as const).flatMap(
