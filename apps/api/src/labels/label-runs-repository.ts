@@ -5,12 +5,16 @@ import { formulaVersions, labelRunPdfs, labelRuns } from '../db/schema';
 /** A run as inserted: everything but what the database fills in. */
 export type NewLabelRun = typeof labelRuns.$inferInsert;
 
+// Spelled out in full: in a single-table select Drizzle renders `${labelRuns.formulaId}` as a
+// bare "formula_id", which inside the subquery would mean the version's own column.
+const run = (column: string) => sql.raw(`"label_runs"."${column}"`);
+
 /** A newer version of the run's formula has been released since it was printed. */
-const outOfDate = sql<boolean>`exists (select 1 from ${formulaVersions}
-  where ${formulaVersions.workshopId} = ${labelRuns.workshopId}
-    and ${formulaVersions.formulaId} = ${labelRuns.formulaId}
-    and ${formulaVersions.state} = 'released'
-    and ${formulaVersions.number} > ${labelRuns.versionNumber})`.mapWith(Boolean);
+const outOfDate = sql<boolean>`exists (select 1 from ${formulaVersions} newer
+  where newer.workshop_id = ${run('workshop_id')}
+    and newer.formula_id = ${run('formula_id')}
+    and newer.state = 'released'
+    and newer.number > ${run('version_number')})`.mapWith(Boolean);
 
 /** Every column but the label contents (the record does not answer them), plus `outOfDate`. */
 const recordColumns = {
