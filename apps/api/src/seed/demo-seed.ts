@@ -4,6 +4,7 @@ import { demoMembers, demoWorkshop } from './hollowmere';
 import { BCRYPT_COST } from '../auth/auth-domain';
 import type { Database } from '../db/database';
 import { users, workshops } from '../db/schema';
+import { seedDemoLabels } from './demo-label-seed';
 import { seedDemoWorkspace } from './demo-workspace-seed';
 
 /**
@@ -31,6 +32,8 @@ export async function seedDemo(
   }
   // A demo database created before the workspace existed gets its materials and formulas once.
   await seedDemoWorkspace(db, existing[0]!.workshopId);
+  // A demo database seeded before labels existed gets its address and product identities once.
+  await seedDemoLabels(db, existing[0]!.workshopId);
   const owner = existing.find((u) => u.role === 'owner') ?? existing[0]!;
   if (await bcrypt.compare(password, owner.passwordHash)) return 'unchanged';
   const passwordHash = await bcrypt.hash(password, BCRYPT_COST);

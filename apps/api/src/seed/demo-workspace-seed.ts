@@ -7,6 +7,7 @@ import {
   materialCreateSchema,
   supplierCreateSchema,
 } from '@batchproof/shared';
+import { seedDemoLabels } from './demo-label-seed';
 import { demoFormulas } from './hollowmere-formulas';
 import {
   demoLots,
@@ -124,6 +125,7 @@ export async function seedDemoWorkspace(
         outcomes[f.name] = `draft (${blocks} blocking)`;
       }
     }
+    await seedDemoLabels(tx, workshopId);
     await mark({ formulas: outcomes });
     return 'seeded';
   });
