@@ -16,7 +16,8 @@ export const ROLE_DESCRIPTIONS: Record<Role, string> = {
     'Materials, suppliers, documents, lots and formulas: writes them, runs the checks and releases versions that pass.',
   production:
     'Records goods-in and corrects lots; reads formulas, materials and documents, and scales a formula to a batch size.',
-  assessor: 'Reads the reference lists the checks rest on. Nothing else is open to this role yet.',
+  assessor:
+    'Reads the reference lists the checks rest on, and the labels printed (print runs and their PDFs).',
   viewer:
     'Reads formulas, materials, documents, lots and members, and changes nothing. For bookkeepers and auditors.',
 };
