@@ -74,6 +74,15 @@ describe('POST /api/label-runs: who prints', () => {
     }
   });
 
+  it('a product without a GTIN prints too: its lot barcode is then an internal code', async () => {
+    const formulaId = await releasedFormula(h, w, { gtin: null });
+    const run = await printed(
+      w.members.owner,
+      aLabelRun(formulaId, { markets: ['US', 'EU'], expiresOn: '2027-06-30' }),
+    );
+    expect((await finished(run.id)).status).toBe('ready');
+  });
+
   it('production prints from a batch only: 403 without one, and a batch that matches nothing is 404', async () => {
     const formulaId = await releasedFormula(h, w);
     const res = await print(w.members.production, aLabelRun(formulaId));

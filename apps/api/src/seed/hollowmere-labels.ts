@@ -2,7 +2,8 @@ import type { ProductIdentityInput } from '@batchproof/shared';
 
 /**
  * What Hollowmere Bathworks' labels carry beyond the engine's output. Every name, address and
- * number here is invented; the US phone numbers are in the 555-01xx range kept for fiction.
+ * number here is invented; the US phone numbers are in the 555-01xx range kept for fiction, and
+ * the GTINs use the GS1 prefix 952, which GS1 keeps for demonstrations and examples (from memory).
  */
 export const demoWorkshopAddress = '14 Tannery Lane, Wrenfield, VT 05099, USA';
 
@@ -32,7 +33,7 @@ export const demoIdentities: Record<string, ProductIdentityInput> = {
   'Orchard Fog Fizzer': {
     productName: 'Orchard Fog Bath Fizzer',
     productCode: 'HB-OFF',
-    gtin: null,
+    gtin: '9524001000018',
     shelfLifeMonths: 12,
     periodAfterOpeningMonths: null,
     directions: bathDirections,
@@ -46,7 +47,7 @@ export const demoIdentities: Record<string, ProductIdentityInput> = {
   'Rainfall Foaming Fizzer': {
     productName: 'Rainfall Foaming Bath Fizzer',
     productCode: 'HB-RFF',
-    gtin: null,
+    gtin: '9524001000025',
     shelfLifeMonths: 12,
     periodAfterOpeningMonths: null,
     directions: 'Drop into running bath water for foam. Rinse the bath afterwards.',
@@ -60,7 +61,7 @@ export const demoIdentities: Record<string, ProductIdentityInput> = {
   'Midnight Bubble Bar': {
     productName: 'Midnight Bubble Bar',
     productCode: 'HB-MBB',
-    gtin: null,
+    gtin: '9524001000032',
     shelfLifeMonths: 12,
     periodAfterOpeningMonths: null,
     directions: 'Crumble under running bath water.',
@@ -74,7 +75,7 @@ export const demoIdentities: Record<string, ProductIdentityInput> = {
   'Lavender Oat Bath Salts': {
     productName: 'Lavender Oat Bath Salts',
     productCode: 'HB-LOS',
-    gtin: null,
+    gtin: '9524001000049',
     shelfLifeMonths: 24,
     periodAfterOpeningMonths: 12,
     directions: 'Dissolve two spoonfuls in a warm bath.',
@@ -88,7 +89,7 @@ export const demoIdentities: Record<string, ProductIdentityInput> = {
   'Everyday Body Lotion': {
     productName: 'Everyday Body Lotion',
     productCode: 'HB-EBL',
-    gtin: null,
+    gtin: '9524001000056',
     shelfLifeMonths: 18,
     periodAfterOpeningMonths: 6,
     directions: 'Smooth onto clean skin as often as you like.',
