@@ -7,6 +7,8 @@ await build({
     main: 'apps/api/src/main.ts',
     seed: 'apps/api/src/seed/seed-main.ts',
     'mail-server': 'apps/api/src/dev-mail/mail-server-main.ts',
+    // The worker thread that draws label PDFs; main.js starts it from beside itself.
+    'label-pdf-worker': 'apps/api/src/labels/pdf/label-pdf-worker.ts',
   },
   outdir: 'dist/api',
   bundle: true,

@@ -409,6 +409,14 @@ export function workspaceAccessCases(ctx: () => { h: ApiHarness; a: BuiltWorksho
       expected: read(200, 200),
     },
     {
+      route: 'GET /api/label-stocks/:id/calibration.pdf',
+      prepare: async () => ({
+        method: 'get',
+        path: `/api/label-stocks/${await labelStock()}/calibration.pdf`,
+      }),
+      expected: read(200, 404),
+    },
+    {
       route: 'PUT /api/label-stocks/:id',
       prepare: async () => ({
         method: 'put',

@@ -7,15 +7,17 @@ import {
 } from '@batchproof/shared';
 import type { Authenticator } from '../auth/authenticate';
 import { idempotentCreate } from '../core/idempotency';
+import { contentDisposition, safeFilename } from '../documents/download-name';
 import { parse } from '../core/validate';
 import type { Database } from '../db/database';
 import { labelStocks } from '../db/schema';
 import { archiveRoutes } from '../housekeeping/archiving';
 import * as domain from './label-stocks-domain';
+import { renderCalibrationPdf } from './pdf';
 
 /**
- * `/api/label-stocks`: members read the built-in stocks and the workshop's own; owner and
- * formulator write their own. A built-in stock's key in a write's path is refused with 409.
+ * `/api/label-stocks`: members read the built-in stocks and the workshop's own, and print any
+ * stock's calibration page (`/:id/calibration.pdf`); owner and formulator write their own. A built-in stock's key in a write's path is refused with 409.
  */
 export function labelStocksRouter(deps: { db: Database; authn: Authenticator }) {
   const { db, authn } = deps;
@@ -30,6 +32,20 @@ export function labelStocksRouter(deps: { db: Database; authn: Authenticator }) 
   });
   router.get('/:id', ...read, async (req, res) => {
     res.json(await domain.getLabelStock(db, req.user!, String(req.params.id)));
+  });
+  router.get('/:id/calibration.pdf', ...read, async (req, res) => {
+    const record = await domain.getLabelStock(db, req.user!, String(req.params.id));
+    const pdf = await renderCalibrationPdf(record.stock);
+    res.set({
+      'Content-Type': 'application/pdf',
+      'Content-Length': String(pdf.length),
+      'Content-Disposition': contentDisposition(
+        safeFilename(`${record.stock.name} calibration.pdf`, 'pdf'),
+        'inline',
+      ),
+      'X-Content-Type-Options': 'nosniff',
+    });
+    res.end(pdf);
   });
   router.post(
     '/',
