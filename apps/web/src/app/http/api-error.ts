@@ -1,4 +1,9 @@
-import type { ComplianceFinding, ErrorCode } from '@batchproof/shared';
+import type {
+  ComplianceFinding,
+  ErrorCode,
+  LabelFitProblem,
+  MissingLabelElementRecord,
+} from '@batchproof/shared';
 
 /** What the client knows about a failed request: the API's envelope, or why there was none. */
 export class ApiError extends Error {
@@ -11,6 +16,10 @@ export class ApiError extends Error {
     readonly fieldErrors: Record<string, string[]> = {},
     /** The engine's findings behind a refusal (`release_blocked`), as the envelope sends them. */
     readonly findings: ComplianceFinding[] = [],
+    /** What each market's label lacks (`label_incomplete`), as the envelope sends it. */
+    readonly missing: MissingLabelElementRecord[] = [],
+    /** Text that cannot fit at its legal minimum size (`label_does_not_fit`). */
+    readonly fitProblems: LabelFitProblem[] = [],
   ) {
     super(message);
     this.name = 'ApiError';

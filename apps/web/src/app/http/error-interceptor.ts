@@ -25,8 +25,8 @@ export function toApiError(err: unknown): ApiError {
   }
   const envelope = errorEnvelopeSchema.safeParse(err.error);
   if (envelope.success) {
-    const { code, message, fieldErrors, findings } = envelope.data.error;
-    return new ApiError(err.status, code, message, fieldErrors, findings);
+    const { code, message, fieldErrors, findings, missing, fitProblems } = envelope.data.error;
+    return new ApiError(err.status, code, message, fieldErrors, findings, missing, fitProblems);
   }
   return new ApiError(
     err.status,
