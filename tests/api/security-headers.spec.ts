@@ -56,7 +56,9 @@ describe('security headers', () => {
     expect(policy.get('default-src')).toEqual(["'self'"]);
     // No inline script of any kind, not even by hash or nonce: the build has none.
     expect(policy.get('script-src')).toEqual(["'self'"]);
-    expect(policy.get('object-src')).toEqual(["'none'"]);
+    // Plugin data and frames only from the page's own blob: URLs (the labels PDF preview).
+    expect(policy.get('object-src')).toEqual(['blob:']);
+    expect(policy.get('frame-src')).toEqual(["'self'", 'blob:']);
     expect(policy.get('frame-ancestors')).toEqual(["'none'"]);
     expect(policy.get('font-src')).toEqual(["'self'"]);
     expect(res.headers['x-content-type-options']).toBe('nosniff');

@@ -8,7 +8,8 @@ export const cspNonce = (res: Response): string => String(res.locals['cspNonce']
 /**
  * Security headers on every response, API and web app alike. The Content-Security-Policy allows
  * only what the production build needs: its own scripts (no inline script at all), its own
- * styles, fonts and images, and the `<style>` elements Angular adds at run time, which carry the
+ * styles, fonts and images, frames and plugin data from its own blob: URLs (the labels PDF preview),
+ * and the `<style>` elements Angular adds at run time, which carry the
  * response's nonce (`ngCspNonce` on the root element, see web-app.ts). Reset and invitation
  * tokens travel in URLs, hence `no-referrer`. HSTS and upgrade-insecure-requests only over HTTPS:
  * on a plain-HTTP workshop network they would break the app.
@@ -28,7 +29,11 @@ export function securityHeaders(options: { https: boolean }): RequestHandler[] {
         imgSrc: ["'self'", 'data:', 'blob:'],
         fontSrc: ["'self'"],
         connectSrc: ["'self'"],
-        objectSrc: ["'none'"],
+        // The print page shows a run's labels PDF in an <iframe> from a blob: URL (the PDF needs
+        // the bearer token, so it is fetched, not linked); Chromium's PDF viewer loads the blob
+        // as plugin data under the page's policy, so object-src allows blob: and nothing else.
+        frameSrc: ["'self'", 'blob:'],
+        objectSrc: ['blob:'],
         baseUri: ["'self'"],
         formAction: ["'self'"],
         frameAncestors: ["'none'"],
