@@ -21,6 +21,7 @@ export const routes: Routes = [
       { path: 'materials', loadChildren: () => import('./materials/materials.routes') },
       { path: 'suppliers', loadChildren: () => import('./suppliers/suppliers.routes') },
       { path: 'lots', loadChildren: () => import('./lots/lots.routes') },
+      { path: 'labels', loadChildren: () => import('./labels/labels.routes') },
       { path: 'reference', loadChildren: () => import('./reference-lists/reference-lists.routes') },
       {
         path: 'not-open',

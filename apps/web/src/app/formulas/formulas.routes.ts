@@ -24,6 +24,12 @@ const formulasRoutes: Routes = [
         loadComponent: () => import('./formula-compare/formula-compare-page'),
       },
       {
+        path: ':id/identity',
+        title: 'Product identity · Batchproof',
+        canDeactivate: [unsavedChangesGuard],
+        loadComponent: () => import('../labels/product-identity/product-identity-page'),
+      },
+      {
         path: ':id/versions/:n',
         title: 'Formula · Batchproof',
         canDeactivate: [unsavedChangesGuard],

@@ -29,7 +29,7 @@ const NAV: readonly NavEntry[] = [
   { label: 'Materials', icon: 'inventory_2', link: '/materials', roles: ROLE_SETS.members },
   { label: 'Lots', icon: 'move_to_inbox', link: '/lots', roles: ROLE_SETS.members },
   { label: 'Production', icon: 'scale' },
-  { label: 'Labels', icon: 'label' },
+  { label: 'Labels', icon: 'label', link: '/labels', roles: ROLE_SETS.members },
   { label: 'Trace', icon: 'route' },
   { label: 'Assessments', icon: 'fact_check' },
   { label: 'Reference lists', icon: 'menu_book', link: '/reference' },
