@@ -11,6 +11,7 @@ const benches = [
   'libs/shared/bench/evaluate-bench.ts',
   'apps/api/bench/list-bench.ts',
   'apps/api/bench/import-bench.ts',
+  'apps/api/bench/label-pdf-bench.ts',
   'scripts/initial-bundle-check.mjs',
 ];
 let failed = false;

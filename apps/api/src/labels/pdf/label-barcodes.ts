@@ -98,8 +98,29 @@ function options(kind: BarcodeKind, text: string): BwipOptions {
   };
 }
 
+/**
+ * Recent measures and images: a run is checked, then drawn, and often drawn again (a preview,
+ * then the print), always with the same few codes. Small, and emptied when full.
+ */
+const CACHE_SIZE = 64;
+const measures = new Map<string, BarcodeMeasure>();
+const images = new Map<string, Promise<Buffer>>();
+function remember<T>(cache: Map<string, T>, key: string, make: () => T): T {
+  let value = cache.get(key);
+  if (value === undefined) {
+    if (cache.size >= CACHE_SIZE) cache.clear();
+    value = make();
+    cache.set(key, value);
+  }
+  return value;
+}
+
 /** Measures a code from bwip-js's module matrix, synchronously (no image is drawn). */
 export function measureBarcode(kind: BarcodeKind, text: string): BarcodeMeasure {
+  return remember(measures, `${kind}\n${text}`, () => measure(kind, text));
+}
+
+function measure(kind: BarcodeKind, text: string): BarcodeMeasure {
   const s = SYMBOLOGIES[kind];
   const moduleMm = s.dotsPerModule * MM_PER_DOT;
   const [raw] = bwip.raw({ bcid: s.bcid, text });
@@ -125,5 +146,9 @@ export function measureBarcode(kind: BarcodeKind, text: string): BarcodeMeasure 
 
 /** Draws a code as a PNG; its pixel size is exactly the measured size at 600 dpi. */
 export function barcodePng(kind: BarcodeKind, text: string): Promise<Buffer> {
-  return bwip.toBuffer(options(kind, text));
+  const key = `${kind}\n${text}`;
+  const png = remember(images, key, () => bwip.toBuffer(options(kind, text)));
+  // A failed drawing is not kept.
+  png.catch(() => images.delete(key));
+  return png;
 }
