@@ -1,5 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { labelPositions, netQuantityStatement, type LabelBox } from '@batchproof/shared';
+import {
+  labelPositions,
+  netQuantityStatement,
+  type ComplianceMarket,
+  type LabelBox,
+  type LabelFieldKey,
+} from '@batchproof/shared';
 import {
   checkLabelFit,
   countLabels,
@@ -12,7 +18,6 @@ import {
   fizzerContent,
   fizzerElementString,
   fizzerEvaluation,
-  WARNING_MINIMUM,
 } from '../support/label-pdf-samples';
 import {
   decodeBarcodes,
@@ -26,14 +31,20 @@ import {
 const TOLERANCE_MM = 0.2;
 const PUBLIC_URL = 'https://batchproof.example/p/7bq2JxW9tLm4aRk8VfZ3nC';
 
-function request(overrides: Partial<LabelSheetRequest>): LabelSheetRequest {
+/** A request for the US and EU fizzer labels, their content built for the stock and layout. */
+function request(
+  overrides: Partial<LabelSheetRequest>,
+  markets: ComplianceMarket[] = ['US', 'EU'],
+): LabelSheetRequest {
+  const stock = overrides.stock ?? builtInStock('letter-4x2in-10');
+  const layout = overrides.layout ?? 'panels';
   return {
-    stock: builtInStock('letter-4x2in-10'),
+    stock,
     startPosition: 1,
-    layout: 'panels',
+    layout,
     placement: {},
     barcode: 'gs1-datamatrix',
-    contents: [fizzerContent('US'), fizzerContent('EU')],
+    contents: markets.map((m) => fizzerContent(m, stock, layout)),
     copies: 1,
     publicUrl: null,
     ...overrides,
@@ -52,8 +63,10 @@ function expectAt(shape: PdfShape | undefined, box: Omit<LabelBox, 'index' | 'ro
 }
 
 const normalise = (s: string) => s.replace(/\s+/g, ' ').trim();
-const us = fizzerContent('US');
-const textOf = (key: string, content = us) => content.fields.find((f) => f.key === key)!.text;
+const fieldOf = (req: LabelSheetRequest, market: ComplianceMarket, key: LabelFieldKey) =>
+  req.contents.find((c) => c.market === market)!.fields.find((f) => f.key === key)!;
+const textOf = (req: LabelSheetRequest, market: ComplianceMarket, key: LabelFieldKey) =>
+  normalise(fieldOf(req, market, key).text);
 
 describe('renderLabelSheet on a part-used 30-up Letter sheet (small-item labels)', () => {
   const stock = builtInStock('letter-2.625x1in-30');
@@ -84,7 +97,7 @@ describe('renderLabelSheet on a part-used 30-up Letter sheet (small-item labels)
     // Positions 7–9 are the US copies, 10–12 the EU ones.
     for (const [i, box] of boxes.entries()) {
       const market = i < 3 ? 'US' : 'EU';
-      expect(textIn(page!, box)).toContain(normalise(textOf('netQuantity', fizzerContent(market))));
+      expect(textIn(page!, box)).toContain(textOf(req, market, 'netQuantity'));
     }
     // Nothing printed before position 7.
     const first = labelPositions(stock)[0]!;
@@ -116,13 +129,12 @@ describe('renderLabelSheet with front and back labels on 4 × 2 in sheets (GS1 D
       LabelBox,
       LabelBox,
     ];
-    const eu = fizzerContent('EU');
 
-    expect(textIn(page, usFront)).toContain(normalise(textOf('netQuantity')));
+    expect(textIn(page, usFront)).toContain(textOf(req, 'US', 'netQuantity'));
     expect(textIn(page, usBack)).toContain(normalise(fizzerEvaluation.declarations.US!.text));
     expect(textIn(page, usBack)).toContain(normalise(fizzerEvaluation.warnings.US!.join(' ')));
     expect(textIn(page, euBack)).toContain(normalise(fizzerEvaluation.declarations.EU!.text));
-    expect(textIn(page, euFront)).toContain(normalise(textOf('netQuantity', eu)));
+    expect(textIn(page, euFront)).toContain(textOf(req, 'EU', 'netQuantity'));
 
     // 21 CFR 701.13: the net quantity's baseline sits in the bottom 30 % of the front label.
     const net = page.texts.filter(
@@ -138,7 +150,9 @@ describe('renderLabelSheet with front and back labels on 4 × 2 in sheets (GS1 D
     // size for Source Sans 3 Regular, 496/1000 for Bold).
     const warning = page.texts.find((t) => t.str.startsWith('Caution'));
     expect(warning).toBeDefined();
-    expect(warning!.sizeMm * 0.496).toBeGreaterThanOrEqual(WARNING_MINIMUM.mm - 1e-3);
+    const warnings = fieldOf(req, 'US', 'warnings');
+    expect(warnings.minimum).toMatchObject({ inches: 1 / 16, source: '21 CFR 740.2(a)' });
+    expect(warning!.sizeMm * 0.496).toBeGreaterThanOrEqual(warnings.minimum.mm - 1e-3);
     expect(warning!.fontName).toMatch(/\+SourceSans3-Bold$/);
     expect(page.texts.find((t) => t.str.startsWith('Ingredients'))?.fontName).toMatch(
       /\+SourceSans3-Regular$/,
@@ -192,7 +206,7 @@ describe('renderLabelSheet on a roll (GS1-128)', () => {
   const stock = builtInStock('roll-4x6in');
 
   it('prints one label per page the size of the label, with a GS1-128 code and its human-readable line', async () => {
-    const req = request({ stock, layout: 'single', barcode: 'gs1-128', contents: [us], copies: 2 });
+    const req = request({ stock, layout: 'single', barcode: 'gs1-128', copies: 2 }, ['US']);
     expect(checkLabelFit(req)).toEqual([]);
     expect(countLabels(req)).toEqual({ labelCount: 2, pageCount: 2 });
     const pages = await readPdf(await renderLabelSheet(req));
@@ -215,11 +229,7 @@ describe('renderLabelSheet on a roll (GS1-128)', () => {
 
 describe('checkLabelFit', () => {
   it('refuses US warnings on a 2 5/8 × 1 in label at their legal minimum of 1/16 in, naming the field and the label', async () => {
-    const req = request({
-      stock: builtInStock('letter-2.625x1in-30'),
-      layout: 'single',
-      contents: [us],
-    });
+    const req = request({ stock: builtInStock('letter-2.625x1in-30'), layout: 'single' }, ['US']);
     const problems = checkLabelFit(req);
     expect(problems).toContainEqual({
       market: 'US',
@@ -239,13 +249,12 @@ describe('checkLabelFit', () => {
     expect(
       netQuantityStatement({ amount: 113, unit: 'g', pdpAreaSqIn: 10 }).minimumTypeHeight?.inches,
     ).toBe(1 / 8);
-    const content = fizzerContent('US', { pdpAreaSqIn: 10 });
-    const req = request({
-      stock: builtInStock('roll-2x1in'),
-      layout: 'small',
-      contents: [content],
-      publicUrl: PUBLIC_URL,
+    const stock = builtInStock('roll-2x1in');
+    const content = fizzerContent('US', stock, 'small', {
+      areas: { pdpAreaSqIn: 10, labellingAreaSqIn: 10 },
     });
+    expect(content.fields.find((f) => f.key === 'netQuantity')?.minimum.inches).toBe(1 / 8);
+    const req = request({ stock, layout: 'small', contents: [content], publicUrl: PUBLIC_URL });
     expect(checkLabelFit(req)).toContainEqual(
       expect.objectContaining({
         field: 'netQuantity',
@@ -257,12 +266,10 @@ describe('checkLabelFit', () => {
   });
 
   it('refuses a GS1-128 code wider than the label', () => {
-    const req = request({
-      stock: builtInStock('letter-2.625x1in-30'),
-      layout: 'panels',
-      barcode: 'gs1-128',
-      contents: [fizzerContent('EU')],
-    });
+    const req = request(
+      { stock: builtInStock('letter-2.625x1in-30'), layout: 'panels', barcode: 'gs1-128' },
+      ['EU'],
+    );
     expect(checkLabelFit(req)).toContainEqual(
       expect.objectContaining({
         field: 'lot',

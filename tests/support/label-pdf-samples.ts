@@ -1,20 +1,20 @@
-// Label content for the PDF tests, built from real engine results: the foaming fizzer's
-// declaration and warnings from evaluateFormula, its net quantity from netQuantityStatement and its
-// lot barcode from gs1ElementString. Invented example data only.
+// Label content for the PDF tests and bench, built as the label runs build it: the foaming
+// fizzer's engine result (evaluateFormula) and product identity through the shared
+// buildLabelContent. Invented example data only.
 import {
   BUILT_IN_LABEL_STOCKS,
+  buildLabelContent,
   evaluateFormula,
   evaluationInputSchema,
   gs1ElementString,
-  netQuantityStatement,
+  labelAreas,
+  productIdentitySchema,
   type ComplianceMarket,
   type EvaluationResult,
   type LabelContent,
-  type LabelField,
-  type LabelFieldKey,
-  type LabelPanel,
+  type LabelContentInput,
+  type LabelLayout,
   type LabelStock,
-  type LetterHeightMinimum,
 } from '@batchproof/shared';
 
 /** A foaming bath fizzer with a fragrance: the US needs the 740.17 caution, the EU names Linalool. */
@@ -57,106 +57,55 @@ export const fizzerEvaluation: EvaluationResult = evaluateFormula(
   }),
 );
 
-const inch = (inches: number, label: string, source: string): LetterHeightMinimum => ({
-  mm: inches * 25.4,
-  inches,
-  label: `${label} in (${(inches * 25.4).toFixed(2)} mm)`,
-  source,
+/** The fizzer's product identity: complete for every market, GTIN with a valid check digit. */
+export const fizzerIdentity = productIdentitySchema.parse({
+  productName: 'Lavender Foaming Fizzer',
+  productCode: 'FIZ-LAV-01',
+  gtin: '09521234543213',
+  shelfLifeMonths: 18,
+  directions: 'Drop one fizzer into a warm bath.',
+  usAdverseEventContact: { phone: '1-800-555-0100' },
+  euResponsiblePerson: { name: 'Larchwood RP GmbH', address: 'Beispielweg 4, 10115 Berlin' },
+  ukResponsiblePerson: { name: 'Larchwood RP Ltd', address: '2 Mill Row, Leeds LS1 1AA' },
+  canadianFrench: {
+    productName: 'Pétillant moussant à la lavande',
+    warnings: 'Mise en garde : utiliser seulement selon le mode d’emploi.',
+    directions: 'Déposer un pétillant dans un bain chaud.',
+  },
 });
-/** 21 CFR 740.2(a): warnings at least 1/16 inch. */
-export const WARNING_MINIMUM = inch(1 / 16, '1/16', '21 CFR 740.2(a)');
-/** 21 CFR 701.3(b): the declaration at 1/32 inch on packages under 12 sq in of label surface. */
-export const SMALL_PACKAGE_DECLARATION_MINIMUM = inch(1 / 32, '1/32', '21 CFR 701.3(b)');
-/** No numeric EU minimum (Regulation (EC) No 1223/2009 Art. 19(1)): a house minimum of 1.2 mm. */
-const HOUSE_MINIMUM: LetterHeightMinimum = {
-  mm: 1.2,
-  inches: 1.2 / 25.4,
-  label: '1.2 mm',
-  source: 'common practice, no published source',
-};
 
-const GTIN = '09521234543213';
 export const LOT = 'RF-0412';
 export const EXPIRY = '2027-01-31';
 
 /** The element string the fizzer's lot barcode carries. */
-export const fizzerElementString = gs1ElementString({ gtin: GTIN, expiry: EXPIRY, lot: LOT });
-
-function field(
-  key: LabelFieldKey,
-  name: string,
-  text: string,
-  minimum: LetterHeightMinimum,
-  more: Partial<LabelField> = {},
-): LabelField {
-  const frontOnly = key === 'productName' || key === 'netQuantity';
-  return {
-    key,
-    name,
-    text,
-    bold: false,
-    allowedPanels: frontOnly ? ['front'] : ['front', 'back'],
-    defaultPanel: (frontOnly ? 'front' : 'back') as LabelPanel,
-    bottomThirtyPercent: key === 'netQuantity',
-    minimum,
-    onSmallLabel: ['productName', 'netQuantity', 'lot', 'business'].includes(key),
-    ...more,
-  };
-}
+export const fizzerElementString = gs1ElementString({
+  gtin: '09521234543213',
+  expiry: EXPIRY,
+  lot: LOT,
+});
 
 /**
- * The fizzer's label content for one market, as a renderer receives it. `pdpAreaSqIn` picks the
- * net quantity's minimum type height (21 CFR 701.13); `smallPackage` the 1/32 in declaration.
+ * The fizzer's label content for one market as the label runs build it (the shared
+ * `buildLabelContent`), with the minimum letter heights for the stock and layout it prints on.
  */
 export function fizzerContent(
   market: ComplianceMarket,
-  opts: { pdpAreaSqIn?: number; smallPackage?: boolean; withBarcode?: boolean } = {},
+  stock: LabelStock,
+  layout: LabelLayout,
+  overrides: Partial<LabelContentInput> = {},
 ): LabelContent {
-  const us = market === 'US';
-  const declaration = fizzerEvaluation.declarations[market]!.text;
-  const warnings = fizzerEvaluation.warnings[market] ?? [];
-  const net = netQuantityStatement({
-    amount: 113,
-    unit: 'g',
-    pdpAreaSqIn: opts.pdpAreaSqIn ?? 2.6,
-  });
-  const netMinimum = net.minimumTypeHeight
-    ? inch(net.minimumTypeHeight.inches, net.minimumTypeHeight.label, '21 CFR 701.13')
-    : HOUSE_MINIMUM;
-  const declarationMinimum = us
-    ? opts.smallPackage === false
-      ? inch(1 / 16, '1/16', '21 CFR 701.3(b)')
-      : SMALL_PACKAGE_DECLARATION_MINIMUM
-    : HOUSE_MINIMUM;
-  const fields: LabelField[] = [
-    field('productName', 'Product name', 'Lavender Foaming Fizzer', HOUSE_MINIMUM),
-    field('netQuantity', 'Net quantity', net.byMarket[market], us ? netMinimum : HOUSE_MINIMUM),
-    field('ingredients', 'Ingredients', declaration, declarationMinimum),
-  ];
-  if (warnings.length > 0) {
-    fields.push(
-      field('warnings', 'Warnings', warnings.join(' '), us ? WARNING_MINIMUM : HOUSE_MINIMUM, {
-        bold: true,
-      }),
-    );
-  }
-  fields.push(
-    field(
-      'business',
-      'Business',
-      'Hollowmere Bathworks, 12 Mill Lane, Hollowmere, VT 05001',
-      HOUSE_MINIMUM,
-    ),
-    field('lot', 'Lot', `Lot ${LOT} · Exp. 01/2027`, HOUSE_MINIMUM),
-  );
-  return {
+  return buildLabelContent({
     market,
-    fields,
-    barcode:
-      opts.withBarcode === false
-        ? null
-        : { hri: fizzerElementString.hri, warnings: fizzerElementString.warnings },
-  };
+    evaluation: fizzerEvaluation,
+    identity: fizzerIdentity,
+    workshop: { name: 'Hollowmere Bathworks', address: '12 Mill Lane, Hollowmere, VT 05001' },
+    netQuantity: { amount: 113, unit: 'g' },
+    lotCode: LOT,
+    expiresOn: EXPIRY,
+    madeOn: '2026-12-02',
+    areas: labelAreas(stock, layout),
+    ...overrides,
+  });
 }
 
 /** A built-in stock by key. */

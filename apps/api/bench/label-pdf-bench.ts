@@ -11,20 +11,23 @@ const SHEET_TARGET_MS = 300;
 const THOUSAND_TARGET_MS = 5_000;
 const RUNS = 5;
 
+const smallStock = builtInStock('letter-2.625x1in-30');
 const sheet: LabelSheetRequest = {
-  stock: builtInStock('letter-2.625x1in-30'),
+  stock: smallStock,
   startPosition: 1,
   layout: 'small',
   placement: {},
   barcode: 'gs1-datamatrix',
-  contents: [fizzerContent('US'), fizzerContent('EU')],
+  contents: [fizzerContent('US', smallStock, 'small'), fizzerContent('EU', smallStock, 'small')],
   copies: 15,
   publicUrl: 'https://batchproof.example/p/7bq2JxW9tLm4aRk8VfZ3nC',
 };
+const panelStock = builtInStock('letter-4x2in-10');
 const thousand: LabelSheetRequest = {
   ...sheet,
-  stock: builtInStock('letter-4x2in-10'),
+  stock: panelStock,
   layout: 'panels',
+  contents: [fizzerContent('US', panelStock, 'panels'), fizzerContent('EU', panelStock, 'panels')],
   copies: 250,
   publicUrl: null,
 };
