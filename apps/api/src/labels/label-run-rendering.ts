@@ -1,6 +1,6 @@
 import { runAfterAnswer } from '../core/after-answer';
 import type { Database } from '../db/database';
-import { renderLabelSheet } from './label-run-parts';
+import { renderLabelSheet } from './pdf';
 import { publicPagePath } from './label-runs-domain';
 import * as repo from './label-runs-repository';
 

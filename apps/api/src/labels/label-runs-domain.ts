@@ -1,6 +1,10 @@
 import { randomBytes } from 'node:crypto';
 import {
+  buildLabelContent,
   BUILT_IN_LABEL_STOCKS,
+  labelAreas,
+  missingLabelElements,
+  type LabelContentInput,
   LABEL_RUN_LIST_MAX,
   labelPositions,
   MAX_LABELS_PER_RUN,
@@ -19,15 +23,7 @@ import type { Database } from '../db/database';
 import { evaluateLines } from '../formulas/formula-evaluation';
 import * as formulasRepo from '../formulas/formulas-repository';
 import { findLabelDetails } from '../workshop/workshop-repository';
-import {
-  buildLabelContent,
-  checkLabelFit,
-  countLabels,
-  labelAreas,
-  missingLabelElements,
-  type LabelContentInput,
-  type LabelSheetRequest,
-} from './label-run-parts';
+import { checkLabelFit, countLabels, type LabelSheetRequest } from './pdf';
 import { findLabelStock } from './label-stocks-repository';
 import { findProductIdentity } from './product-identity-repository';
 import * as repo from './label-runs-repository';

@@ -3,6 +3,7 @@ import { isCalendarDay } from '../dates/calendar-day';
 import { complianceMarketSchema } from '../reference-data/reference-row';
 import { recordIdSchema, requiredText } from '../records/record-fields';
 import { GS1_CSET_82 } from '../compliance/gs1-element-string';
+import { MAX_VERSION_NUMBER } from '../formulas/formula-schema';
 import { LABEL_FIELD_KEYS } from './label-content';
 import { productIdentitySchema } from './product-identity';
 
@@ -58,7 +59,8 @@ export const labelRunCreateSchema = z
     version: z
       .number({ error: 'Choose a released version' })
       .int({ error: 'Choose a released version' })
-      .min(1, { error: 'Choose a released version' }),
+      .min(1, { error: 'Choose a released version' })
+      .max(MAX_VERSION_NUMBER, { error: 'Choose a released version' }),
     markets: z
       .array(complianceMarketSchema, { error: 'Choose at least one market' })
       .min(1, { error: 'Choose at least one market' })
