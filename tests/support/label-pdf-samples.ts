@@ -16,6 +16,7 @@ import {
   type LabelLayout,
   type LabelStock,
 } from '@batchproof/shared';
+import { aProductIdentity } from '../../fixtures/builders/label-run-builder';
 
 /** A foaming bath fizzer with a fragrance: the US needs the 740.17 caution, the EU names Linalool. */
 export const fizzerEvaluation: EvaluationResult = evaluateFormula(
@@ -58,21 +59,9 @@ export const fizzerEvaluation: EvaluationResult = evaluateFormula(
 );
 
 /** The fizzer's product identity: complete for every market, GTIN with a valid check digit. */
-export const fizzerIdentity = productIdentitySchema.parse({
-  productName: 'Lavender Foaming Fizzer',
-  productCode: 'FIZ-LAV-01',
-  gtin: '09521234543213',
-  shelfLifeMonths: 18,
-  directions: 'Drop one fizzer into a warm bath.',
-  usAdverseEventContact: { phone: '1-800-555-0100' },
-  euResponsiblePerson: { name: 'Larchwood RP GmbH', address: 'Beispielweg 4, 10115 Berlin' },
-  ukResponsiblePerson: { name: 'Larchwood RP Ltd', address: '2 Mill Row, Leeds LS1 1AA' },
-  canadianFrench: {
-    productName: 'Pétillant moussant à la lavande',
-    warnings: 'Mise en garde : utiliser seulement selon le mode d’emploi.',
-    directions: 'Déposer un pétillant dans un bain chaud.',
-  },
-});
+export const fizzerIdentity = productIdentitySchema.parse(
+  aProductIdentity({ productName: 'Lavender Foaming Fizzer', shelfLifeMonths: 18 }),
+);
 
 export const LOT = 'RF-0412';
 export const EXPIRY = '2027-01-31';
