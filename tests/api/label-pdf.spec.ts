@@ -227,6 +227,41 @@ describe('renderLabelSheet on a roll (GS1-128)', () => {
   });
 });
 
+describe('renderLabelSheet on oval labels', () => {
+  it('keeps every text run and the QR code inside each oval, drawn as an ellipse where the template puts it', async () => {
+    const stock = builtInStock('letter-3x2in-oval-8');
+    const req = request({ stock, layout: 'small', copies: 2, publicUrl: PUBLIC_URL });
+    expect(checkLabelFit(req)).toEqual([]);
+    const [page] = await readPdf(await renderLabelSheet(req));
+    const boxes = labelPositions(stock).slice(0, 4);
+    const outlines = labelOutlines(page!);
+    boxes.forEach((box, i) => expectAt(outlines[i], box));
+    for (const o of outlines) expect(o.curves).toBe(4);
+    const inside = (x: number, y: number) =>
+      boxes.some((b) => {
+        const [a, c] = [b.widthMm / 2, b.heightMm / 2];
+        return ((x - b.xMm - a) / a) ** 2 + ((y - b.yMm - c) / c) ** 2 <= 1;
+      });
+    for (const t of page!.texts) {
+      // The run's box: from its cap height above the baseline to its descenders below.
+      const top = t.baselineMm - 0.7 * t.sizeMm;
+      const bottom = t.baselineMm + 0.25 * t.sizeMm;
+      for (const [x, y] of [
+        [t.xMm, top],
+        [t.xMm + t.widthMm, top],
+        [t.xMm, bottom],
+        [t.xMm + t.widthMm, bottom],
+      ] as const) {
+        expect(inside(x, y), `${t.str} stays inside its oval`).toBe(true);
+      }
+    }
+    for (const image of page!.images) {
+      expect(inside(image.xMm, image.yMm)).toBe(true);
+      expect(inside(image.xMm + image.widthMm, image.yMm + image.heightMm)).toBe(true);
+    }
+  });
+});
+
 describe('checkLabelFit', () => {
   it('refuses US warnings on a 2 5/8 × 1 in label at their legal minimum of 1/16 in, naming the field and the label', async () => {
     const req = request({ stock: builtInStock('letter-2.625x1in-30'), layout: 'single' }, ['US']);

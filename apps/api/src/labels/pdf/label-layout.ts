@@ -239,6 +239,15 @@ function layoutAtScale(plan: LabelPlan, nameScale: number) {
   }
   if (barcode && bandHeight) {
     const top = (anchored.length ? bottom : safeBottom) - bandHeight;
+    if (top < safe.yMm - 1e-9 && lotField) {
+      problems.push(
+        problem(
+          plan,
+          lotField,
+          `The ${codeName(barcode.kind)} and the net quantity together are taller than the ${plan.labelName}.`,
+        ),
+      );
+    }
     barcode = { ...barcode, yMm: top };
     lines.push({
       field: 'barcodeText',
