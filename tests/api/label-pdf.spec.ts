@@ -54,6 +54,20 @@ function request(
 /** The white label outlines the renderer draws under each label, in drawing order. */
 const labelOutlines = (page: PdfPage) => page.shapes.filter((s) => s.fill === '#ffffff');
 
+/** Fails when a text run's box (cap height to descenders) overlaps a drawn code. */
+function expectNoTextOnCodes(page: PdfPage) {
+  for (const image of page.images) {
+    for (const t of page.texts) {
+      const overlaps =
+        t.xMm < image.xMm + image.widthMm &&
+        t.xMm + t.widthMm > image.xMm &&
+        t.baselineMm - 0.7 * t.sizeMm < image.yMm + image.heightMm &&
+        t.baselineMm + 0.25 * t.sizeMm > image.yMm;
+      expect(overlaps, `${t.str} clear of the code`).toBe(false);
+    }
+  }
+}
+
 function expectAt(shape: PdfShape | undefined, box: Omit<LabelBox, 'index' | 'row' | 'column'>) {
   expect(shape).toBeDefined();
   expect(Math.abs(shape!.xMm - box.xMm)).toBeLessThanOrEqual(TOLERANCE_MM);
@@ -103,6 +117,7 @@ describe('renderLabelSheet on a part-used 30-up Letter sheet (small-item labels)
     const first = labelPositions(stock)[0]!;
     expect(textIn(page!, { ...first, heightMm: boxes[0]!.yMm - first.yMm })).toBe('');
     expect(page!.images).toHaveLength(6);
+    expectNoTextOnCodes(page!);
     const [qr] = await decodeBarcodes(page!.images[0]!);
     expect(qr).toMatchObject({ format: 'QRCode', text: PUBLIC_URL });
     // Source Sans 3 is embedded, no other font is used.
@@ -170,6 +185,7 @@ describe('renderLabelSheet with front and back labels on 4 × 2 in sheets (GS1 D
       expect(inside, `${t.str} lies inside a label`).toBe(true);
     }
 
+    expectNoTextOnCodes(page);
     // One DataMatrix per market, on the back label, decoding to the engine's element string.
     expect(page.images).toHaveLength(2);
     for (const image of page.images) {
@@ -218,6 +234,7 @@ describe('renderLabelSheet on a roll (GS1-128)', () => {
       const all = textIn(page, { xMm: 0, yMm: 0, widthMm: 101.6, heightMm: 152.4 });
       expect(all).toContain(normalise(fizzerEvaluation.declarations.US!.text));
       expect(all).toContain(fizzerElementString.hri);
+      expectNoTextOnCodes(page);
       const [code] = await decodeBarcodes(page.images[0]!);
       expect(code).toMatchObject({
         format: 'Code128',
