@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import {
+  gs1ElementString,
   labelPositions,
   netQuantityStatement,
   type ComplianceMarket,
@@ -16,8 +17,10 @@ import {
 import {
   builtInStock,
   fizzerContent,
+  EXPIRY,
   fizzerElementString,
   fizzerEvaluation,
+  LOT,
 } from '../support/label-pdf-samples';
 import {
   decodeBarcodes,
@@ -194,6 +197,20 @@ describe('renderLabelSheet with front and back labels on 4 × 2 in sheets (GS1 D
       expect(code).toMatchObject({ format: 'DataMatrix', text: fizzerElementString.hri });
       expect(code!.text).toBe('(01)09521234543213(17)270131(10)RF-0412');
     }
+  });
+
+  it('draws the lot code of a product without a GTIN as an internal code: (17) expiry and (10) lot', async () => {
+    const req = request({ stock, copies: 1 }, ['EU']);
+    const element = gs1ElementString({ expiry: EXPIRY, lot: LOT });
+    expect(element.warnings[0]).toMatch(/internal code/);
+    req.contents = req.contents.map((c) => ({
+      ...c,
+      barcode: { hri: element.hri, warnings: element.warnings },
+    }));
+    expect(checkLabelFit(req)).toEqual([]);
+    const [page] = await readPdf(await renderLabelSheet(req));
+    const [code] = await decodeBarcodes(page!.images[0]!);
+    expect(code).toMatchObject({ format: 'DataMatrix', text: '(17)270131(10)RF-0412' });
   });
 
   it('reports progress in labels up to the total', async () => {

@@ -18,6 +18,7 @@ interface BwipOptions {
   paddingheight?: number;
   backgroundcolor?: string;
   parsefnc?: boolean;
+  dontlint?: boolean;
 }
 const bwip = require('bwip-js') as {
   raw(options: BwipOptions): { pixx?: number; pixy?: number; sbs?: number[] }[];
@@ -75,10 +76,23 @@ export interface BarcodeMeasure {
   readonly hri: boolean;
 }
 
+/**
+ * Without a GTIN the engine's element string is (17) or (15) with (10): GS1 asks for (01) beside
+ * them, so it is an internal code (the engine says so in its warnings), and bwip-js's GS1 checks
+ * would refuse to draw it. Those checks are left out only then; a string with (01) is checked.
+ */
+const lintOption = (kind: BarcodeKind, text: string) =>
+  kind !== 'qrcode' && !text.startsWith('(01)') ? { dontlint: true } : {};
+
 function options(kind: BarcodeKind, text: string): BwipOptions {
   const s = SYMBOLOGIES[kind];
   const unitsPerModule = s.matrix ? 2 : 1;
-  const base: BwipOptions = { bcid: s.bcid, text, backgroundcolor: 'FFFFFF' };
+  const base: BwipOptions = {
+    bcid: s.bcid,
+    text,
+    backgroundcolor: 'FFFFFF',
+    ...lintOption(kind, text),
+  };
   if (s.matrix) {
     return {
       ...base,
@@ -123,7 +137,7 @@ export function measureBarcode(kind: BarcodeKind, text: string): BarcodeMeasure 
 function measure(kind: BarcodeKind, text: string): BarcodeMeasure {
   const s = SYMBOLOGIES[kind];
   const moduleMm = s.dotsPerModule * MM_PER_DOT;
-  const [raw] = bwip.raw({ bcid: s.bcid, text });
+  const [raw] = bwip.raw({ bcid: s.bcid, text, ...lintOption(kind, text) });
   if (!raw) throw new Error(`bwip-js drew no ${kind} for ${text}`);
   if (s.matrix) {
     return {
