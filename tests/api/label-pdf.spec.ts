@@ -348,6 +348,20 @@ describe('checkLabelFit', () => {
     );
   });
 
+  it('answers a problem, not an error, for a code its symbology cannot hold', () => {
+    const req = request({
+      stock: builtInStock('letter-2.625x1in-30'),
+      layout: 'small',
+      publicUrl: `https://batchproof.example/p/${'x'.repeat(5000)}`,
+    });
+    expect(checkLabelFit(req)).toContainEqual(
+      expect.objectContaining({
+        field: 'lot',
+        message: expect.stringContaining('QR code cannot be drawn'),
+      }),
+    );
+  });
+
   it('refuses a field moved to a panel the rules do not allow', () => {
     const req = request({ placement: { netQuantity: 'back' } });
     expect(checkLabelFit(req)).toContainEqual(

@@ -176,8 +176,8 @@ function layoutAtScale(plan: LabelPlan, nameScale: number) {
   let barcode: PlacedBarcode | null = null;
   let square: RectMm | null = null;
   let bandHeight = 0;
-  if (plan.barcode) {
-    const m = measureBarcode(plan.barcode.kind, plan.barcode.text);
+  const m = plan.barcode && measureOrProblem(plan, plan.barcode, lotField, problems);
+  if (m) {
     const hriHeight = m.hri ? sizeMm(HRI_FONT_SIZE_PT) * LINE_PITCH_EM : 0;
     if (m.widthMm > safe.widthMm + 1e-9 || m.heightMm + hriHeight > safe.heightMm + 1e-9) {
       if (lotField) {
@@ -303,6 +303,31 @@ function measureHeight(block: Block, widthAt: WidthAt, bottomMm: number) {
     heightMm: guess.bottomMm - (guess.lines[0]?.topMm ?? guess.bottomMm),
     tooWide: guess.tooWide,
   };
+}
+
+/** The code's size, or null with a problem when bwip-js cannot draw the text in that symbology. */
+function measureOrProblem(
+  plan: LabelPlan,
+  code: { kind: BarcodeKind; text: string },
+  lotField: LabelField | undefined,
+  problems: LabelFitProblem[],
+) {
+  try {
+    return measureBarcode(code.kind, code.text);
+  } catch (error) {
+    // bwip-js throws an Error (`bwipp.…`) for text its symbology or GS1's rules cannot encode.
+    if (lotField) {
+      const reason = error instanceof Error ? error.message.replace(/^bwipp\.\w+#\d+: /, '') : '';
+      problems.push(
+        problem(
+          plan,
+          lotField,
+          `The ${codeName(code.kind)} cannot be drawn for ${code.text}: ${reason}`,
+        ),
+      );
+    }
+    return null;
+  }
 }
 
 function tooWideProblem(plan: LabelPlan, block: Block, word: string): LabelFitProblem {
