@@ -51,6 +51,10 @@ async function flushReads(page: Page, invitations?: unknown[]): Promise<TestRequ
   const req = page.backend.expectOne(isMembersList);
   req.flush({ items: MEMBERS });
   if (invitations) page.backend.expectOne('/api/members/invitations').flush({ items: invitations });
+  // The name and address on labels, read by their own section of the page.
+  for (const details of page.backend.match('/api/workshop/label-details')) {
+    details.flush({ name: 'Hollowmere Bathworks', address: '4 Mill Lane, Hollowmere' });
+  }
   await page.harness.fixture.whenStable();
   return req;
 }

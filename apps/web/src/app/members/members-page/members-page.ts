@@ -39,6 +39,7 @@ import {
   type RemoveMemberData,
 } from '../remove-member-dialog/remove-member-dialog';
 import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
+import { WorkshopLabelDetails } from '../workshop-label-details/workshop-label-details';
 
 /**
  * The workshop's members and their roles, sorted on the server. Owners also change roles,
@@ -60,6 +61,7 @@ import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
     MatTableModule,
     InvitationList,
     InviteForm,
+    WorkshopLabelDetails,
   ],
   templateUrl: './members-page.html',
   styleUrl: './members-page.scss',
