@@ -157,6 +157,15 @@ export async function flushMaterials(page: OpenedPage, materials: Material[]) {
   read.flush({ items: materials });
 }
 
+/** Answers the formula's print runs, which the page lists under Labels (none by default). */
+export async function flushLabelRuns(page: OpenedPage, items: unknown[] = []) {
+  const read = await nextRequest(
+    page.backend,
+    (r) => r.url === '/api/label-runs' && r.params.get('formulaId') === FORMULA_ID,
+  );
+  read.flush({ items });
+}
+
 /**
  * Opens `url` (version 1 of the test formula) on `routes` and answers its reads: the formula,
  * the version, then its lines' materials.
@@ -173,6 +182,7 @@ export async function openVersionOn(
   opened.backend.expectOne(`/api/formulas/${FORMULA_ID}`).flush(aFormula([version]));
   opened.backend.expectOne(`/api/formulas/${FORMULA_ID}/versions/1`).flush(version);
   await flushMaterials(opened, materials);
+  await flushLabelRuns(opened);
   await opened.harness.fixture.whenStable();
   return opened;
 }

@@ -22,6 +22,7 @@ import {
   BLUE_BLEND,
   CITRIC,
   fieldInput,
+  flushLabelRuns,
   flushMaterials,
   FORMULA_ID,
   nextRequest,
@@ -218,6 +219,7 @@ describe('FormulaPage', () => {
     page.backend.expectOne(`/api/formulas/${FORMULA_ID}`).flush(aFormula([draft]));
     page.backend.expectOne(`/api/formulas/${FORMULA_ID}/versions/1`).flush(draft);
     await flushMaterials(page, [BICARB, mica]);
+    await flushLabelRuns(page);
     await page.harness.fixture.whenStable();
     const us = () => text(page, '[aria-label="US · United States findings"]');
     expect(us()).not.toContain('Ultramarines');

@@ -9,7 +9,7 @@ import {
 } from '@angular/core';
 import { toObservable, toSignal } from '@angular/core/rxjs-interop';
 import { NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
-import { MatButton } from '@angular/material/button';
+import { MatAnchor, MatButton } from '@angular/material/button';
 import { MatError, MatFormField, MatLabel } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
@@ -34,6 +34,7 @@ import { FormulaLines } from './formula-lines';
 import { ProfileFields } from './profile-fields';
 import { VersionHistory } from './version-history';
 import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
+import { FormulaLabelRuns } from '../../labels/formula-label-runs';
 
 const sameIds = (a: readonly string[], b: readonly string[]) => a.join() === b.join();
 
@@ -58,8 +59,10 @@ const HELD_BACK: LiveEvaluation = {
   selector: 'bp-formula-page',
   imports: [
     FormulaHousekeeping,
+    FormulaLabelRuns,
     CalendarDayPipe,
     ReactiveFormsModule,
+    MatAnchor,
     MatButton,
     MatError,
     MatFormField,

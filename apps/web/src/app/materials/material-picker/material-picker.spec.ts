@@ -13,6 +13,7 @@ import {
   aVersion,
   BICARB,
   CITRIC,
+  flushLabelRuns,
   FORMULA_ID,
   openAs as openFormulaAs,
 } from '../../formulas/formulas-testing';
@@ -58,6 +59,7 @@ async function openFormula() {
   page.backend.expectOne(`/api/formulas/${FORMULA_ID}`).flush(aFormula([draft]));
   page.backend.expectOne(`/api/formulas/${FORMULA_ID}/versions/1`).flush(draft);
   await answerMaterialsRead(page.backend, [BICARB, CITRIC]);
+  await flushLabelRuns(page);
   await page.harness.fixture.whenStable();
   return page;
 }
