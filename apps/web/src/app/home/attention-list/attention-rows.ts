@@ -103,7 +103,11 @@ const KINDS: {
     heading: (n) =>
       `${plural(n, 'product has', 'products have')} labels printed from a version older than the released one`,
     clear: 'every product’s newest labels match its released version',
-    all: { link: '/formulas', label: 'Open the formulas' },
+    all: {
+      link: '/labels',
+      queryParams: { show: 'outOfDate' },
+      label: 'Open the out-of-date print runs',
+    },
     row: (i, f) => ({
       icon: 'label_off',
       link: `/formulas/${i.formulaId}`,
