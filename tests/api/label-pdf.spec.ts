@@ -296,6 +296,23 @@ describe('renderLabelSheet on oval labels', () => {
   });
 });
 
+describe('renderLabelSheet on 2 in circles (small-item labels)', () => {
+  it('moves the QR code to the top when that leaves the net quantity the whole bottom of the circle', async () => {
+    const stock = builtInStock('letter-2in-circle-20');
+    const req = request({ stock, layout: 'small', publicUrl: PUBLIC_URL }, ['US']);
+    expect(checkLabelFit(req)).toEqual([]);
+    const [page] = await readPdf(await renderLabelSheet(req));
+    const box = labelPositions(stock)[0]!;
+    const [qr] = page!.images;
+    expect(qr!.yMm + qr!.heightMm).toBeLessThan(box.yMm + box.heightMm / 2);
+    expectNoTextOnCodes(page!);
+    expect(textIn(page!, box)).toContain(textOf(req, 'US', 'netQuantity'));
+    // 21 CFR 701.13: in the bottom 30 % of the label.
+    const net = page!.texts.filter((t) => t.str.startsWith('Net'));
+    for (const t of net) expect(t.baselineMm).toBeGreaterThan(box.yMm + 0.7 * box.heightMm);
+  });
+});
+
 describe('checkLabelFit', () => {
   it('refuses US warnings on a 2 5/8 × 1 in label at their legal minimum of 1/16 in, naming the field and the label', async () => {
     const req = request({ stock: builtInStock('letter-2.625x1in-30'), layout: 'single' }, ['US']);

@@ -147,17 +147,26 @@ function problem(plan: LabelPlan, field: LabelField, message: string): LabelFitP
 
 const fmt = (mm: number) => `${Math.max(0, Math.round(mm * 10) / 10)} mm`;
 
-/** Lays out one label; `problems` is empty when everything fits at its minimum. */
+/**
+ * Lays out one label; `problems` is empty when everything fits at its minimum. The product name
+ * is tried larger first; a square code goes in the bottom-right corner, or the top-right one when
+ * that lets everything fit (on a principal panel the net quantity then has the whole bottom width).
+ */
 export function layoutLabel(plan: LabelPlan): { layout: LabelLayout; problems: LabelFitProblem[] } {
-  let last: { layout: LabelLayout; problems: LabelFitProblem[] } | undefined;
+  let first: { layout: LabelLayout; problems: LabelFitProblem[] } | undefined;
   for (const scale of NAME_SCALES) {
-    last = layoutAtScale(plan, scale);
-    if (last.problems.length === 0) return last;
+    for (const codeAtTop of [false, true]) {
+      if (codeAtTop && (!plan.barcode || plan.barcode.kind === 'gs1-128')) continue;
+      const attempt = layoutAtScale(plan, scale, codeAtTop);
+      if (attempt.problems.length === 0) return attempt;
+      // The problems reported are those of the usual layout at the minimum size.
+      if (scale === 1 && !codeAtTop) first = attempt;
+    }
   }
-  return last!;
+  return first!;
 }
 
-function layoutAtScale(plan: LabelPlan, nameScale: number) {
+function layoutAtScale(plan: LabelPlan, nameScale: number, codeAtTop: boolean) {
   const fonts = labelFontMetrics();
   const problems: LabelFitProblem[] = [];
   const lines: PlacedLine[] = [];
@@ -202,7 +211,7 @@ function layoutAtScale(plan: LabelPlan, nameScale: number) {
     } else {
       square = {
         xMm: safe.xMm + safe.widthMm - m.widthMm,
-        yMm: safeBottom - m.heightMm,
+        yMm: codeAtTop ? safe.yMm : safeBottom - m.heightMm,
         widthMm: m.widthMm,
         heightMm: m.heightMm,
       };
