@@ -1,0 +1,80 @@
+// Benchmark of the public ingredients page (/p/:token) under 50 concurrent readers, the way a QR
+// code on a market stall's labels is read. Prints one run of a released formula through the API,
+// then 50 clients each read the page one request after another; prints p50/p95 next to the target
+// and as a ratio to /api/health under the same load (so a busier machine moves both). Never
+// asserts. Run: npx tsx apps/api/bench/public-page-bench.ts
+import { aFormula } from '../../../fixtures/builders/formula-builder';
+import {
+  aLabelRun,
+  aProductIdentity,
+  aWorkshopLabelDetails,
+} from '../../../fixtures/builders/label-run-builder';
+import { buildMaterial } from '../../../tests/support/row-builders';
+import { startBench } from './bench-app';
+
+const READERS = 50;
+const READS_EACH = 40;
+/**
+ * With 50 requests in flight on 2 cores, queueing dominates: even `select 1` waits ~150 ms at p95.
+ * The targets: an absolute p95 and no more than 1.5× the trivial route under the same load.
+ */
+const TARGET_P95_MS = 250;
+const TARGET_RATIO = 1.5;
+
+const bench = await startBench('Public page bench', 20);
+const { db, w, base } = bench;
+const headers = {
+  Authorization: `Bearer ${w.members.owner.token}`,
+  'Content-Type': 'application/json',
+};
+
+async function call(method: string, route: string, body?: unknown) {
+  const res = await fetch(base + route, { method, headers, body: body && JSON.stringify(body) });
+  const text = await res.text();
+  if (!res.ok) throw new Error(`${method} ${route} → ${res.status} ${text.slice(0, 300)}`);
+  return JSON.parse(text) as Record<string, unknown>;
+}
+
+await call('PUT', '/api/workshop/label-details', aWorkshopLabelDetails());
+const material = await buildMaterial(db, w.id);
+const formula = await call(
+  'POST',
+  '/api/formulas',
+  aFormula([{ materialId: material.id, grams: 100 }]),
+);
+const formulaId = formula['id'] as string;
+await call('POST', `/api/formulas/${formulaId}/versions/1/release`, {});
+await call('PUT', `/api/formulas/${formulaId}/identity`, aProductIdentity());
+const run = await call('POST', '/api/label-runs', aLabelRun(formulaId));
+const page = (run['publicPage'] as { path: string }).path;
+
+/** Latencies of READERS clients each making READS_EACH requests one after another. */
+async function underLoad(route: string) {
+  const times: number[] = [];
+  await Promise.all(
+    Array.from({ length: READERS }, async () => {
+      for (let i = 0; i < READS_EACH; i++) {
+        const start = performance.now();
+        const res = await fetch(base + route);
+        await res.text();
+        if (res.status !== 200) throw new Error(`${route} answered ${res.status}`);
+        times.push(performance.now() - start);
+      }
+    }),
+  );
+  times.sort((a, b) => a - b);
+  const p = (q: number) => times[Math.min(times.length - 1, Math.ceil(q * times.length) - 1)]!;
+  return { p50: p(0.5), p95: p(0.95) };
+}
+
+const ms = (n: number) => `${n.toFixed(1).padStart(6)} ms`;
+await underLoad(page); // warm-up
+const health = await underLoad('/api/health');
+const publicPage = await underLoad(page);
+console.log(
+  `${`GET /api/health, ${READERS} concurrent readers`.padEnd(56)} p50 ${ms(health.p50)}  p95 ${ms(health.p95)}`,
+);
+console.log(
+  `${`GET /p/:token, ${READERS} concurrent readers`.padEnd(56)} p50 ${ms(publicPage.p50)}  p95 ${ms(publicPage.p95)} = ${(publicPage.p95 / health.p95).toFixed(1)}× health  (target < ${TARGET_P95_MS} ms and ≤ ${TARGET_RATIO}× health: ${publicPage.p95 < TARGET_P95_MS && publicPage.p95 <= TARGET_RATIO * health.p95 ? 'within' : 'OVER'})`,
+);
+await bench.close();
