@@ -1,6 +1,6 @@
 import * as z from 'zod';
 import { complianceFindingSchema } from '../compliance/evaluation-result-schema';
-import { labelFitProblemSchema, missingLabelElementSchema } from '../labels/label-run-api';
+import { labelFitProblemSchema, missingLabelElementSchema } from '../labels/label-refusal';
 
 /** Machine-readable error codes the API sends inside the error envelope. */
 export const errorCodeSchema = z.enum([

@@ -5,7 +5,15 @@ import { recordIdSchema, requiredText } from '../records/record-fields';
 import { GS1_CSET_82 } from '../compliance/gs1-element-string';
 import { MAX_VERSION_NUMBER } from '../formulas/formula-schema';
 import { LABEL_FIELD_KEYS } from './label-content';
+import { missingLabelElementSchema } from './label-refusal';
 import { productIdentitySchema } from './product-identity';
+
+export {
+  labelFitProblemSchema,
+  missingLabelElementSchema,
+  type LabelFitProblem,
+  type MissingLabelElementRecord,
+} from './label-refusal';
 
 /**
  * The label-run routes' contract: `POST /api/label-runs` records a print run of a released formula
@@ -113,29 +121,6 @@ export const labelRunCreateSchema = z
   });
 export type LabelRunCreate = z.input<typeof labelRunCreateSchema>;
 export type LabelRunCreateParsed = z.output<typeof labelRunCreateSchema>;
-
-/** One element a market's label lacks, as the 409 `label_incomplete` lists them. */
-export const missingLabelElementSchema = z.object({
-  market: complianceMarketSchema,
-  /** Dotted path of the field to fill in, e.g. `identity.euResponsiblePerson.address`, `workshop.address`. */
-  field: z.string(),
-  item: z.string(),
-  source: z.string(),
-});
-export type MissingLabelElementRecord = z.infer<typeof missingLabelElementSchema>;
-
-/** A field that cannot fit at its legal minimum letter height (422 `label_does_not_fit`). */
-export const labelFitProblemSchema = z.object({
-  market: complianceMarketSchema,
-  /** The label in the maker's words: "front label (66.7 × 25.4 mm)". */
-  label: z.string(),
-  field: labelFieldKeySchema,
-  fieldName: z.string(),
-  message: z.string(),
-  minimumMm: z.number(),
-  source: z.string(),
-});
-export type LabelFitProblem = z.infer<typeof labelFitProblemSchema>;
 
 /** Progress of a run's PDF. */
 export const labelRunStatusSchema = z.enum(['rendering', 'ready', 'failed']);
