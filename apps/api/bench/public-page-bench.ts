@@ -3,12 +3,7 @@
 // then 50 clients each read the page one request after another; prints p50/p95 next to the target
 // and as a ratio to /api/health under the same load (so a busier machine moves both). Never
 // asserts. Run: npx tsx apps/api/bench/public-page-bench.ts
-import { aFormula } from '../../../fixtures/builders/formula-builder';
-import {
-  aLabelRun,
-  aProductIdentity,
-  aWorkshopLabelDetails,
-} from '../../../fixtures/builders/label-run-builder';
+import type { FormulaCreate, LabelRunCreate, ProductIdentityInput } from '@batchproof/shared';
 import { buildMaterial } from '../../../tests/support/row-builders';
 import { startBench } from './bench-app';
 
@@ -35,17 +30,51 @@ async function call(method: string, route: string, body?: unknown) {
   return JSON.parse(text) as Record<string, unknown>;
 }
 
-await call('PUT', '/api/workshop/label-details', aWorkshopLabelDetails());
+// A US-only product of one material: the page's size does not depend on the formula's length.
+await call('PUT', '/api/workshop/label-details', {
+  name: 'Bench Bathworks',
+  address: '1 Bench Row, Wrenfield, NY 10001, USA',
+});
 const material = await buildMaterial(db, w.id);
-const formula = await call(
-  'POST',
-  '/api/formulas',
-  aFormula([{ materialId: material.id, grams: 100 }]),
-);
+const formulaBody: FormulaCreate = {
+  name: 'Bench Fizzer',
+  productType: 'fizzer',
+  notes: null,
+  draft: {
+    lines: [{ materialId: material.id, grams: 100 }],
+    notes: null,
+    profile: {
+      use: 'rinse-off',
+      contact: { mucousMembranes: true, eyeArea: false, lips: false },
+      inBath: true,
+      adultsOnly: false,
+      ifraCategory: '9',
+      markets: ['US'],
+      unitMassGrams: 150,
+      netQuantity: { amount: 150, unit: 'g' },
+    },
+  },
+};
+const identity: ProductIdentityInput = {
+  productName: 'Bench Fizzer',
+  productCode: 'BF-01',
+  shelfLifeMonths: 12,
+  directions: 'Drop into a warm bath.',
+  usAdverseEventContact: { phone: '1-800-555-0199' },
+};
+const formula = await call('POST', '/api/formulas', formulaBody);
 const formulaId = formula['id'] as string;
 await call('POST', `/api/formulas/${formulaId}/versions/1/release`, {});
-await call('PUT', `/api/formulas/${formulaId}/identity`, aProductIdentity());
-const run = await call('POST', '/api/label-runs', aLabelRun(formulaId));
+await call('PUT', `/api/formulas/${formulaId}/identity`, identity);
+const runBody: LabelRunCreate = {
+  formulaId,
+  version: 1,
+  markets: ['US'],
+  stockId: 'letter-4x3.333in-6',
+  copies: 1,
+  lotCode: 'BENCH-1',
+};
+const run = await call('POST', '/api/label-runs', runBody);
 const page = (run['publicPage'] as { path: string }).path;
 
 /** Latencies of READERS clients each making READS_EACH requests one after another. */
