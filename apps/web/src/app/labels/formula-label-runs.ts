@@ -34,6 +34,7 @@ import { LabelRunsApi } from './label-runs-api';
         [runs]="runs.hasValue() ? runs.value() : []"
         label="Print runs of this formula"
         empty="No labels printed from this formula yet."
+        (changed)="runs.reload()"
       />
     </bp-list-card>
   `,

@@ -1,12 +1,21 @@
 import { DecimalPipe } from '@angular/common';
-import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
-import { MatButton } from '@angular/material/button';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  computed,
+  inject,
+  input,
+  output,
+  signal,
+} from '@angular/core';
+import { MatAnchor, MatButton } from '@angular/material/button';
 import { MatIcon } from '@angular/material/icon';
 import { MatSort, MatSortHeader, type Sort } from '@angular/material/sort';
 import { MatTableModule } from '@angular/material/table';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { RouterLink } from '@angular/router';
-import type { LabelRunRecord } from '@batchproof/shared';
+import { type LabelRunRecord, ROLE_SETS } from '@batchproof/shared';
+import { Session } from '../auth/session';
 import { CalendarDayPipe } from '../dates/calendar-day-pipe';
 import { saveFile } from '../documents/save-file';
 import { messageOf } from '../http/api-error';
@@ -44,6 +53,7 @@ const compare: Record<SortKey, (a: LabelRunRecord, b: LabelRunRecord) => number>
   imports: [
     CalendarDayPipe,
     DecimalPipe,
+    MatAnchor,
     MatButton,
     MatIcon,
     MatSort,
@@ -141,6 +151,23 @@ const compare: Record<SortKey, (a: LabelRunRecord, b: LabelRunRecord) => number>
             <a mat-button [href]="r.publicPage.path" target="_blank" rel="noopener">
               <mat-icon>public</mat-icon>Public page
             </a>
+            @if (isOwner()) {
+              <button
+                mat-button
+                type="button"
+                [disabled]="busy()"
+                [attr.aria-label]="
+                  'Withdraw the public page of ' + r.formulaName + ', lot ' + (r.lotCode ?? 'none')
+                "
+                (click)="withdraw(r)"
+              >
+                <mat-icon>public_off</mat-icon>Withdraw
+              </button>
+            }
+          } @else if (r.publicPage?.withdrawnAt) {
+            <span class="flag"
+              ><mat-icon aria-hidden="true">public_off</mat-icon>Page withdrawn</span
+            >
           }
         </td>
       </ng-container>
@@ -192,7 +219,12 @@ export class LabelRunTable {
   /** What the table says when there is no run. */
   readonly empty = input('No labels printed yet.');
 
+  /** Emits after a run changed here (its public page withdrawn), so the list can be read again. */
+  readonly changed = output<void>();
+
   private readonly api = inject(LabelRunsApi);
+  private readonly session = inject(Session);
+  protected readonly isOwner = computed(() => this.session.hasRole(ROLE_SETS.ownerOnly));
   private readonly snackBar = inject(MatSnackBar);
   protected readonly status = runStatus;
   protected readonly busy = signal(false);
@@ -205,6 +237,24 @@ export class LabelRunTable {
     const sign = direction === 'asc' ? 1 : -1;
     return [...this.runs()].sort((a, b) => sign * by(a, b));
   });
+
+  /** Takes the run's public ingredients page down: its QR code then leads to a plain 404. */
+  protected withdraw(run: LabelRunRecord): void {
+    this.busy.set(true);
+    this.api.withdraw(run.id).subscribe({
+      next: () => {
+        this.busy.set(false);
+        this.snackBar.open('The public page is withdrawn; its QR code now leads nowhere.', 'OK', {
+          duration: 6000,
+        });
+        this.changed.emit();
+      },
+      error: (err: unknown) => {
+        this.busy.set(false);
+        this.snackBar.open(messageOf(err), 'OK', { duration: 8000 });
+      },
+    });
+  }
 
   protected download(run: LabelRunRecord): void {
     this.busy.set(true);

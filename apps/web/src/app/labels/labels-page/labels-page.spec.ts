@@ -123,4 +123,60 @@ describe('LabelsPage', () => {
       await page.loader.getAllHarnesses(MatButtonHarness.with({ text: /Calibration page/ })),
     ).toHaveLength(2);
   });
+
+  it('lets the owner withdraw a public page, then reads the runs again', async () => {
+    const page = await openAs(
+      'owner',
+      [{ path: 'labels', component: LabelsPage }],
+      '/labels',
+      LabelsPage,
+    );
+    const published = aRun({ publicPage: { path: '/p/tok3n', withdrawnAt: null } });
+    (await nextRequest(page.backend, (r) => r.url === '/api/label-runs')).flush({
+      items: [published],
+    });
+    (await nextRequest(page.backend, (r) => r.url === '/api/label-stocks')).flush({ items: [] });
+    await page.harness.fixture.whenStable();
+
+    const withdraw = await page.loader.getHarness(MatButtonHarness.with({ text: /Withdraw/ }));
+    await withdraw.click();
+    const req = await nextRequest(
+      page.backend,
+      (r) => r.url === `/api/label-runs/${published.id}/withdraw`,
+    );
+    expect(req.request.method).toBe('POST');
+    req.flush({
+      ...published,
+      publicPage: { path: '/p/tok3n', withdrawnAt: '2026-11-22T10:00:00.000Z' },
+    });
+    const again = await nextRequest(page.backend, (r) => r.url === '/api/label-runs');
+    again.flush({
+      items: [
+        { ...published, publicPage: { path: '/p/tok3n', withdrawnAt: '2026-11-22T10:00:00.000Z' } },
+      ],
+    });
+    await page.harness.fixture.whenStable();
+    expect(page.el.textContent).toContain('Page withdrawn');
+    expect(
+      await page.loader.getAllHarnesses(MatButtonHarness.with({ text: /Withdraw/ })),
+    ).toHaveLength(0);
+  });
+
+  it('offers a formulator no withdrawal of a public page', async () => {
+    const page = await openAs(
+      'formulator',
+      [{ path: 'labels', component: LabelsPage }],
+      '/labels',
+      LabelsPage,
+    );
+    (await nextRequest(page.backend, (r) => r.url === '/api/label-runs')).flush({
+      items: [aRun({ publicPage: { path: '/p/tok3n', withdrawnAt: null } })],
+    });
+    (await nextRequest(page.backend, (r) => r.url === '/api/label-stocks')).flush({ items: [] });
+    await page.harness.fixture.whenStable();
+    expect(page.el.querySelector('a[href="/p/tok3n"]')).not.toBeNull();
+    expect(
+      await page.loader.getAllHarnesses(MatButtonHarness.with({ text: /Withdraw/ })),
+    ).toHaveLength(0);
+  });
 });
