@@ -4,6 +4,7 @@ import { Router, type Route, type Routes } from '@angular/router';
 import { vi } from 'vitest';
 import formulasRoutes from '../formulas/formulas.routes';
 import lotsRoutes from '../lots/lots.routes';
+import labelsRoutes from '../labels/labels.routes';
 import materialsRoutes from '../materials/materials.routes';
 import { openAs } from '../formulas/formulas-testing';
 import suppliersRoutes from '../suppliers/suppliers.routes';
@@ -101,16 +102,17 @@ describe('unsaved changes', () => {
     expect(unload()).toBe(false);
   });
 
-  it('guards every page with a form: the formula editor, materials, suppliers and lots', () => {
+  it('guards every page with a form: the formula editor and product identity, materials, suppliers, lots and label stocks', () => {
     const guarded = (routes: Routes): string[] =>
       routes.flatMap((r: Route) => [
         ...(r.canDeactivate?.includes(unsavedChangesGuard) ? [r.path ?? ''] : []),
         ...guarded(r.children ?? []),
       ]);
 
-    expect(guarded(formulasRoutes)).toEqual([':id/versions/:n', ':id']);
+    expect(guarded(formulasRoutes)).toEqual([':id/identity', ':id/versions/:n', ':id']);
     expect(guarded(materialsRoutes)).toEqual(['new', ':id']);
     expect(guarded(suppliersRoutes)).toEqual(['new', ':id']);
     expect(guarded(lotsRoutes)).toEqual(['new', ':id']);
+    expect(guarded(labelsRoutes)).toEqual(['stocks/new', 'stocks/:id']);
   });
 });
