@@ -1,5 +1,5 @@
 import { MatButtonHarness } from '@angular/material/button/testing';
-import { MatButtonToggleHarness } from '@angular/material/button-toggle/testing';
+import { MatRadioButtonHarness } from '@angular/material/radio/testing';
 import { MatInputHarness } from '@angular/material/input/testing';
 import { MatSelectHarness } from '@angular/material/select/testing';
 import type { HttpRequest } from '@angular/common/http';
@@ -285,7 +285,7 @@ describe('PrintPage', () => {
   it("asks for the small item's confirmation and says what the outer pack must still carry", async () => {
     const page = await openPrint();
     const small = await page.loader.getHarness(
-      MatButtonToggleHarness.with({ text: 'Small item with QR code' }),
+      MatRadioButtonHarness.with({ label: 'Small item with QR code' }),
     );
     await small.check();
     expect(squash(page.el.querySelector('.small-note')!.textContent)).toContain(

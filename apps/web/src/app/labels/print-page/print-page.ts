@@ -12,7 +12,7 @@ import {
 import { toObservable, toSignal } from '@angular/core/rxjs-interop';
 import { NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
-import { MatButtonToggle, MatButtonToggleGroup } from '@angular/material/button-toggle';
+import { MatRadioButton, MatRadioGroup } from '@angular/material/radio';
 import { MatCheckbox } from '@angular/material/checkbox';
 import { MatDatepickerModule } from '@angular/material/datepicker';
 import { MatError, MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
@@ -57,8 +57,8 @@ const MARKET_NAMES = new Map(MARKETS.map((m) => [m.code, m.name]));
     ReactiveFormsModule,
     RouterLink,
     MatButton,
-    MatButtonToggle,
-    MatButtonToggleGroup,
+    MatRadioButton,
+    MatRadioGroup,
     MatCheckbox,
     MatDatepickerModule,
     MatError,
