@@ -121,8 +121,11 @@ describe('renderLabelSheet on a part-used 30-up Letter sheet (small-item labels)
     expect(textIn(page!, { ...first, heightMm: boxes[0]!.yMm - first.yMm })).toBe('');
     expect(page!.images).toHaveLength(6);
     expectNoTextOnCodes(page!);
-    const [qr] = await decodeBarcodes(page!.images[0]!);
-    expect(qr).toMatchObject({ format: 'QRCode', text: PUBLIC_URL });
+    // Each label's QR code opens the public page on its own market's label.
+    const [usQr] = await decodeBarcodes(page!.images[0]!);
+    expect(usQr).toMatchObject({ format: 'QRCode', text: `${PUBLIC_URL}?market=US` });
+    const [euQr] = await decodeBarcodes(page!.images[5]!);
+    expect(euQr).toMatchObject({ format: 'QRCode', text: `${PUBLIC_URL}?market=EU` });
     // Source Sans 3 is embedded, no other font is used.
     expect(page!.fonts.length).toBeGreaterThan(0);
     for (const t of page!.texts)

@@ -25,8 +25,18 @@ export interface LabelSheetRequest {
   /** One per market, in order; each printed `copies` times (panels: 2 labels each). */
   contents: LabelContent[];
   copies: number;
-  /** Absolute URL of the public page; the QR code of `small` labels. */
+  /**
+   * Absolute URL of the public page; the QR code of `small` labels leads to it with the label's
+   * market (`?market=EU`), so a buyer sees the declaration of the label in their hand.
+   */
   publicUrl: string | null;
+}
+
+/** The public page's address for one market's label. */
+export function marketPageUrl(publicUrl: string, market: LabelContent['market']): string {
+  const url = new URL(publicUrl);
+  url.searchParams.set('market', market);
+  return url.toString();
 }
 
 /** One market's labels for one product, laid out once and repeated for every copy. */
@@ -67,7 +77,9 @@ function plansFor(
           labelName: `small-item label (${dims(stock)})`,
           principal: true,
           fields: content.fields.filter((f) => f.onSmallLabel),
-          barcode: req.publicUrl ? { kind: 'qrcode', text: req.publicUrl } : null,
+          barcode: req.publicUrl
+            ? { kind: 'qrcode', text: marketPageUrl(req.publicUrl, content.market) }
+            : null,
         },
       ],
       problems: [],
