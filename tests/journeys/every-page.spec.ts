@@ -1,26 +1,6 @@
-import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { DEMO_PASSWORD, openFromNav, signIn } from './demo-steps';
 import { type JourneyHarness, startJourneyHarness } from './journey-harness';
-
-const DEMO_PASSWORD = 'demo-password-for-journeys';
-
-/** Signs in through the sign-in page and waits for the demo workshop's home page. */
-async function signIn(h: JourneyHarness, page: Page, email: string): Promise<void> {
-  await page.goto('/sign-in');
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(DEMO_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL(`${h.baseUrl}/`);
-  await page.getByRole('heading', { name: 'Hollowmere Bathworks' }).waitFor();
-}
-
-/** Opens a page from the main navigation (through the menu button when it is an overlay). */
-async function openFromNav(page: Page, name: string): Promise<void> {
-  await page
-    .getByRole('navigation', { name: 'Main' })
-    .getByRole('link', { name, exact: true })
-    .click();
-}
 
 describe('journey: every page of the demo workshop at phone, tablet and laptop widths', () => {
   let h: JourneyHarness;
@@ -123,6 +103,23 @@ describe('journey: every page of the demo workshop at phone, tablet and laptop w
     await page.goto(`${page.url()}/compare?from=1&to=1`.replace('/versions/1/compare', '/compare'));
     await page.getByRole('table', { name: 'Line changes' }).waitFor();
     await h.screenshot(page, 'every-17-compare');
+
+    // Labels: print runs and stocks, a new stock, a released formula's product identity.
+    await openFromNav(page, 'Labels');
+    await page.getByRole('heading', { name: 'Label stocks' }).waitFor();
+    await page.getByText('US Letter · 2⅝ × 1 in · 30 per sheet').first().waitFor();
+    await h.screenshot(page, 'every-17a-labels');
+    await page.goto('/labels/stocks/new');
+    await page.getByRole('heading', { name: 'New label stock' }).waitFor();
+    await h.screenshot(page, 'every-17b-label-stock-new');
+    await openFromNav(page, 'Formulas');
+    await page.getByRole('link', { name: 'Rainfall Foaming Fizzer' }).click();
+    await page.getByRole('link', { name: 'Product identity' }).click();
+    await page.getByRole('heading', { name: 'Product identity' }).waitFor();
+    expect(await page.getByLabel('Product name', { exact: true }).inputValue()).toBe(
+      'Rainfall Foaming Bath Fizzer',
+    );
+    await h.screenshot(page, 'every-17c-product-identity');
 
     // Members and the reference lists.
     await openFromNav(page, 'Workshop');
