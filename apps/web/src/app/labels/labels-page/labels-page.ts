@@ -9,7 +9,7 @@ import {
   signal,
 } from '@angular/core';
 import { MatAnchor, MatButton } from '@angular/material/button';
-import { MatFormField, MatLabel, MatPrefix } from '@angular/material/form-field';
+import { MatFormField, MatHint, MatLabel, MatPrefix } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
@@ -43,6 +43,7 @@ import { LabelStocksApi } from '../label-stocks-api';
     MatAnchor,
     MatButton,
     MatFormField,
+    MatHint,
     MatIcon,
     MatInput,
     MatLabel,
