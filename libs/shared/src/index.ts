@@ -30,3 +30,7 @@ export * from './labels/label-stock-api';
 export * from './labels/product-identity';
 export * from './labels/label-content';
 export * from './labels/label-run-api';
+export * from './complaints/us-federal-holidays';
+export * from './complaints/business-days';
+export * from './complaints/adverse-event-clock';
+export * from './complaints/complaint-schema';
