@@ -34,3 +34,4 @@ export * from './complaints/us-federal-holidays';
 export * from './complaints/business-days';
 export * from './complaints/adverse-event-clock';
 export * from './complaints/complaint-schema';
+export * from './csv/csv-import';

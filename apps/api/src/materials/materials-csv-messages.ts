@@ -2,6 +2,9 @@ import type * as z from 'zod';
 import {
   MATERIAL_CATEGORIES,
   MATERIAL_CATEGORY_LABELS,
+  UTF16_HELP,
+  UTF16_REFUSAL,
+  isUtf16,
   type MaterialCategory,
 } from '@batchproof/shared';
 import { AppError } from '../core/app-error';
@@ -71,30 +74,12 @@ export function columnErrors(error: z.ZodError, categoryCell: string) {
   return out;
 }
 
-/** Bytes looked at for NULs: a UTF-16 file has one in every other byte of plain text. */
-const SNIFF_BYTES = 4096;
-
 /**
  * Refuses a file saved as UTF-16 (what Excel calls "Unicode text"): a byte-order mark, or NUL
- * bytes, which UTF-8 text never holds. A text body arrives decoded as UTF-8 already, where the
- * mark reads as two replacement characters and the NULs stay NULs.
+ * bytes, which UTF-8 text never holds (see `isUtf16`).
  */
 export function refuseUtf16(content: Buffer | string): void {
-  const utf16 =
-    typeof content === 'string'
-      ? content.startsWith('\uFFFD\uFFFD') || content.slice(0, SNIFF_BYTES).includes('\u0000')
-      : (content[0] === 0xff && content[1] === 0xfe) ||
-        (content[0] === 0xfe && content[1] === 0xff) ||
-        content.subarray(0, SNIFF_BYTES).includes(0);
+  const utf16 = isUtf16(content);
   if (!utf16) return;
-  throw new AppError(
-    400,
-    'validation_failed',
-    'This file is saved as UTF-16 ("Unicode text"), which the import cannot read. Save it as CSV UTF-8 and choose it again.',
-    {
-      file: [
-        'Save it as CSV UTF-8 and choose it again: in Excel, Save As "CSV UTF-8 (Comma delimited)"; in LibreOffice, Save As CSV with the character set "Unicode (UTF-8)".',
-      ],
-    },
-  );
+  throw new AppError(400, 'validation_failed', UTF16_REFUSAL, { file: [UTF16_HELP] });
 }

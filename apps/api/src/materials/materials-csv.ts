@@ -10,7 +10,12 @@ import {
   MATERIAL_CSV_NO,
   MATERIAL_CSV_REQUIRED,
   MATERIAL_CSV_YES,
+  boundedErrors,
+  clip,
   duplicateKey,
+  parseProblems,
+  shownRows,
+  unescapeFormula,
   materialCreateSchema,
   type Material,
   type MaterialFields,
@@ -41,15 +46,6 @@ function readYesNo(value: string): boolean | undefined {
   return undefined;
 }
 
-// Spreadsheet formula guard: export prefixes risky cells with an apostrophe; import drops it.
-const unescapeFormula = (v: string) => (/^'[=+\-@\t\r]/.test(v) ? v.slice(1) : v);
-
-/** Most file-level parse messages listed; a broken file would otherwise give one per row. */
-const MAX_PARSE_MESSAGES = 20;
-/** Most messages kept for one row, and characters kept of a message or an echoed cell. */
-const MAX_ROW_MESSAGES = 10;
-const clip = (text: string, max: number) =>
-  text.length > max ? `${text.slice(0, max - 1)}…` : text;
 /** Rows checked between two yields to the event loop, so other requests are answered meanwhile. */
 const ROWS_PER_TURN = 250;
 /** Characters of the file handed to the parser at a time. */
@@ -115,10 +111,7 @@ function fileProblems(headers: string[], problems: string[]) {
       );
     }
   }
-  fileErrors.push(...problems.slice(0, MAX_PARSE_MESSAGES));
-  if (problems.length > MAX_PARSE_MESSAGES) {
-    fileErrors.push(`…and ${problems.length - MAX_PARSE_MESSAGES} more lines that cannot be read`);
-  }
+  fileErrors.push(...parseProblems(problems));
   return fileErrors;
 }
 
@@ -190,30 +183,6 @@ async function existingMaterials(db: Database, workshopId: string) {
   return byKey;
 }
 
-/** At most {@link MAX_ROW_MESSAGES} messages for a row, each of a readable length. */
-function boundedErrors(errors: Record<string, string[]>) {
-  const out: Record<string, string[]> = {};
-  let left = MAX_ROW_MESSAGES;
-  for (const [field, messages] of Object.entries(errors)) {
-    if (left === 0) break;
-    const kept = messages.slice(0, left).map((m) => clip(m, 300));
-    out[clip(field, 100)] = kept;
-    left -= kept.length;
-  }
-  return out;
-}
-
-/**
- * The rows a preview sends back: those needing attention first, then ready ones, at most
- * {@link MATERIAL_CSV_PREVIEW_ROWS}, in line order.
- */
-function shownRows(rows: MaterialImportRow[]) {
-  const invalid = rows.filter((r) => !r.valid);
-  const valid = rows.filter((r) => r.valid);
-  const shown = [...invalid, ...valid].slice(0, MATERIAL_CSV_PREVIEW_ROWS);
-  return shown.sort((a, b) => a.line - b.line);
-}
-
 /**
  * Parses the CSV text and checks every row; nothing is written. A file over the row cap is
  * refused as a whole without checking its rows; the answer stays small whatever the file holds.
@@ -266,7 +235,7 @@ export async function checkMaterialsCsv(db: Database, actor: AuthUser, text: str
   const errorCount = rows.filter((r) => !r.valid).length;
   const preview: MaterialImportPreview = {
     fileErrors,
-    rows: shownRows(rows),
+    rows: shownRows(rows, MATERIAL_CSV_PREVIEW_ROWS),
     validCount: valid.length,
     errorCount,
     existingCount: valid.filter((r) => r.existingId !== null).length,

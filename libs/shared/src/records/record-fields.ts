@@ -37,6 +37,18 @@ export const optionalText = (label: string, max = 200) =>
     .nullish()
     .transform((v) => (v ? v : null));
 
+/** An optional e-mail address, kept in lower case; empty, null or missing come out as null. */
+export const optionalEmail = (label = 'E-mail') =>
+  textField(label)
+    .pipe(
+      z.union([
+        z.literal(''),
+        z.email({ error: 'Enter an e-mail address such as orders@example.com' }),
+      ]),
+    )
+    .nullish()
+    .transform((v) => (v ? v.toLowerCase() : null));
+
 /**
  * The one date rule: a calendar date as YYYY-MM-DD in year 1 to 9999. The format already stops at
  * 9999; year 0000 passes the format but is not a year of the Gregorian calendar, and PostgreSQL's

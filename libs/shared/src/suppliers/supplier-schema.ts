@@ -6,6 +6,7 @@ import {
   warningsField,
 } from '../records/housekeeping-schema';
 import {
+  optionalEmail,
   optionalText,
   requiredText,
   storedRecordFields,
@@ -16,15 +17,7 @@ import {
 export const supplierCreateSchema = z.object({
   name: requiredText('Supplier name'),
   contact: optionalText('Contact person'),
-  email: textField('E-mail')
-    .pipe(
-      z.union([
-        z.literal(''),
-        z.email({ error: 'Enter an e-mail address such as orders@example.com' }),
-      ]),
-    )
-    .nullish()
-    .transform((v) => (v ? v.toLowerCase() : null)),
+  email: optionalEmail(),
   website: textField('Website')
     .pipe(
       z.union([
