@@ -14,6 +14,7 @@ describe('journey: every page of the demo workshop at phone, tablet and laptop w
     await h?.close();
   });
 
+  // Some 25 pages at three widths each: about a minute on two idle cores, more on a busy machine.
   it('lays out the pages of a workshop in use with nothing sticking out sideways and no clipped text', async () => {
     const page = await h.newPage();
 
@@ -143,5 +144,5 @@ describe('journey: every page of the demo workshop at phone, tablet and laptop w
     await h.screenshot(assessor, 'every-21-not-open');
 
     expect(h.problems).toEqual([]);
-  });
+  }, 180_000);
 });
