@@ -38,7 +38,20 @@ try {
       ].map((m) => m[1]),
     ),
   ].filter((f) => !/^[a-z]+:/i.test(f));
-  const rows = files.map((file) => {
+  // index.html names at most ten chunks to preload (Angular's cap), so follow the static imports
+  // (`import"./chunk-X.js"`, `from"./chunk-X.js"`) of every script it names; `import("…")` is lazy.
+  const seen = new Set(files);
+  const queue = files.filter((f) => f.endsWith('.js'));
+  while (queue.length > 0) {
+    const code = readFileSync(path.join(browser, queue.shift()), 'utf8');
+    for (const [, dep] of code.matchAll(/(?:\bfrom\s*|\bimport\s*)["']\.\/([^"']+\.js)["']/g)) {
+      if (!seen.has(dep)) {
+        seen.add(dep);
+        queue.push(dep);
+      }
+    }
+  }
+  const rows = [...seen].map((file) => {
     const bytes = readFileSync(path.join(browser, file));
     return { file, raw: bytes.length, brotli: brotliCompressSync(bytes).length };
   });
