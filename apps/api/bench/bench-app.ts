@@ -36,10 +36,25 @@ export async function startBench(name: string, poolSize: number) {
   const server = app.listen(0, '127.0.0.1');
   await new Promise((resolve) => server.once('listening', resolve));
   const base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+  const headers = {
+    Authorization: `Bearer ${w.members.owner.token}`,
+    'Content-Type': 'application/json',
+  };
   return {
     db,
     w,
     base,
+    /** A JSON request as the workshop's owner; throws with the answer unless it is 2xx. */
+    async call(method: string, route: string, body?: unknown) {
+      const res = await fetch(base + route, {
+        method,
+        headers,
+        body: body && JSON.stringify(body),
+      });
+      const text = await res.text();
+      if (!res.ok) throw new Error(`${method} ${route} → ${res.status} ${text.slice(0, 300)}`);
+      return JSON.parse(text) as Record<string, unknown>;
+    },
     async close() {
       server.close();
       await db.execute(sql`delete from workshops where id = ${w.id}`);

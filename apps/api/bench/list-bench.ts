@@ -14,7 +14,7 @@ const CLIENTS = 20;
 const POOL_SIZE = 20;
 
 const bench = await startBench('Bench workshop', POOL_SIZE);
-const { db, w, base } = bench;
+const { db, w, call } = bench;
 const wid = w.id;
 
 let t = performance.now();
@@ -35,18 +35,6 @@ await db.execute(sql`analyze materials; analyze lots`);
 console.log(
   `seeded ${MATERIALS} materials and ${LOTS} lots in ${Math.round(performance.now() - t)} ms`,
 );
-
-const headers = {
-  Authorization: `Bearer ${w.members.owner.token}`,
-  'Content-Type': 'application/json',
-};
-
-async function call(method: string, route: string, body?: unknown) {
-  const res = await fetch(base + route, { method, headers, body: body && JSON.stringify(body) });
-  const text = await res.text();
-  if (!res.ok) throw new Error(`${method} ${route} → ${res.status} ${text.slice(0, 300)}`);
-  return JSON.parse(text) as Record<string, unknown>;
-}
 
 /** p50 and p95 of `run`, one call at a time, after a warm-up. */
 async function latency(run: () => Promise<unknown>, runs = RUNS) {

@@ -17,18 +17,7 @@ const TARGET_P95_MS = 250;
 const TARGET_RATIO = 1.5;
 
 const bench = await startBench('Public page bench', 20);
-const { db, w, base } = bench;
-const headers = {
-  Authorization: `Bearer ${w.members.owner.token}`,
-  'Content-Type': 'application/json',
-};
-
-async function call(method: string, route: string, body?: unknown) {
-  const res = await fetch(base + route, { method, headers, body: body && JSON.stringify(body) });
-  const text = await res.text();
-  if (!res.ok) throw new Error(`${method} ${route} → ${res.status} ${text.slice(0, 300)}`);
-  return JSON.parse(text) as Record<string, unknown>;
-}
+const { db, w, base, call } = bench;
 
 // A US-only product of one material: the page's size does not depend on the formula's length.
 await call('PUT', '/api/workshop/label-details', {
