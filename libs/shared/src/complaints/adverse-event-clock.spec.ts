@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
+import { addYears } from '../dates/calendar-day';
 import {
-  addYears,
   newMedicalInformationClock,
   retainUntil,
   seriousAdverseEventClock,

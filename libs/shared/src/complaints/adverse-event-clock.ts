@@ -1,5 +1,5 @@
 import * as z from 'zod';
-import { isCalendarDay } from '../dates/calendar-day';
+import { addYears } from '../dates/calendar-day';
 import { addUsBusinessDays, usBusinessDaysBetween } from './business-days';
 
 /**
@@ -88,16 +88,6 @@ function clock(input: ClockInput, source: string): ReportingClock {
  */
 export function seriousAdverseEventClock(input: ClockInput): ReportingClock {
   return clock(input, SERIOUS_ADVERSE_EVENT_REPORT_SOURCE);
-}
-
-/**
- * A year after `day`: the same month and day, and 1 March after 29 February, the later reading,
- * so neither a reporting window nor a retention period ends early.
- */
-export function addYears(day: string, years: number): string {
-  if (!isCalendarDay(day)) throw new RangeError(`Not a calendar day: ${day}`);
-  const [y, m, d] = day.split('-').map(Number) as [number, number, number];
-  return new Date(Date.UTC(y + years, m - 1, d)).toISOString().slice(0, 10);
 }
 
 /**

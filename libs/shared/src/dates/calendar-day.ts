@@ -28,20 +28,34 @@ export function isCalendarDay(day: string): boolean {
   return date.getUTCFullYear() === y && date.getUTCMonth() === m - 1 && date.getUTCDate() === d;
 }
 
-/** The day `days` after `day` (negative for before). Throws on a string that is not a day. */
-export function addDays(day: string, days: number): string {
+/** A day's year, month (1–12) and day of the month. Throws on a string that is not `YYYY-MM-DD`. */
+export function calendarDayParts(day: string): { year: number; month: number; day: number } {
   const match = DAY_PATTERN.exec(day);
   if (!match) throw new RangeError(`Not a calendar day: ${day}`);
-  const date = new Date(Date.UTC(Number(match[1]), Number(match[2]) - 1, Number(match[3]) + days));
-  return calendarDayOf(date);
+  return { year: Number(match[1]), month: Number(match[2]), day: Number(match[3]) };
+}
+
+/** The day `days` after `day` (negative for before). Throws on a string that is not a day. */
+export function addDays(day: string, days: number): string {
+  const p = calendarDayParts(day);
+  return calendarDayOf(new Date(Date.UTC(p.year, p.month - 1, p.day + days)));
+}
+
+/**
+ * The same month and day `years` later; 29 February rolls to 1 March, the later reading, so a
+ * period counted in years never ends early. Throws on a string that is not a real day.
+ */
+export function addYears(day: string, years: number): string {
+  if (!isCalendarDay(day)) throw new RangeError(`Not a calendar day: ${day}`);
+  const p = calendarDayParts(day);
+  return calendarDayOf(new Date(Date.UTC(p.year + years, p.month - 1, p.day)));
 }
 
 /** Whole days from `from` to `to` (negative when `to` is earlier). */
 export function daysBetween(from: string, to: string): number {
   const [a, b] = [from, to].map((day) => {
-    const match = DAY_PATTERN.exec(day);
-    if (!match) throw new RangeError(`Not a calendar day: ${day}`);
-    return Date.UTC(Number(match[1]), Number(match[2]) - 1, Number(match[3]));
+    const p = calendarDayParts(day);
+    return Date.UTC(p.year, p.month - 1, p.day);
   }) as [number, number];
   return Math.round((b - a) / 86_400_000);
 }

@@ -1,3 +1,4 @@
+import { calendarDayParts } from '../dates/calendar-day';
 import type { ComplianceMarket } from '../reference-data/reference-row';
 import {
   EU_DATE_OF_MINIMUM_DURABILITY_MAX_MONTHS,
@@ -21,20 +22,12 @@ export interface DurabilityText {
   readonly note?: string;
 }
 
-const DAY = /^(\d{4})-(\d{2})-(\d{2})$/;
-
-function dayParts(day: string): { year: number; month: number; day: number } {
-  const match = DAY.exec(day);
-  if (!match) throw new RangeError(`Not a calendar day: ${day}`);
-  return { year: Number(match[1]), month: Number(match[2]), day: Number(match[3]) };
-}
-
 /**
  * The month `months` after the month of `madeOn`, as `YYYY-MM`: made 2026-12-02 with 18 months of
  * shelf life → `2028-06`, printed as "the end of 06/2028".
  */
 export function bestBeforeMonth(madeOn: string, months: number): string {
-  const { year, month } = dayParts(madeOn);
+  const { year, month } = calendarDayParts(madeOn);
   const index = year * 12 + (month - 1) + months;
   return `${Math.floor(index / 12)}-${String((index % 12) + 1).padStart(2, '0')}`;
 }
@@ -56,7 +49,7 @@ function euDurability(
   const { shelfLifeMonths, periodAfterOpeningMonths } = identity;
   let date: string | null = null;
   if (expiresOn) {
-    const { year, month, day } = dayParts(expiresOn);
+    const { year, month, day } = calendarDayParts(expiresOn);
     date = `${BEST_BEFORE} ${String(day).padStart(2, '0')}/${String(month).padStart(2, '0')}/${year}`;
   } else if (
     shelfLifeMonths !== null &&
