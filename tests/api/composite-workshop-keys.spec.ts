@@ -89,8 +89,8 @@ const references: {
   },
   {
     constraint: 'lot_consumptions_lot_fk',
-    insert: (t) => sql`insert into lot_consumptions (workshop_id, lot_id, quantity)
-      values (${mine.workshopId}, ${t.lotId}, 1)`,
+    insert: (t) => sql`insert into lot_consumptions (workshop_id, lot_id, quantity, kind, reason)
+      values (${mine.workshopId}, ${t.lotId}, 1, 'adjustment', 'other')`,
   },
   ...(['material', 'lot'] as const).map((owner) => ({
     constraint: `documents_${owner}_fk`,

@@ -1,4 +1,3 @@
-import { randomUUID } from 'node:crypto';
 import {
   lotCreateSchema,
   materialCreateSchema,
@@ -55,12 +54,18 @@ export async function buildLot(
   return row!;
 }
 
-/** Records that a batch took `quantity` (in the lot's unit) from a lot. */
+/** Takes `quantity` (in the lot's unit) out of a lot, as a count correction. */
 export async function consumeFromLot(
   db: Database,
   workshopId: string,
   lotId: string,
   quantity: number,
 ) {
-  await db.insert(lotConsumptions).values({ workshopId, lotId, quantity, batchId: randomUUID() });
+  await db.insert(lotConsumptions).values({
+    workshopId,
+    lotId,
+    quantity,
+    kind: 'adjustment',
+    reason: 'count-correction',
+  });
 }

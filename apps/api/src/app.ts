@@ -25,6 +25,13 @@ import { labelRunsRouter } from './labels/label-runs-router';
 import { productIdentityRouter } from './labels/product-identity-router';
 import { publicPageRouter } from './labels/public-page';
 import { workshopRouter } from './workshop/workshop-router';
+import { batchesRouter } from './batches/batches-router';
+import { customersRouter } from './deliveries/customers-router';
+import { deliveriesRouter } from './deliveries/deliveries-router';
+import { traceRouter } from './trace/trace-router';
+import { recallsRouter } from './recalls/recalls-router';
+import { complaintsRouter } from './complaints/complaints-router';
+import { auditRouter } from './audit/audit-router';
 
 /** Everything the app needs from outside; tests pass their own. */
 export interface AppDeps {
@@ -100,6 +107,15 @@ export function createApp(deps: AppDeps): Express {
   api.use('/label-stocks', labelStocksRouter({ db: deps.db, authn }));
   api.use('/label-runs', labelRunsRouter({ db: deps.db, authn, appUrl: deps.appUrl }));
   api.use('/workshop', workshopRouter({ db: deps.db, authn }));
+  // Production and recall.
+  const production = { db: deps.db, authn, mailer: deps.mailer, appUrl: deps.appUrl };
+  api.use('/batches', batchesRouter(production));
+  api.use('/customers', customersRouter(production));
+  api.use('/deliveries', deliveriesRouter(production));
+  api.use('/trace', traceRouter(production));
+  api.use('/recalls', recallsRouter(production));
+  api.use('/complaints', complaintsRouter(production));
+  api.use('/audit-events', auditRouter(production));
   api.use(apiNotFound);
   api.use(errorHandler);
   app.use('/api', api);

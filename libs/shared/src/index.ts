@@ -47,3 +47,6 @@ export * from './batches/batch-code';
 export * from './batches/batch-schema';
 export * from './batches/batch-record-schema';
 export * from './batches/batch-amendment-schema';
+export * from './trace/trace-schema';
+export * from './audit/audit-schema';
+export * from './workshop/production-settings-schema';

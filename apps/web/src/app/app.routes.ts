@@ -22,6 +22,12 @@ export const routes: Routes = [
       { path: 'suppliers', loadChildren: () => import('./suppliers/suppliers.routes') },
       { path: 'lots', loadChildren: () => import('./lots/lots.routes') },
       { path: 'labels', loadChildren: () => import('./labels/labels.routes') },
+      { path: 'production', loadChildren: () => import('./production/production.routes') },
+      { path: 'deliveries', loadChildren: () => import('./deliveries/deliveries.routes') },
+      { path: 'trace', loadChildren: () => import('./trace/trace.routes') },
+      { path: 'recalls', loadChildren: () => import('./recalls/recalls.routes') },
+      { path: 'complaints', loadChildren: () => import('./complaints/complaints.routes') },
+      { path: 'audit-log', loadChildren: () => import('./audit-log/audit-log.routes') },
       { path: 'reference', loadChildren: () => import('./reference-lists/reference-lists.routes') },
       {
         path: 'not-open',

@@ -11,3 +11,6 @@ export * from './formulas';
 export * from './idempotency';
 export * from './label-stocks';
 export * from './label-runs';
+export * from './batches';
+export * from './deliveries';
+export * from './complaints';

@@ -22,6 +22,7 @@ import type {
   ProductIdentity,
 } from '@batchproof/shared';
 import { bytea, id, timestamps, workshopKey, workshopReference } from './columns';
+import { batches } from './batches';
 import { formulas, formulaVersions } from './formulas';
 import { users } from './users';
 import { workshops } from './workshops';
@@ -94,7 +95,7 @@ export const labelRuns = pgTable(
     pageCount: integer().notNull(),
     lotCode: text(),
     expiresOn: date({ mode: 'string' }),
-    /** The batch printed for, once batches exist. */
+    /** The batch printed for (production prints from batches); null for a run of a version. */
     batchId: uuid(),
     /** Every market's label content as printed, in the order of `markets`. */
     contents: jsonb().$type<LabelContent[]>().notNull(),
@@ -127,6 +128,13 @@ export const labelRuns = pgTable(
       'label_runs_version_fk',
       { workshopId: t.workshopId, column: t.versionId },
       formulaVersions,
+      'restrict',
+    ),
+    index('label_runs_batch_idx').on(t.workshopId, t.batchId),
+    workshopReference(
+      'label_runs_batch_fk',
+      { workshopId: t.workshopId, column: t.batchId },
+      batches,
       'restrict',
     ),
     workshopReference(

@@ -3,6 +3,7 @@ import {
   check,
   date,
   index,
+  integer,
   numeric,
   pgEnum,
   pgTable,
@@ -12,7 +13,9 @@ import {
 } from 'drizzle-orm/pg-core';
 import { LOT_UNITS } from '@batchproof/shared';
 import { id, timestamps, workshopKey, workshopReference } from './columns';
+import { batches, stockAdjustmentReasonEnum, stockMovementKindEnum } from './batches';
 import { materials } from './materials';
+import { users } from './users';
 import { workshops } from './workshops';
 
 export const lotUnitEnum = pgEnum('lot_unit', LOT_UNITS);
@@ -69,8 +72,12 @@ export const lots = pgTable(
 );
 
 /**
- * What batches took out of a lot, in the lot's unit. Empty until batch records exist; stock on
- * hand is always the lot's quantity minus the sum of these rows, never a stored counter.
+ * Stock taken out of a lot (positive) or put back (negative), in the lot's unit: a batch's
+ * release (`kind` batch, with the batch and its line), an adjustment with its reason (spillage,
+ * count correction, disposal), or an amendment's correction of a released batch's lot picks.
+ * Stock on hand is always the lot's quantity minus the sum of these rows, never a stored counter;
+ * writers lock the lot row (`SELECT … FOR UPDATE`) before they check and insert, so concurrent
+ * releases can never take a lot below zero.
  */
 export const lotConsumptions = pgTable(
   'lot_consumptions',
@@ -81,21 +88,49 @@ export const lotConsumptions = pgTable(
       .references(() => workshops.id, { onDelete: 'cascade' }),
     lotId: uuid().notNull(),
     quantity: numeric({ precision: 16, scale: 4, mode: 'number' }).notNull(),
-    /** The batch that consumed it; a plain id until batch records land. */
+    kind: stockMovementKindEnum().notNull().default('batch'),
+    /** The batch that consumed it (kind batch or amendment). */
     batchId: uuid(),
+    /** The batch's line (1-based) the lot was weighed for. */
+    lineNumber: integer(),
+    /** The same amount in grams, as weighed (batch and amendment rows). */
+    grams: numeric({ precision: 18, scale: 6, mode: 'number' }),
+    reason: stockAdjustmentReasonEnum(),
     consumedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
     note: text(),
+    createdBy: uuid(),
     ...timestamps,
   },
   (t) => [
-    index('lot_consumptions_lot_idx').on(t.lotId),
+    index('lot_consumptions_lot_idx').on(t.lotId, t.batchId),
+    index('lot_consumptions_batch_idx').on(t.batchId, t.lotId),
     index('lot_consumptions_workshop_idx').on(t.workshopId),
+    check(
+      'lot_consumptions_batch_rows_name_batch',
+      sql`${t.kind} = 'adjustment' or ${t.batchId} is not null`,
+    ),
+    check(
+      'lot_consumptions_adjustments_have_reason',
+      sql`${t.kind} <> 'adjustment' or ${t.reason} is not null`,
+    ),
     workshopKey('lot_consumptions', t),
     workshopReference(
       'lot_consumptions_lot_fk',
       { workshopId: t.workshopId, column: t.lotId },
       lots,
       'restrict',
+    ),
+    workshopReference(
+      'lot_consumptions_batch_fk',
+      { workshopId: t.workshopId, column: t.batchId },
+      batches,
+      'restrict',
+    ),
+    workshopReference(
+      'lot_consumptions_created_by_fk',
+      { workshopId: t.workshopId, column: t.createdBy },
+      users,
+      'set null',
     ),
   ],
 );

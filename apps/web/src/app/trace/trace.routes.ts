@@ -1,0 +1,3 @@
+import type { Routes } from '@angular/router';
+
+export default [] satisfies Routes;

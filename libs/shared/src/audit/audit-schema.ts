@@ -1,0 +1,2 @@
+/** The audit log contract (`GET /api/audit-events`): written with the audit routes. */
+export {};
