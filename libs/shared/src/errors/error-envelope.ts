@@ -18,6 +18,18 @@ export const errorCodeSchema = z.enum([
   'label_incomplete',
   /** A print run refused because text cannot fit at its legal minimum size (422); see `fitProblems`. */
   'label_does_not_fit',
+  /**
+   * A batch release refused because the record is not complete (409): lines not weighed, lots not
+   * picked, a substitute not approved; `fieldErrors` names each line (`lines.3.lotPicks`).
+   */
+  'batch_not_ready',
+  /**
+   * Stock refused (409): a release, an amendment or an adjustment would take a lot below zero;
+   * `fieldErrors` names the line or lot and says how much is on hand.
+   */
+  'stock_short',
+  /** A released record cannot be changed (409): batches take amendments instead. */
+  'record_released',
   /** An `Idempotency-Key` already used for a different request. */
   'idempotency_key_reused',
   /** The database cannot be reached right now (503); the request may be retried. */
