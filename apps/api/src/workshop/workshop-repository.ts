@@ -1,4 +1,5 @@
 import { eq } from 'drizzle-orm';
+import type { ProductionSettings } from '@batchproof/shared';
 import type { Database } from '../db/database';
 import { workshops } from '../db/schema';
 
@@ -19,5 +20,32 @@ export async function updateLabelDetails(
   await db
     .update(workshops)
     .set({ ...details, updatedAt: new Date() })
+    .where(eq(workshops.id, workshopId));
+}
+
+/** The workshop's production settings: weighing tolerance, batch code pattern, small business. */
+export async function findProductionSettings(
+  db: Database,
+  workshopId: string,
+): Promise<ProductionSettings | undefined> {
+  const [row] = await db
+    .select({
+      weighingTolerancePercent: workshops.weighingTolerancePercent,
+      batchCodePattern: workshops.batchCodePattern,
+      smallBusiness: workshops.smallBusiness,
+    })
+    .from(workshops)
+    .where(eq(workshops.id, workshopId));
+  return row;
+}
+
+export async function updateProductionSettings(
+  db: Database,
+  workshopId: string,
+  settings: ProductionSettings,
+) {
+  await db
+    .update(workshops)
+    .set({ ...settings, updatedAt: new Date() })
     .where(eq(workshops.id, workshopId));
 }
