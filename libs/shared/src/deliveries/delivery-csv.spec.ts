@@ -139,6 +139,34 @@ describe('delivery CSV preview', () => {
     expect(p.commitable).toBe(false);
   });
 
+  it('refuses the rows that take a lot past the units it has left, counted in file order', () => {
+    // 30 units of the fizzer lot are left; the soap lot's units made are not known.
+    const counted: DeliveryCsvResolver = {
+      ...resolver,
+      unitsLeft: (id) => (id === 'lot-fizzer' ? 30 : null),
+    };
+    const read = readDeliveryCsv(
+      file(
+        '2025-06-02,Corner Shop,INV-1,HB-250601-FZ-01,24', // 24 of 30: fine, 6 left
+        '2025-06-02,Corner Shop,INV-1,HB-250602-SB-02,900', // not counted: fine
+        '2025-06-03,Harbour Market,,HB-250601-FZ-01,7', // 7 > 6 left
+        '2025-06-04,Harbour Market,,HB-250601-FZ-01,1', // 31 > 30: none left
+      ),
+      Papa,
+    );
+    const { preview: p, deliveries } = checkDeliveryCsv(read, counted, { today });
+    const byLine = new Map(p.rows.map((r) => [r.line, r.errors]));
+    expect(byLine.get(2)).toEqual({});
+    expect(byLine.get(3)).toEqual({});
+    expect(byLine.get(4)).toEqual({
+      units: ['Only 6 units of lot HB-250601-FZ-01 are left to deliver'],
+    });
+    expect(byLine.get(5)).toEqual({ units: ['Lot HB-250601-FZ-01 has no units left to deliver'] });
+    expect(p.errorCount).toBe(2);
+    expect(p.commitable).toBe(false);
+    expect(deliveries).toEqual([]);
+  });
+
   it('returns the names to look up before checking', () => {
     const read = readDeliveryCsv(file(...GOOD), Papa);
     expect(read.names).toEqual({

@@ -21,6 +21,7 @@ import {
   deliveryUnitsSchema,
   finishedLotCodeSchema,
   repeatedLotMessage,
+  unitsLeftMessage,
   type DeliveryFields,
 } from './delivery-schema';
 
@@ -140,6 +141,11 @@ export function readDeliveryCsv(text: string, parser: CsvParser): DeliveryCsvRea
 export interface DeliveryCsvResolver {
   customerId(name: string): string | null;
   finishedLotId(lotCode: string): string | null;
+  /**
+   * Units of the finished lot not yet on any delivery (units made less units delivered), or null
+   * when its units made is not known. Rows past it, counted in file order, are refused.
+   */
+  unitsLeft?(finishedLotId: string): number | null;
 }
 
 /** One data row of an import file, checked. */
@@ -243,7 +249,7 @@ function checkRow(cells: DeliveryCsvCells, resolve: DeliveryCsvResolver, latest:
     day.value !== undefined && customer.value !== undefined && reference.value !== undefined
       ? deliveryGroupKey(customer.value, day.value, reference.value)
       : null;
-  return { errors, key, customerId, day, customer, reference, lot, units };
+  return { errors, key, customerId, finishedLotId, day, customer, reference, lot, units };
 }
 
 /** A delivery being gathered from the rows that share its key. */
@@ -268,8 +274,17 @@ export function checkDeliveryCsv(
   const byKey = new Map<string, Gathering>();
   const gatherings: Gathering[] = [];
   const rows: DeliveryImportRow[] = [];
+  const unitsTaken = new Map<string, number>();
   for (const { line, cells } of read.rows) {
     const row = checkRow(cells, resolve, latest);
+    const left =
+      row.finishedLotId === null ? null : (resolve.unitsLeft?.(row.finishedLotId) ?? null);
+    if (left !== null && row.units.value !== undefined) {
+      const taken = unitsTaken.get(row.finishedLotId!) ?? 0;
+      unitsTaken.set(row.finishedLotId!, taken + row.units.value);
+      if (taken + row.units.value > left)
+        (row.errors['units'] ??= []).push(unitsLeftMessage(row.lot.value!, left - taken));
+    }
     let delivery: number | null = null;
     if (row.key !== null) {
       let gathering = byKey.get(row.key);

@@ -50,6 +50,15 @@ export type DeliveryLineInput = z.input<typeof deliveryLineSchema>;
 export const repeatedLotMessage = (lotCode: string) =>
   `Lot ${lotCode} is listed twice; put all its units on one line`;
 
+/**
+ * The message for units beyond what is left of a finished lot: its units made less the units
+ * already on other deliveries.
+ */
+export const unitsLeftMessage = (lotCode: string, left: number) =>
+  left <= 0
+    ? `Lot ${lotCode} has no units left to deliver`
+    : `Only ${left} ${left === 1 ? 'unit' : 'units'} of lot ${lotCode} ${left === 1 ? 'is' : 'are'} left to deliver`;
+
 /** The lines of a delivery: 1 to {@link MAX_DELIVERY_LINES}, each lot at most once. */
 export const deliveryLinesSchema = z
   .array(deliveryLineSchema)
