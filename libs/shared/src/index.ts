@@ -47,6 +47,7 @@ export * from './batches/batch-code';
 export * from './batches/batch-schema';
 export * from './batches/batch-record-schema';
 export * from './batches/batch-amendment-schema';
+export * from './batches/batch-effective-record';
 export * from './trace/trace-schema';
 export * from './audit/audit-schema';
 export * from './workshop/production-settings-schema';

@@ -1,5 +1,6 @@
 import * as z from 'zod';
 import { MAX_LINES } from '../compliance/evaluation-input-schema';
+import { lotUnitSchema } from '../lots/lot-schema';
 import {
   optionalText,
   quantity,
@@ -145,3 +146,30 @@ export const stockAdjustmentSchema = z
   });
 export type StockAdjustment = z.input<typeof stockAdjustmentSchema>;
 export type StockAdjustmentFields = z.output<typeof stockAdjustmentSchema>;
+
+/** What moved a lot's stock: a batch's release, an adjustment, or an amendment of a released batch. */
+export const STOCK_MOVEMENT_KINDS = ['batch', 'adjustment', 'amendment'] as const;
+
+/**
+ * One movement of a lot's stock as the API returns it (`GET /api/lots/:id/movements`, and the
+ * answer of `POST /api/lots/:id/adjustments`). `quantity` is signed in the lot's unit: positive
+ * takes stock out, negative puts it back (an adjustment that adds after a count is negative here).
+ */
+export const stockMovementSchema = z.object({
+  id: z.string(),
+  lotId: z.string(),
+  kind: z.enum(STOCK_MOVEMENT_KINDS),
+  quantity: z.number(),
+  unit: lotUnitSchema,
+  /** The same amount in grams, as weighed (batch and amendment rows); null for adjustments. */
+  grams: z.number().nullable(),
+  batchId: z.string().nullable(),
+  batchCode: z.string().nullable(),
+  lineNumber: z.number().int().nullable(),
+  reason: stockAdjustmentReasonSchema.nullable(),
+  note: z.string().nullable(),
+  createdAt: z.string(),
+  /** Who recorded it; null when unknown (a removed member, or a row written by the system). */
+  createdByName: z.string().nullable(),
+});
+export type StockMovement = z.infer<typeof stockMovementSchema>;
