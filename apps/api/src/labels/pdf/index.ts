@@ -47,3 +47,14 @@ export function renderLabelSheet(
 export function renderCalibrationPdf(stock: LabelStock): Promise<Buffer> {
   return renderInWorker({ kind: 'calibration', stock });
 }
+
+/**
+ * Any other PDF in the label font (Source Sans 3, family `LABEL_FONT_FAMILY`), drawn in the same
+ * worker: `definition` is a plain pdfmake document definition (no functions, as it crosses to the
+ * worker), e.g. a batch's weigh sheet.
+ */
+export function renderDocumentPdf(definition: object): Promise<Buffer> {
+  return renderInWorker({ kind: 'document', definition });
+}
+
+export { LABEL_FONT_FAMILY } from './label-fonts';

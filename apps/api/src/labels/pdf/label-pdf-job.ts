@@ -7,7 +7,9 @@ import { renderPdf } from './pdfmake-runner';
 /** A PDF to draw, as the worker receives it. */
 export type LabelPdfJob =
   | { readonly kind: 'sheet'; readonly request: LabelSheetRequest }
-  | { readonly kind: 'calibration'; readonly stock: LabelStock };
+  | { readonly kind: 'calibration'; readonly stock: LabelStock }
+  /** Any other document in the label font (a batch's weigh sheet): a plain pdfmake definition. */
+  | { readonly kind: 'document'; readonly definition: object };
 
 /** Messages from the worker. */
 export type LabelPdfMessage =
@@ -29,6 +31,7 @@ export async function runLabelPdfJob(
   onProgress: (done: number, total: number) => void,
 ): Promise<Buffer> {
   if (job.kind === 'calibration') return renderPdf(calibrationDocument(job.stock));
+  if (job.kind === 'document') return renderPdf(job.definition);
   const { definition, labelCount } = await labelSheetDocument(job.request);
   onProgress(0, labelCount);
   let reported = 0;
