@@ -8,6 +8,7 @@ import {
   wholeNumber,
 } from '../records/record-fields';
 import { latestReceivedOn } from '../lots/lot-schema';
+import { listQuerySchema, pageSchema } from '../lists/list-query-schema';
 import { MAX_DELIVERY_LINES, MAX_DELIVERY_UNITS, finishedLotCodeSchema } from './delivery-schema';
 
 /**
@@ -76,6 +77,7 @@ export const recallReplyCreateSchema = z.object({
   notes: optionalText('Notes', 2000),
 });
 export type RecallReplyCreate = z.input<typeof recallReplyCreateSchema>;
+export type RecallReplyFields = z.output<typeof recallReplyCreateSchema>;
 
 /** Closing a recall: what was found, done and recovered, for the summary PDF. */
 export const recallCloseSchema = z.object({
@@ -163,5 +165,84 @@ export const recallSchema = z.object({
   unitsReturned: z.number().int(),
   drillReport: recallDrillReportSchema.nullable(),
   summary: z.string().nullable(),
+  /** The product names of the finished lots in scope, for titles and notices. */
+  products: z.array(z.string()),
+  /** The extra steps the last notices carried, beyond the standing three. */
+  whatToDo: z.string().nullable(),
 });
 export type Recall = z.infer<typeof recallSchema>;
+
+/**
+ * What opening a recall would cover, shown before it is opened: the finished lots in scope and
+ * the customers who received them. `lotsWithoutDelivery` names lots no delivery records.
+ */
+export const recallPreviewSchema = z.object({
+  batchCodes: z.array(z.string()),
+  products: z.array(z.string()),
+  affected: z.array(recallAffectedCustomerSchema),
+  unitsDelivered: z.number().int(),
+  lotsWithoutDelivery: z.array(z.string()),
+});
+export type RecallPreview = z.infer<typeof recallPreviewSchema>;
+
+/** `POST /api/recalls/preview`: the scope only. */
+export const recallPreviewRequestSchema = z.object({ scope: recallScopeSchema });
+export type RecallPreviewRequest = z.input<typeof recallPreviewRequestSchema>;
+
+/** `POST /api/recalls/:id/notices`: anything to add to the standing steps of the notice. */
+export const recallNoticesSendSchema = z.object({
+  whatToDo: optionalText('What to do', 2000),
+});
+export type RecallNoticesSend = z.input<typeof recallNoticesSendSchema>;
+
+/** Sort keys of the recalls list; `state` puts open recalls first, newest first within each. */
+export const RECALL_SORT_KEYS = [
+  'state',
+  'openedAt',
+  'batchCodes',
+  'severity',
+  'drill',
+  'unitsReturned',
+] as const;
+
+/** Query of `GET /api/recalls`: `q` matches the reason and the batch codes. */
+export const recallListQuerySchema = listQuerySchema(RECALL_SORT_KEYS, 'state').extend({
+  state: recallStateSchema.optional(),
+  drill: z
+    .enum(['true', 'false'], { error: 'drill is true or false' })
+    .transform((v) => v === 'true')
+    .optional(),
+});
+export type RecallListQuery = z.output<typeof recallListQuerySchema>;
+
+/** A row of the recalls list. */
+export const recallListItemSchema = z.object({
+  id: z.string(),
+  openedAt: z.string(),
+  closedAt: z.string().nullable(),
+  state: recallStateSchema,
+  drill: z.boolean(),
+  severity: recallSeveritySchema,
+  reason: z.string(),
+  batchCodes: z.array(z.string()),
+  products: z.array(z.string()),
+  customers: z.number().int(),
+  unitsDelivered: z.number().int(),
+  unitsReturned: z.number().int(),
+});
+export type RecallListItem = z.infer<typeof recallListItemSchema>;
+export const recallPageSchema = pageSchema(recallListItemSchema);
+export type RecallPage = z.infer<typeof recallPageSchema>;
+
+/**
+ * Whether the recall concerns possible harm to someone using the product, so the maker is
+ * pointed to the authority's guidance.
+ */
+export const recallConcernsHarm = (severity: RecallSeverity) => severity !== 'unlikely-harm';
+
+/**
+ * What the maker is told when a recall concerns possible harm. Recall duties differ by country
+ * and product; we name no deadline (common practice, no published source).
+ */
+export const RECALL_AUTHORITY_NOTE =
+  "Someone could be hurt by this product. Follow your local authority's recall guidance; tell the authority where the law requires it.";
