@@ -18,6 +18,7 @@ export * from './documents/document-status';
 export * from './formulas/formula-schema';
 export * from './formulas/formula-comparison';
 export * from './formulas/evaluation-input-builder';
+export * from './formulas/substitute-evaluation';
 export * from './formulas/formula-scaling-schema';
 export * from './compliance/index';
 export * from './materials/material-csv-schema';

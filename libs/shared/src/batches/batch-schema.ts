@@ -2,7 +2,11 @@ import * as z from 'zod';
 import { MAX_LINES } from '../compliance/evaluation-input-schema';
 import { addDays } from '../dates/calendar-day';
 import { MAX_BATCH_GRAMS, scaleRequestSchema } from '../formulas/formula-scaling-schema';
-import { MAX_UNIT_GRAMS, versionNumberSchema } from '../formulas/formula-schema';
+import {
+  MAX_UNIT_GRAMS,
+  storedSubstituteSchema,
+  versionNumberSchema,
+} from '../formulas/formula-schema';
 import { lotUnitSchema } from '../lots/lot-schema';
 import {
   isoDate,
@@ -79,7 +83,7 @@ export type BatchCreate = z.input<typeof batchCreateSchema>;
 export type BatchCreateFields = z.output<typeof batchCreateSchema>;
 
 /** An approved alternative to a line's material (issue 11, item 2). */
-export const substituteSchema = z.object({ materialId: z.string(), materialName: z.string() });
+export const substituteSchema = storedSubstituteSchema;
 
 /** One weigh sheet line (see `weighSheet`). */
 export const weighSheetLineSchema = z.object({

@@ -14,7 +14,8 @@ import { allergenDataFindings } from './scent-materials';
 import { labelDetailFindings } from './label-details';
 import { soapFindings } from './soap-rules';
 
-const SEVERITY_ORDER = { block: 0, warn: 1, info: 2 } as const;
+/** Blocks first, then checks, then notes: the order findings are listed in. */
+export const SEVERITY_ORDER = { block: 0, warn: 1, info: 2 } as const;
 
 const INCIDENTAL_SOURCE: Record<ComplianceMarket, { source: string; status: 'C2' | 'M' }> = {
   US: { source: '21 CFR 701.3(l)', status: 'C2' },

@@ -52,6 +52,18 @@ export const findingSeveritySchema = z.enum(['block', 'warn', 'info']);
 /** How serious a finding is. */
 export type FindingSeverity = z.infer<typeof findingSeveritySchema>;
 
+/** The approved substitute a finding holds for (see `evaluateWithSubstitutes`). */
+export const findingSubstituteSchema = z.object({
+  /** The formula line (1-based, as the editor numbers it) whose material it replaces. */
+  lineNumber: z.number().int(),
+  materialId: z.string(),
+  materialName: z.string(),
+  /** The line's own material's name. */
+  replacesName: z.string(),
+});
+/** The approved substitute a finding holds for. */
+export type FindingSubstitute = z.infer<typeof findingSubstituteSchema>;
+
 /** One thing the engine found, with the rule it comes from. */
 export const complianceFindingSchema = z.object({
   code: findingCodeSchema,
@@ -67,6 +79,11 @@ export const complianceFindingSchema = z.object({
   status: findingStatusSchema,
   /** Indexes of the formula lines involved. */
   lines: z.array(z.number().int()),
+  /**
+   * Set when the finding holds only with an approved substitute in place of a line's material;
+   * it counts, and blocks a release, like any other finding.
+   */
+  substitute: findingSubstituteSchema.optional(),
 });
 /** One compliance finding. */
 export type ComplianceFinding = z.infer<typeof complianceFindingSchema>;
@@ -149,6 +166,8 @@ export const evaluationResultSchema = z.object({
   colourants: z.partialRecord(complianceMarketSchema, z.array(colourantVerdictSchema)),
   warnings: z.partialRecord(complianceMarketSchema, z.array(z.string())),
   findings: z.array(complianceFindingSchema),
+  /** Approved substitutes checked with the formula (each one line's material replaced); absent when none. */
+  substitutes: z.array(findingSubstituteSchema).optional(),
 });
 /** Output of `evaluateFormula`. */
 export type EvaluationResult = z.infer<typeof evaluationResultSchema>;

@@ -62,7 +62,10 @@ function byMaterial(v: Comparable) {
 
 // A finding is "the same" across versions when its rule, market and subject match; the message
 // carries percentages that move with every gram, so it is left out of the key.
-const findingKey = (f: ComplianceFinding) => `${f.code}|${f.market ?? '*'}|${f.subject}`;
+// A substitute's finding is its own finding: the same rule for another material on another line.
+const findingKey = (f: ComplianceFinding) =>
+  `${f.code}|${f.market ?? '*'}|${f.subject}` +
+  (f.substitute ? `|${f.substitute.lineNumber}|${f.substitute.materialId}` : '');
 const round = (n: number) => Math.round(n * 10_000) / 10_000;
 
 /**

@@ -66,20 +66,66 @@ export const productProfileSchema = z.object({
 });
 export type ProductProfile = z.output<typeof productProfileSchema>;
 
+/** Most approved substitutes one line may name (each is checked by the engine like the line's own). */
+export const MAX_SUBSTITUTES_PER_LINE = 5;
+
+/**
+ * Approved alternatives to a line's material (one starch or another; issue 11, item 2): material
+ * ids, at most {@link MAX_SUBSTITUTES_PER_LINE}, each once. That none is the line's own material is
+ * checked on the line ({@link substituteRules}).
+ */
+export const lineSubstitutesSchema = z
+  .array(recordIdSchema('material'), { error: 'List the substitutes as materials' })
+  .max(MAX_SUBSTITUTES_PER_LINE, {
+    error: `A line has at most ${MAX_SUBSTITUTES_PER_LINE} approved substitutes`,
+  })
+  .superRefine((ids, ctx) => {
+    ids.forEach((id, i) => {
+      if (ids.indexOf(id) !== i)
+        ctx.addIssue({
+          code: 'custom',
+          path: [i],
+          message: 'This substitute is listed twice: name each material once',
+        });
+    });
+  })
+  .optional();
+
+/** A line's own material is not a substitute for itself. */
+function substituteRules(
+  line: { materialId: string; substitutes?: string[] | undefined },
+  ctx: z.RefinementCtx,
+) {
+  line.substitutes?.forEach((id, i) => {
+    if (id === line.materialId)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['substitutes', i],
+        message: 'A line’s own material cannot be its substitute: choose another material',
+      });
+  });
+}
+
 /** One line by weight. */
-export const formulaLineSchema = z.object({
-  materialId: recordIdSchema('material'),
-  // Stored as numeric(18, 6).
-  grams: quantity('Grams', { decimals: 6, max: 1e9, zero: 'allowed' }),
-});
+export const formulaLineSchema = z
+  .object({
+    materialId: recordIdSchema('material'),
+    // Stored as numeric(18, 6).
+    grams: quantity('Grams', { decimals: 6, max: 1e9, zero: 'allowed' }),
+    substitutes: lineSubstitutesSchema,
+  })
+  .superRefine(substituteRules);
 /** One line by percent, converted to grams with the batch total. */
-export const percentLineSchema = z.object({
-  materialId: recordIdSchema('material'),
-  percent: z
-    .number({ error: 'Enter a percentage' })
-    .min(0, { error: 'A percentage cannot be negative' })
-    .max(100, { error: 'A percentage cannot exceed 100' }),
-});
+export const percentLineSchema = z
+  .object({
+    materialId: recordIdSchema('material'),
+    percent: z
+      .number({ error: 'Enter a percentage' })
+      .min(0, { error: 'A percentage cannot be negative' })
+      .max(100, { error: 'A percentage cannot exceed 100' }),
+    substitutes: lineSubstitutesSchema,
+  })
+  .superRefine(substituteRules);
 
 /**
  * A draft version's content. Lines come by weight (`lines`) or by percent with a batch total
@@ -128,11 +174,27 @@ export const formulaVersionInputSchema = z
 export type FormulaVersionInput = z.input<typeof formulaVersionInputSchema>;
 export type FormulaVersionFields = z.output<typeof formulaVersionInputSchema>;
 
+/** A line in grams with its approved substitutes (material ids, in order). */
+export interface GramLineWithSubstitutes {
+  materialId: string;
+  grams: number;
+  substitutes: string[];
+}
+
 /** The lines of a version input in grams, whichever way they were entered. */
-export function linesInGrams(v: FormulaVersionFields): { materialId: string; grams: number }[] {
-  if (v.lines) return v.lines;
+export function linesInGrams(v: FormulaVersionFields): GramLineWithSubstitutes[] {
+  if (v.lines)
+    return v.lines.map((l) => ({
+      materialId: l.materialId,
+      grams: l.grams,
+      substitutes: l.substitutes ?? [],
+    }));
   const { batchGrams, lines } = v.byPercent!;
-  return lines.map((l) => ({ materialId: l.materialId, grams: (l.percent / 100) * batchGrams }));
+  return lines.map((l) => ({
+    materialId: l.materialId,
+    grams: (l.percent / 100) * batchGrams,
+    substitutes: l.substitutes ?? [],
+  }));
 }
 
 /** A new formula with its first draft. */
@@ -192,12 +254,21 @@ export const versionSummarySchema = z.object({
   updatedAt: z.string(),
 });
 
-/** A stored line with its material's name and share of the batch. */
+/** An approved substitute as a version answers it. */
+export const storedSubstituteSchema = z.object({
+  materialId: z.string(),
+  materialName: z.string(),
+});
+export type StoredSubstitute = z.infer<typeof storedSubstituteSchema>;
+
+/** A stored line with its material's name, share of the batch and approved substitutes. */
 export const storedLineSchema = z.object({
   materialId: z.string(),
   materialName: z.string(),
   grams: z.number(),
   percent: z.number(),
+  /** Approved alternatives in the order the formulator listed them. */
+  substitutes: z.array(storedSubstituteSchema).default([]),
 });
 
 /** One version with its lines, profile and stored evaluation. */
