@@ -13,7 +13,7 @@ import { AppError, conflict, forbidden, notFound } from '../core/app-error';
 import { parse } from '../core/validate';
 import type { Database } from '../db/database';
 import { deleteLogged } from '../housekeeping/deletion';
-import { evaluateLines } from './formula-evaluation';
+import { evaluateLines, gramLines } from './formula-evaluation';
 import { getFormula, versionView } from './formula-views';
 import * as repo from './formulas-repository';
 
@@ -107,7 +107,11 @@ export async function patchDraft(
   const patch = (body && typeof body === 'object' ? body : {}) as Record<string, unknown>;
   const stored = await repo.findLines(db, actor.workshopId, version.id);
   const merged: Record<string, unknown> = {
-    lines: stored.map((l) => ({ materialId: l.materialId, grams: l.grams })),
+    lines: stored.map((l) => ({
+      materialId: l.materialId,
+      grams: l.grams,
+      substitutes: l.substitutes.map((s) => s.materialId),
+    })),
     profile: version.profile,
     notes: version.notes,
     ...patch,
@@ -135,10 +139,8 @@ export async function newDraft(
     const latest = await repo.latestVersionNumber(tx, actor.workshopId, formulaId);
     const source = await repo.findVersion(tx, actor.workshopId, formulaId, fromVersion ?? latest);
     if (!source) throw notFound(`Version ${fromVersion} of that formula`);
-    const lines = (await repo.findLines(tx, actor.workshopId, source.id)).map((l) => ({
-      materialId: l.materialId,
-      grams: l.grams,
-    }));
+    // The approved substitutes come along with their lines.
+    const lines = gramLines(await repo.findLines(tx, actor.workshopId, source.id));
     const evaluation = await evaluateLines(tx, actor.workshopId, formula, lines, source.profile);
     const versionId = await repo.insertVersion(tx, {
       workshopId: actor.workshopId,
@@ -195,14 +197,13 @@ export async function release(
     const version = await repo.findVersion(tx, actor.workshopId, formulaId, n, true);
     if (!version) throw notFound(`Version ${n} of that formula`);
     if (version.state !== 'draft') throw immutable(n, version.state);
-    const lines = (await repo.findLines(tx, actor.workshopId, version.id)).map((l) => ({
-      materialId: l.materialId,
-      grams: l.grams,
-    }));
+    const lines = gramLines(await repo.findLines(tx, actor.workshopId, version.id));
     const evaluation = await evaluateLines(tx, actor.workshopId, formula, lines, version.profile);
     await repo.updateVersion(tx, actor.workshopId, version.id, evaluation);
-    // A refusal is returned, not thrown, so the transaction commits the fresh evaluation.
-    if (!evaluation.evaluation) return { problems: evaluation.evaluationProblems };
+    // A refusal is returned, not thrown, so the transaction commits the fresh evaluation. An
+    // approved substitute that cannot be checked refuses the release like the formula itself.
+    if (!evaluation.evaluation || evaluation.evaluationProblems.length > 0)
+      return { problems: evaluation.evaluationProblems };
     const blocks = evaluation.evaluation.findings.filter((f) => f.severity === 'block');
     if (blocks.length > 0 && !request.override) return { blocks };
     // Only the owner, usually the legally responsible person, may release over a block.

@@ -1,4 +1,4 @@
-import { and, asc, eq, ilike, max, sql, type SQL } from 'drizzle-orm';
+import { and, asc, eq, ilike, inArray, max, sql, type SQL } from 'drizzle-orm';
 import type { FormulaListQuery, ProductProfile, ProductType } from '@batchproof/shared';
 import {
   containsPattern,
@@ -9,7 +9,13 @@ import {
 } from '../core/list-paging';
 import type { Database } from '../db/database';
 import { unlessArchived } from '../housekeeping/archiving';
-import { formulaLines, formulas, formulaVersions, materials } from '../db/schema';
+import {
+  formulaLines,
+  formulaLineSubstitutes,
+  formulas,
+  formulaVersions,
+  materials,
+} from '../db/schema';
 
 /** A stored version row. */
 export type VersionRow = typeof formulaVersions.$inferSelect;
@@ -181,10 +187,11 @@ export async function latestVersionNumber(db: Database, workshopId: string, form
   return row?.n ?? 0;
 }
 
-/** Lines of a version in order, with each material's trade name. */
+/** Lines of a version in order, with each material's trade name and the line's approved substitutes. */
 export async function findLines(db: Database, workshopId: string, versionId: string) {
-  return db
+  const lines = await db
     .select({
+      id: formulaLines.id,
       materialId: formulaLines.materialId,
       materialName: materials.tradeName,
       grams: formulaLines.grams,
@@ -193,6 +200,39 @@ export async function findLines(db: Database, workshopId: string, versionId: str
     .innerJoin(materials, eq(materials.id, formulaLines.materialId))
     .where(and(eq(formulaLines.workshopId, workshopId), eq(formulaLines.versionId, versionId)))
     .orderBy(asc(formulaLines.position));
+  const substitutes = await findSubstitutes(
+    db,
+    workshopId,
+    lines.map((l) => l.id),
+  );
+  return lines.map(({ id, ...line }) => ({ ...line, substitutes: substitutes.get(id) ?? [] }));
+}
+
+/** Approved substitutes of some lines, by line id, each line's in the formulator's order. */
+export async function findSubstitutes(db: Database, workshopId: string, lineIds: string[]) {
+  const byLine = new Map<string, { materialId: string; materialName: string }[]>();
+  if (lineIds.length === 0) return byLine;
+  const rows = await db
+    .select({
+      lineId: formulaLineSubstitutes.lineId,
+      materialId: formulaLineSubstitutes.materialId,
+      materialName: materials.tradeName,
+    })
+    .from(formulaLineSubstitutes)
+    .innerJoin(materials, eq(materials.id, formulaLineSubstitutes.materialId))
+    .where(
+      and(
+        eq(formulaLineSubstitutes.workshopId, workshopId),
+        inArray(formulaLineSubstitutes.lineId, lineIds),
+      ),
+    )
+    .orderBy(asc(formulaLineSubstitutes.position));
+  for (const { lineId, ...sub } of rows) {
+    const list = byLine.get(lineId) ?? [];
+    list.push(sub);
+    byLine.set(lineId, list);
+  }
+  return byLine;
 }
 
 export async function insertVersion(
@@ -212,20 +252,42 @@ export async function insertVersion(
   return created!.id;
 }
 
-/** Replaces a version's lines: one delete and one multi-row insert. */
+/**
+ * Replaces a version's lines and their approved substitutes: one delete (substitutes go with their
+ * lines, cascade) and one multi-row insert each.
+ */
 export async function replaceLines(
   db: Database,
   workshopId: string,
   versionId: string,
-  lines: { materialId: string; grams: number }[],
+  lines: { materialId: string; grams: number; substitutes?: readonly string[] }[],
 ) {
   await db
     .delete(formulaLines)
     .where(and(eq(formulaLines.workshopId, workshopId), eq(formulaLines.versionId, versionId)));
   if (lines.length === 0) return;
-  await db
+  const inserted = await db
     .insert(formulaLines)
-    .values(lines.map((l, position) => ({ ...l, position, workshopId, versionId })));
+    .values(
+      lines.map((l, position) => ({
+        materialId: l.materialId,
+        grams: l.grams,
+        position,
+        workshopId,
+        versionId,
+      })),
+    )
+    .returning({ id: formulaLines.id, position: formulaLines.position });
+  const lineIds = new Map(inserted.map((r) => [r.position, r.id]));
+  const substitutes = lines.flatMap((l, i) =>
+    (l.substitutes ?? []).map((materialId, position) => ({
+      workshopId,
+      lineId: lineIds.get(i)!,
+      materialId,
+      position,
+    })),
+  );
+  if (substitutes.length > 0) await db.insert(formulaLineSubstitutes).values(substitutes);
 }
 
 export async function updateVersion(
