@@ -153,24 +153,21 @@ async function viewOf(db: Database, workshopId: string, row: BatchRow) {
     l.materialId,
     ...l.substitutes.map((s) => s.materialId),
   ]);
-  const [[head], lotRows, densities, amendments] = await Promise.all([
-    db
-      .select({
-        formulaName: formulas.name,
-        profile: formulaVersions.profile,
-        releasedByName: sql<
-          string | null
-        >`(select ${users.name} from ${users} where ${users.id} = ${row.releasedBy ?? null}::uuid)`,
-      })
-      .from(formulaVersions)
-      .innerJoin(formulas, eq(formulas.id, formulaVersions.formulaId))
-      .where(
-        and(eq(formulaVersions.workshopId, workshopId), eq(formulaVersions.id, row.versionId)),
-      ),
-    findLots(db, workshopId, pickIds),
-    gramsPerMillilitreOf(db, workshopId, usedIds),
-    amendmentsOf(db, workshopId, row.id),
-  ]);
+  // One after another: inside a transaction the queries share one connection.
+  const [head] = await db
+    .select({
+      formulaName: formulas.name,
+      profile: formulaVersions.profile,
+      releasedByName: sql<
+        string | null
+      >`(select ${users.name} from ${users} where ${users.id} = ${row.releasedBy ?? null}::uuid)`,
+    })
+    .from(formulaVersions)
+    .innerJoin(formulas, eq(formulas.id, formulaVersions.formulaId))
+    .where(and(eq(formulaVersions.workshopId, workshopId), eq(formulaVersions.id, row.versionId)));
+  const lotRows = await findLots(db, workshopId, pickIds);
+  const densities = await gramsPerMillilitreOf(db, workshopId, usedIds);
+  const amendments = await amendmentsOf(db, workshopId, row.id);
   return batchView(row, {
     formulaName: head!.formulaName,
     netQuantity: head!.profile.netQuantity ?? null,
