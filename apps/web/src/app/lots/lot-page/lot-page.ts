@@ -8,7 +8,7 @@ import {
   signal,
   viewChild,
 } from '@angular/core';
-import { MatButton } from '@angular/material/button';
+import { MatAnchor, MatButton } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatIcon } from '@angular/material/icon';
 import { MatProgressBar } from '@angular/material/progress-bar';
@@ -37,6 +37,7 @@ import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
     DecimalPipe,
     DocumentPanel,
     LotForm,
+    MatAnchor,
     MatButton,
     MatIcon,
     MatProgressBar,
