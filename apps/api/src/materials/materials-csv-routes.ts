@@ -3,6 +3,7 @@ import multer from 'multer';
 import { materialImportQuerySchema } from '@batchproof/shared';
 import type { Database } from '../db/database';
 import { AppError } from '../core/app-error';
+import { sendCsv } from '../core/csv-export';
 import { multipart } from '../core/multipart';
 import { parse } from '../core/validate';
 import { checkMaterialsCsv, exportMaterialsCsv, importMaterialsCsv } from './materials-csv';
@@ -43,10 +44,7 @@ export function materialsCsvRoutes(deps: {
   const { db, read, write } = deps;
   const router = Router();
   router.get('/export.csv', ...read, async (req, res) => {
-    const text = await exportMaterialsCsv(db, req.user!);
-    res.set('Content-Type', 'text/csv; charset=utf-8');
-    res.attachment('materials.csv');
-    res.send(text);
+    sendCsv(res, 'materials.csv', await exportMaterialsCsv(db, req.user!));
   });
   router.post('/import/preview', ...write, ...csvBody, async (req, res) => {
     res.json((await checkMaterialsCsv(db, req.user!, csvText(req))).preview);

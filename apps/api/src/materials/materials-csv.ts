@@ -25,6 +25,7 @@ import {
 } from '@batchproof/shared';
 import type { AuthUser } from '../auth/authenticate';
 import { AppError } from '../core/app-error';
+import { csvText } from '../core/csv-export';
 import type { Database } from '../db/database';
 import { suppliersByName } from '../suppliers/suppliers-repository';
 import { categoryFromCell, columnErrors } from './materials-csv-messages';
@@ -316,11 +317,5 @@ export async function exportMaterialsCsv(db: Database, actor: AuthUser) {
     weightPerVolume: Object.keys(m.weightPerVolume).length ? JSON.stringify(m.weightPerVolume) : '',
     calibrations: json(m.calibrations),
   }));
-  return Papa.unparse(
-    {
-      fields: [...MATERIAL_CSV_COLUMNS],
-      data: cells.map((c) => MATERIAL_CSV_COLUMNS.map((k) => c[k])),
-    },
-    { escapeFormulae: true, newline: '\r\n' },
-  );
+  return csvText(MATERIAL_CSV_COLUMNS, cells);
 }

@@ -158,9 +158,13 @@ export type Complaint = z.infer<typeof complaintSchema>;
 const booleanFromText = (label: string) =>
   z.enum(['true', 'false'], { error: `${label} is true or false` }).transform((v) => v === 'true');
 
-/** Query of `GET /api/complaints`: `q` matches what happened, the reporter and the lot code. */
+/**
+ * Query of `GET /api/complaints`: `q` matches what happened, the reporter and the lot code. The
+ * reporting clock's due day follows the received day, so sorting by `receivedOn` also sorts the
+ * clocks.
+ */
 export const complaintListQuerySchema = listQuerySchema(
-  ['receivedOn', 'productName', 'status', 'createdAt'],
+  ['receivedOn', 'productName', 'batchCode', 'serious', 'status', 'createdAt'],
   'receivedOn',
 ).extend({
   formulaId: recordIdSchema('product').optional(),
