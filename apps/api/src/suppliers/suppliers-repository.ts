@@ -1,4 +1,4 @@
-import { and, asc, eq, ilike, ne, or, sql, type SQL } from 'drizzle-orm';
+import { and, eq, ilike, or, sql, type SQL } from 'drizzle-orm';
 import type { SupplierListQuery } from '@batchproof/shared';
 import {
   containsPattern,
@@ -7,8 +7,8 @@ import {
   totalColumn,
   withTotal,
 } from '../core/list-paging';
+import { deleteOwnRow, rowsNamed, updateOwnRow } from '../core/workshop-rows';
 import type { Database } from '../db/database';
-import { foldedText } from '../housekeeping/folded-text';
 import { unlessArchived } from '../housekeeping/archiving';
 import { materials, suppliers } from '../db/schema';
 
@@ -78,50 +78,22 @@ export async function insertSupplier(db: Database, workshopId: string, values: S
   return row!.id;
 }
 
-export async function updateSupplier(
+export const updateSupplier = (
   db: Database,
   workshopId: string,
   id: string,
   values: SupplierValues,
-) {
-  const [row] = await db
-    .update(suppliers)
-    .set(values)
-    .where(and(eq(suppliers.workshopId, workshopId), eq(suppliers.id, id)))
-    .returning({ id: suppliers.id });
-  return row?.id;
-}
+) => updateOwnRow(db, suppliers, workshopId, id, values);
 
-export async function deleteSupplier(db: Database, workshopId: string, id: string) {
-  const [row] = await db
-    .delete(suppliers)
-    .where(and(eq(suppliers.workshopId, workshopId), eq(suppliers.id, id)))
-    .returning({ id: suppliers.id });
-  return row?.id;
-}
+export const deleteSupplier = (db: Database, workshopId: string, id: string) =>
+  deleteOwnRow(db, suppliers, workshopId, id);
 
 /**
  * The workshop's other suppliers whose name is `name` once case and runs of white space are
  * folded (archived ones too), oldest first: a second "Alder  chemicals" is most likely a typo.
  */
-export async function suppliersNamed(
-  db: Database,
-  workshopId: string,
-  name: string,
-  exceptId?: string,
-) {
-  return db
-    .select({ id: suppliers.id, name: suppliers.name, archivedAt: suppliers.archivedAt })
-    .from(suppliers)
-    .where(
-      and(
-        eq(suppliers.workshopId, workshopId),
-        sql`${foldedText(suppliers.name, ' ')} = ${foldedText(name, ' ')}`,
-        exceptId ? ne(suppliers.id, exceptId) : undefined,
-      ),
-    )
-    .orderBy(asc(suppliers.createdAt), asc(suppliers.id));
-}
+export const suppliersNamed = (db: Database, workshopId: string, name: string, exceptId?: string) =>
+  rowsNamed(db, suppliers, workshopId, name, exceptId);
 
 /** Suppliers of the workshop by lower-cased name, for the CSV import. */
 export async function suppliersByName(db: Database, workshopId: string) {
