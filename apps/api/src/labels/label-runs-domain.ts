@@ -14,12 +14,14 @@ import {
   type LabelRunRecord,
   type LabelStock,
   type MissingLabelElementRecord,
+  type ProductType,
 } from '@batchproof/shared';
 import { recordAudit } from '../audit/audit-log';
 import type { AuthUser } from '../auth/authenticate';
 import { AppError, conflict, notFound } from '../core/app-error';
 import { isRecordId } from '../core/record-id';
 import type { Database } from '../db/database';
+import { evaluateBatch, type EvaluatedBatch } from '../batches/batch-labels';
 import { evaluateLines } from '../formulas/formula-evaluation';
 import * as formulasRepo from '../formulas/formulas-repository';
 import { findLabelDetails } from '../workshop/workshop-repository';
@@ -94,15 +96,47 @@ async function chosenStock(db: Database, workshopId: string, stockId: string): P
   return { ...own.geometry, name: own.name } as LabelStock;
 }
 
-/** Who may print what: production prints for batches only; batches do not exist yet. */
-function checkBatch(actor: AuthUser, request: LabelRunCreateParsed) {
-  if (request.batchId) throw notFound('That batch');
-  if (actor.role === 'production')
-    throw new AppError(
-      403,
-      'forbidden',
-      'Production prints labels from a batch. Ask the owner or a formulator to print labels for a formula version.',
+/**
+ * The batch a run prints for, evaluated with the materials it was made of, or null for a run of a
+ * formula version. Production prints for batches only (403 without one); a batch prints once
+ * released (409 while a draft), from the version it was made of, with its batch code as the lot
+ * code and its expiry; a request naming another formula, version, lot code or expiry is refused
+ * on that field.
+ */
+async function batchFor(
+  db: Database,
+  actor: AuthUser,
+  request: LabelRunCreateParsed,
+  now: Date,
+): Promise<EvaluatedBatch | null> {
+  if (!request.batchId) {
+    if (actor.role === 'production')
+      throw new AppError(
+        403,
+        'forbidden',
+        'Production prints labels from a batch. Open the batch and print from there, or ask the owner or a formulator to print labels for a formula version.',
+      );
+    return null;
+  }
+  const evaluated = await evaluateBatch(db, actor.workshopId, request.batchId, now);
+  const { batch, formula } = evaluated;
+  if (batch.state !== 'released')
+    throw conflict(
+      `Batch ${batch.batchCode} is still a draft: its labels print once it is released.`,
     );
+  const madeFrom = `Batch ${batch.batchCode} was made from ${formula.name} version ${batch.versionNumber}`;
+  if (request.formulaId !== batch.formulaId) throw fieldError('formulaId', madeFrom);
+  if (request.version !== batch.versionNumber) throw fieldError('version', madeFrom);
+  if (request.lotCode !== undefined && request.lotCode !== batch.batchCode)
+    throw fieldError('lotCode', `A batch's labels carry its batch code, ${batch.batchCode}`);
+  if (request.expiresOn !== undefined && request.expiresOn !== batch.expiresOn)
+    throw fieldError(
+      'expiresOn',
+      batch.expiresOn
+        ? `A batch's labels carry its expiry, ${batch.expiresOn}`
+        : `Batch ${batch.batchCode} has no expiry date: leave it out`,
+    );
+  return evaluated;
 }
 
 const identityMissing = (market: MissingLabelElementRecord['market']) => ({
@@ -112,8 +146,29 @@ const identityMissing = (market: MissingLabelElementRecord['market']) => ({
   source: 'Product identity of the formula',
 });
 
+/** The same evaluation as release: the engine on the version's lines with today's materials. */
+async function versionEvaluation(
+  db: Database,
+  actor: AuthUser,
+  formula: { name: string; productType: ProductType },
+  version: formulasRepo.VersionRow,
+  now: Date,
+) {
+  const lines = (await formulasRepo.findLines(db, actor.workshopId, version.id)).map((l) => ({
+    materialId: l.materialId,
+    grams: l.grams,
+  }));
+  const evaluated = await evaluateLines(db, actor.workshopId, formula, lines, version.profile, now);
+  if (!evaluated.evaluation)
+    throw conflict(
+      `Version ${version.number} cannot be checked: ${evaluated.evaluationProblems.join('; ')}`,
+    );
+  return evaluated.evaluation;
+}
+
 /**
- * Records a print run of a released version and answers it with status `rendering`; the caller
+ * Records a print run of a released version (or of a released batch, whose labels follow what it
+ * was made of: see `evaluateBatch`) and answers it with status `rendering`; the caller
  * starts the PDF once the run is committed. Refusals: 409 for a version that is not released,
  * 409 `label_incomplete` listing what each market's label lacks (the owner may print anyway with
  * a recorded reason; a formulator's override is 403), 422 `label_does_not_fit`.
@@ -125,13 +180,16 @@ export async function createRun(
   appUrl: string,
   now = new Date(),
 ): Promise<LabelRunRecord> {
-  checkBatch(actor, request);
-  const formula = await formulasRepo.findFormula(db, actor.workshopId, request.formulaId);
+  const forBatch = await batchFor(db, actor, request, now);
+  const formula =
+    forBatch?.formula ?? (await formulasRepo.findFormula(db, actor.workshopId, request.formulaId));
   if (!formula) throw notFound('That formula');
   const n = request.version;
-  const version = await formulasRepo.findVersion(db, actor.workshopId, formula.id, n);
+  const version =
+    forBatch?.version ?? (await formulasRepo.findVersion(db, actor.workshopId, formula.id, n));
   if (!version) throw notFound(`Version ${n} of that formula`);
-  if (version.state !== 'released')
+  // A batch prints from the version it was made of, even once a newer one is released.
+  if (!forBatch && version.state !== 'released')
     throw conflict(
       `Version ${n} is ${version.state === 'draft' ? 'a draft' : 'superseded'}: labels print from the released version only.`,
     );
@@ -149,15 +207,10 @@ export async function createRun(
       `${stock.name} has ${perPage} label${perPage === 1 ? '' : 's'} per page: start at 1 to ${perPage}`,
     );
 
-  // The same evaluation as release: the engine on the version's lines with today's materials.
-  const lines = (await formulasRepo.findLines(db, actor.workshopId, version.id)).map((l) => ({
-    materialId: l.materialId,
-    grams: l.grams,
-  }));
-  const evaluated = await evaluateLines(db, actor.workshopId, formula, lines, version.profile, now);
-  if (!evaluated.evaluation)
-    throw conflict(`Version ${n} cannot be checked: ${evaluated.evaluationProblems.join('; ')}`);
-  const evaluation = evaluated.evaluation;
+  const evaluation =
+    forBatch?.evaluation ?? (await versionEvaluation(db, actor, formula, version, now));
+  const lotCode = forBatch ? forBatch.batch.batchCode : (request.lotCode ?? null);
+  const expiresOn = forBatch ? forBatch.batch.expiresOn : (request.expiresOn ?? null);
 
   const identityRow = await findProductIdentity(db, actor.workshopId, formula.id);
   const workshop = (await findLabelDetails(db, actor.workshopId))!;
@@ -169,9 +222,10 @@ export async function createRun(
         identity: identityRow.identity,
         workshop,
         netQuantity: version.profile.netQuantity ?? null,
-        lotCode: request.lotCode ?? null,
-        expiresOn: request.expiresOn ?? null,
-        madeOn: todayIso(now),
+        lotCode,
+        expiresOn,
+        // A batch's shelf life counts from the day it was made.
+        madeOn: forBatch?.batch.madeOn ?? todayIso(now),
         areas,
       }))
     : null;
@@ -245,9 +299,9 @@ export async function createRun(
       copies: request.copies,
       labelCount,
       pageCount,
-      lotCode: request.lotCode ?? null,
-      expiresOn: request.expiresOn ?? null,
-      batchId: null,
+      lotCode,
+      expiresOn,
+      batchId: forBatch?.batch.id ?? null,
       contents,
       progressTotal: labelCount,
       overrideReason,
@@ -266,7 +320,8 @@ export async function createRun(
         markets: request.markets,
         stockId: request.stockId,
         labelCount,
-        lotCode: request.lotCode ?? null,
+        lotCode,
+        batchId: forBatch?.batch.id ?? null,
         overrideReason,
         missing: overriding ? missing : [],
       },

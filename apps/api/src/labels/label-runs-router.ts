@@ -10,10 +10,11 @@ import * as domain from './label-runs-domain';
 import { resumeIfStalled, startRendering } from './label-run-rendering';
 
 /**
- * `/api/label-runs`: print runs of released formula versions and their PDFs. Owner and
- * formulator print (production will print from batches); every role reads runs, the assessor
- * too, since the safety assessment covers what the label says; the owner withdraws a run's
- * public ingredients page.
+ * `/api/label-runs`: print runs of released formula versions and of released batches, and their
+ * PDFs. Owner and formulator print either; production (`ROLE_SETS.goodsIn` with them) prints for
+ * a released batch only (`batchId`; the domain refuses production a run without one, 403);
+ * every role reads runs, the assessor too, since the safety assessment covers what the label
+ * says; the owner withdraws a run's public ingredients page.
  */
 export function labelRunsRouter(deps: { db: Database; authn: Authenticator; appUrl: string }) {
   const { db, authn, appUrl } = deps;
