@@ -1,7 +1,21 @@
-import { beforeAll, describe, expect, it } from 'vitest';
-import { batchSchema, type Batch, type BatchLine } from '@batchproof/shared';
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import {
+  batchSchema,
+  ROLES,
+  ROLE_SETS,
+  type Batch,
+  type BatchLine,
+  type Role,
+} from '@batchproof/shared';
 import { gramsAtStep, renderWeighSheetPdf } from '../../apps/api/src/batches/weigh-sheet-pdf';
+import { aMaterial } from '../../fixtures/builders/material-builder';
 import { readPdf } from '../support/label-pdf-reader';
+import { buildLot, buildMaterial } from '../support/row-builders';
+import { buildWorkshop, type BuiltWorkshop } from '../support/workshop-builder';
+import { startApiHarness, TEST_JWT_SECRET, type ApiHarness } from '../support/api-harness';
+import { bearer } from '../support/auth-header';
+import { buildWeighedBatch } from '../support/released-batch-builder';
 
 const pick = (supplierLotNumber: string, grams: number, expiresOn: string | null) => ({
   lotId: '1c6e7d2f-4a54-4b5f-8b9f-7a2d3e4c5b61',
@@ -175,5 +189,69 @@ describe('renderWeighSheetPdf', () => {
     const longText = allText(long);
     expect(longText).toContain('Material 60');
     expect(longText).toContain('69.00');
+  });
+});
+
+describe('GET /api/batches/:id/weigh-sheet.pdf', () => {
+  let h: ApiHarness;
+  let w: BuiltWorkshop;
+  let other: BuiltWorkshop;
+  let batch: { id: string; batchCode: string };
+  beforeAll(async () => {
+    h = await startApiHarness();
+    w = await buildWorkshop(h.handle.db, TEST_JWT_SECRET, { name: 'Fernhollow Soapery' });
+    other = await buildWorkshop(h.handle.db, TEST_JWT_SECRET, { roles: ['owner'] });
+    const citric = await buildMaterial(h.handle.db, w.id, aMaterial({ tradeName: 'Citric acid' }));
+    const lot = await buildLot(h.handle.db, w.id, citric.id, { quantity: 1, unit: 'kg' });
+    batch = await buildWeighedBatch(h.handle.db, w.id, {
+      state: 'draft',
+      lines: [
+        {
+          materialId: citric.id,
+          materialName: 'Citric acid',
+          grams: 312.4,
+          picks: [{ lotId: lot.id, grams: 312.4 }],
+        },
+      ],
+    });
+  });
+  afterAll(() => h.close());
+  const sheet = (who?: { token: string }) => {
+    const req = request(h.app).get(`/api/batches/${batch.id}/weigh-sheet.pdf`);
+    return who ? req.set(bearer(who)) : req;
+  };
+
+  it("answers the PDF inline, with the workshop, the batch code and each line's grams", async () => {
+    const res = await sheet(w.members.production)
+      .buffer(true)
+      .parse((r, done) => {
+        const chunks: Buffer[] = [];
+        r.on('data', (c: Buffer) => chunks.push(c));
+        r.on('end', () => done(null, Buffer.concat(chunks)));
+      });
+    expect(res.status).toBe(200);
+    expect(res.headers['content-type']).toBe('application/pdf');
+    expect(res.headers['content-disposition']).toContain(
+      `inline; filename="Weigh sheet ${batch.batchCode}.pdf"`,
+    );
+    const text = allText(await readPdf(res.body as Buffer));
+    expect(text).toContain('Fernhollow Soapery');
+    expect(text).toContain(batch.batchCode);
+    expect(text).toContain('Citric acid');
+    expect(text).toContain('312.4');
+  }, 120_000);
+
+  it.each(ROLES.map((r) => [r]))(
+    'as %s',
+    async (role: Role) => {
+      const res = await sheet(w.members[role]);
+      expect(res.status).toBe((ROLE_SETS.members as readonly Role[]).includes(role) ? 200 : 403);
+    },
+    60_000,
+  );
+
+  it("another workshop's batch is 404; anonymous is 401", async () => {
+    expect((await sheet(other.members.owner)).status).toBe(404);
+    expect((await sheet()).status).toBe(401);
   });
 });

@@ -1,5 +1,9 @@
 import type { Batch, BatchLine } from '@batchproof/shared';
+import type { AuthUser } from '../auth/authenticate';
+import type { Database } from '../db/database';
 import { LABEL_FONT_FAMILY, renderDocumentPdf } from '../labels/pdf';
+import { findLabelDetails } from '../workshop/workshop-repository';
+import { getBatch } from './batches-domain';
 
 /**
  * The printed weigh sheet of a batch (`GET /api/batches/:id/weigh-sheet.pdf`): what to weigh on
@@ -190,4 +194,14 @@ export function weighSheetDocument(batch: Batch, workshopName: string) {
 /** The batch's weigh sheet as a PDF. */
 export function renderWeighSheetPdf(batch: Batch, workshopName: string): Promise<Buffer> {
   return renderDocumentPdf(weighSheetDocument(batch, workshopName));
+}
+
+/** The weigh sheet of a batch of the caller's workshop (404 for any other), with its file name. */
+export async function weighSheetPdf(db: Database, actor: AuthUser, id: string) {
+  const batch = await getBatch(db, actor, id);
+  const workshop = await findLabelDetails(db, actor.workshopId);
+  return {
+    pdf: await renderWeighSheetPdf(batch, workshop?.name ?? ''),
+    fileName: `Weigh sheet ${batch.batchCode}.pdf`,
+  };
 }
