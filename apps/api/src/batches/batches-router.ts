@@ -9,6 +9,7 @@ import { idempotentCreate } from '../core/idempotency';
 import type { ProductionDeps } from '../core/production-deps';
 import { recordId } from '../core/record-id';
 import { parse } from '../core/validate';
+import { batchExtrasRouter } from './batch-extras-router';
 import * as domain from './batches-domain';
 
 const BATCH = 'That batch';
@@ -48,5 +49,7 @@ export function batchesRouter(deps: ProductionDeps) {
   router.post('/:id/release', ...write, async (req, res) => {
     res.json(await domain.releaseBatch(db, req.user!, recordId(req.params.id, BATCH)));
   });
+  // Amendments of released batches and the printed weigh sheet.
+  router.use(batchExtrasRouter(deps));
   return router;
 }
