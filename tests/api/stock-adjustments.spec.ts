@@ -77,6 +77,18 @@ describe('POST /api/lots/:id/adjustments', () => {
     expect(await stockOf(lot.id)).toBe(0);
   });
 
+  it('two adjustments competing for the last stock: exactly one succeeds and the lot never goes below zero', async () => {
+    for (let round = 0; round < 5; round++) {
+      const lot = await aKgLot(1);
+      const results = await Promise.all([
+        adjust(lot.id, { quantity: -0.6, reason: 'disposal' }, w.members.production),
+        adjust(lot.id, { quantity: -0.6, reason: 'spillage' }, w.members.formulator),
+      ]);
+      expect(results.map((r) => r.status).sort()).toEqual([201, 409]);
+      expect(await stockOf(lot.id)).toBe(0.4);
+    }
+  });
+
   it('is recorded in the audit log with the stock before and after', async () => {
     const lot = await aKgLot();
     await adjust(lot.id, { quantity: -2, reason: 'other', note: 'Sample for the lab' });
