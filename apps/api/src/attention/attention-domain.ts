@@ -1,16 +1,19 @@
 import {
   addDays,
   ATTENTION_EXPIRY_DAYS,
+  ATTENTION_LOW_STOCK_FRACTION,
   ATTENTION_ROWS_PER_KIND,
   daysBetween,
   documentStatusEntries,
   expectedDocumentKinds,
   MATERIAL_CATEGORIES,
   ROLE_SETS,
+  seriousAdverseEventClock,
   todayIso,
   type Attention,
   type AttentionItem,
   type AttentionKind,
+  type LotUnit,
   type Role,
 } from '@batchproof/shared';
 import type { AuthUser } from '../auth/authenticate';
@@ -34,8 +37,49 @@ interface Collector {
 
 const limit = ATTENTION_ROWS_PER_KIND;
 
+/** Rows of a query that counted its matches before the LIMIT, as items of one kind. */
+function counted<R extends { matched: number }>(
+  rows: R[],
+  item: (row: Omit<R, 'matched'>) => AttentionItem,
+): Collected {
+  return {
+    total: rows[0]?.matched ?? 0,
+    items: rows.map(({ matched: _matched, ...row }) => item(row)),
+  };
+}
+
 /** Every kind the home page lists, most pressing first. A new kind is one more entry here. */
 const COLLECTORS: readonly Collector[] = [
+  {
+    kind: 'complaint-clock',
+    roles: ROLE_SETS.members,
+    async collect(db, workshopId, today) {
+      const rows = await repo.unreportedSeriousComplaints(db, workshopId, limit);
+      return counted(rows, (row) => {
+        const clock = seriousAdverseEventClock({ receivedOn: row.receivedOn, today });
+        return {
+          kind: 'complaint-clock',
+          ...row,
+          dueOn: clock.dueOn,
+          businessDaysLeft: clock.businessDaysLeft!,
+          // Nothing reported, so the clock is running or overdue.
+          state: clock.state as 'running' | 'overdue',
+        };
+      });
+    },
+  },
+  {
+    kind: 'recall-open',
+    roles: ROLE_SETS.members,
+    async collect(db, workshopId) {
+      const rows = await repo.openRecalls(db, workshopId, limit);
+      return counted(rows, (row) => ({
+        kind: 'recall-open',
+        ...row,
+        openedAt: row.openedAt.toISOString(),
+      }));
+    },
+  },
   {
     kind: 'formula-blocked',
     roles: ROLE_SETS.members,
@@ -97,6 +141,43 @@ const COLLECTORS: readonly Collector[] = [
         }
       }
       return { items: items.slice(0, limit), total: items.length };
+    },
+  },
+  {
+    kind: 'lot-low-stock',
+    roles: ROLE_SETS.members,
+    async collect(db, workshopId) {
+      const rows = await repo.lowStockLots(db, workshopId, ATTENTION_LOW_STOCK_FRACTION, limit);
+      return counted(rows, (row) => ({
+        kind: 'lot-low-stock',
+        ...row,
+        unit: row.unit as LotUnit,
+      }));
+    },
+  },
+  {
+    kind: 'batch-awaiting-release',
+    roles: ROLE_SETS.members,
+    async collect(db, workshopId) {
+      const rows = await repo.draftBatches(db, workshopId, limit);
+      return counted(rows, ({ readyOn: _readyOn, ...row }) => ({
+        kind: 'batch-awaiting-release',
+        ...row,
+      }));
+    },
+  },
+  {
+    kind: 'batch-curing',
+    roles: ROLE_SETS.members,
+    async collect(db, workshopId, today) {
+      const rows = await repo.curingBatches(db, workshopId, today, limit);
+      return counted(rows, ({ madeOn: _madeOn, readyOn, ...row }) => ({
+        kind: 'batch-curing',
+        ...row,
+        // The query keeps only batches with a ready day after today.
+        readyOn: readyOn!,
+        daysLeft: daysBetween(today, readyOn!),
+      }));
     },
   },
   {

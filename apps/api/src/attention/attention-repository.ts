@@ -1,15 +1,33 @@
-import { and, asc, count, desc, eq, gt, inArray, isNotNull, isNull, lte, sql } from 'drizzle-orm';
+import {
+  and,
+  asc,
+  count,
+  desc,
+  eq,
+  gt,
+  inArray,
+  isNotNull,
+  isNull,
+  lte,
+  sql,
+  type SQL,
+} from 'drizzle-orm';
 import type { DocumentKind } from '@batchproof/shared';
 import type { Database } from '../db/database';
 import {
+  batches,
+  complaints,
   documents,
   formulas,
   formulaVersions,
   labelRuns,
+  lotConsumptions,
   lots,
   materials,
+  recalls,
   users,
 } from '../db/schema';
+import { productNameOf, soldInUs } from '../complaints/complaints-repository';
 import { documentInUse } from '../documents/documents-repository';
 import { stockOnHand } from '../lots/lots-repository';
 
@@ -179,4 +197,131 @@ export async function workshopCounts(db: Database, workshopId: string) {
     countOf(users),
   ]);
   return { materials: m, lots: l, formulas: f, members: u };
+}
+
+/**
+ * Lots with some stock left but less than `fraction` of what was received, least left first.
+ * Only lots something was taken from can be low, so the sums start from the workshop's stock
+ * movements (one grouped pass over `lot_consumptions_workshop_idx`), never from every lot.
+ */
+export async function lowStockLots(
+  db: Database,
+  workshopId: string,
+  fraction: number,
+  limit: number,
+) {
+  const result = await db.execute<{
+    lotId: string;
+    materialName: string;
+    supplierLotNumber: string;
+    quantity: number;
+    stockOnHand: number;
+    unit: string;
+    matched: number;
+  }>(sql`
+    with taken as (
+      select ${lotConsumptions.lotId} as lot_id, sum(${lotConsumptions.quantity}) as n
+      from ${lotConsumptions} where ${lotConsumptions.workshopId} = ${workshopId}
+      group by ${lotConsumptions.lotId})
+    select l.id as "lotId", m.trade_name as "materialName",
+      l.supplier_lot_number as "supplierLotNumber", l.quantity::float8 as "quantity",
+      (l.quantity - taken.n)::float8 as "stockOnHand", l.unit as "unit",
+      (count(*) over ())::int as "matched"
+    from taken
+    join ${lots} l on l.id = taken.lot_id and l.workshop_id = ${workshopId}
+    join ${materials} m on m.id = l.material_id and m.archived_at is null
+    where l.quantity - taken.n > 0 and l.quantity - taken.n < l.quantity * ${fraction}
+    order by (l.quantity - taken.n) / l.quantity, l.id
+    limit ${limit}`);
+  return result.rows;
+}
+
+/** Batches in `state`, by `order`, with their product's name (`batches_workshop_state_ready_idx`). */
+async function batchesIn(
+  db: Database,
+  workshopId: string,
+  where: SQL,
+  order: SQL[],
+  limit: number,
+) {
+  return db
+    .select({
+      batchId: batches.id,
+      batchCode: batches.batchCode,
+      productName: productNameOf(sql.raw('"batches"."formula_id"')),
+      madeOn: batches.madeOn,
+      readyOn: batches.readyOn,
+      matched,
+    })
+    .from(batches)
+    .where(and(eq(batches.workshopId, workshopId), where))
+    .orderBy(...order)
+    .limit(limit);
+}
+
+/** Released batches whose ready day is after `today`, readiest first. */
+export const curingBatches = (db: Database, workshopId: string, today: string, limit: number) =>
+  batchesIn(
+    db,
+    workshopId,
+    and(eq(batches.state, 'released'), gt(batches.readyOn, today))!,
+    [asc(batches.readyOn), asc(batches.id)],
+    limit,
+  );
+
+/** Batches started and not yet released, oldest first. */
+export const draftBatches = (db: Database, workshopId: string, limit: number) =>
+  batchesIn(
+    db,
+    workshopId,
+    eq(batches.state, 'draft'),
+    [asc(batches.madeOn), asc(batches.id)],
+    limit,
+  );
+
+/** Recalls and drills not yet closed, oldest first (`recalls_workshop_state_idx`). */
+export async function openRecalls(db: Database, workshopId: string, limit: number) {
+  return db
+    .select({
+      recallId: recalls.id,
+      reason: recalls.reason,
+      severity: recalls.severity,
+      drill: recalls.drill,
+      batchCodes: recalls.batchCodes,
+      openedAt: recalls.openedAt,
+      matched,
+    })
+    .from(recalls)
+    .where(and(eq(recalls.workshopId, workshopId), eq(recalls.state, 'open')))
+    .orderBy(asc(recalls.openedAt), asc(recalls.id))
+    .limit(limit);
+}
+
+/**
+ * Open complaints marked serious and not reported to FDA, about products sold in the US, oldest
+ * received first (`complaints_workshop_open_idx`). Every one has a running or overdue clock.
+ */
+export async function unreportedSeriousComplaints(db: Database, workshopId: string, limit: number) {
+  return db
+    .select({
+      complaintId: complaints.id,
+      productName: productNameOf(sql.raw('"complaints"."formula_id"')),
+      batchCode: sql<
+        string | null
+      >`(select ${batches.batchCode} from ${batches} where ${batches.id} = ${sql.raw('"complaints"."batch_id"')})`,
+      receivedOn: complaints.receivedOn,
+      matched,
+    })
+    .from(complaints)
+    .where(
+      and(
+        eq(complaints.workshopId, workshopId),
+        eq(complaints.status, 'open'),
+        eq(complaints.serious, true),
+        isNull(complaints.reportedToFdaOn),
+        soldInUs(sql`${workshopId}`, sql.raw('"complaints"."formula_id"')),
+      ),
+    )
+    .orderBy(asc(complaints.receivedOn), asc(complaints.id))
+    .limit(limit);
 }

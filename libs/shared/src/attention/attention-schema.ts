@@ -2,6 +2,8 @@ import * as z from 'zod';
 import { documentKindSchema, documentStatusStateSchema } from '../documents/document-schema';
 import { lotUnitSchema } from '../lots/lot-schema';
 import { roleSchema } from '../auth/roles';
+import { reportingClockStates } from '../complaints/adverse-event-clock';
+import { recallSeveritySchema } from '../deliveries/recall-schema';
 
 /**
  * Lots expiring within this many days (or already expired) while stock remains show on the home
@@ -67,6 +69,72 @@ export const labelsOutOfDateItemSchema = z.object({
   runCount: z.number().int(),
 });
 
+/**
+ * A lot counts as low in stock while some is left but less than this share of what was received.
+ * // common practice, no published source: a tenth left is when makers usually reorder.
+ */
+export const ATTENTION_LOW_STOCK_FRACTION = 0.1;
+
+/** A lot with stock left, but less than {@link ATTENTION_LOW_STOCK_FRACTION} of what was received. */
+export const lotLowStockItemSchema = z.object({
+  kind: z.literal('lot-low-stock'),
+  lotId: z.string(),
+  materialName: z.string(),
+  supplierLotNumber: z.string(),
+  /** What was received, in the lot's unit. */
+  quantity: z.number(),
+  stockOnHand: z.number(),
+  unit: lotUnitSchema,
+});
+
+/** A released batch still curing or drying: its ready day is after today. */
+export const batchCuringItemSchema = z.object({
+  kind: z.literal('batch-curing'),
+  batchId: z.string(),
+  batchCode: z.string(),
+  productName: z.string(),
+  readyOn: z.string(),
+  /** Days from today to the ready day (at least 1). */
+  daysLeft: z.number().int(),
+});
+
+/** A batch started and not yet released. */
+export const batchAwaitingReleaseItemSchema = z.object({
+  kind: z.literal('batch-awaiting-release'),
+  batchId: z.string(),
+  batchCode: z.string(),
+  productName: z.string(),
+  madeOn: z.string(),
+});
+
+/** A recall (or a recall drill) not yet closed. */
+export const recallOpenItemSchema = z.object({
+  kind: z.literal('recall-open'),
+  recallId: z.string(),
+  reason: z.string(),
+  severity: recallSeveritySchema,
+  drill: z.boolean(),
+  batchCodes: z.array(z.string()),
+  /** When it was opened (ISO timestamp). */
+  openedAt: z.string(),
+});
+
+/**
+ * An open complaint marked serious, about a product sold in the US, not yet reported to FDA:
+ * its 15-business-day clock is running or overdue (FD&C Act §605(b)(1)).
+ */
+export const complaintClockItemSchema = z.object({
+  kind: z.literal('complaint-clock'),
+  complaintId: z.string(),
+  productName: z.string(),
+  batchCode: z.string().nullable(),
+  receivedOn: z.string(),
+  dueOn: z.string(),
+  /** Business days from today to the due day; 0 on the day, negative once past. */
+  businessDaysLeft: z.number().int(),
+  state: z.enum(reportingClockStates).extract(['running', 'overdue']),
+});
+
 /** An invitation sent and not yet accepted (owners only). */
 export const invitationPendingItemSchema = z.object({
   kind: z.literal('invitation-pending'),
@@ -82,9 +150,14 @@ export const invitationPendingItemSchema = z.object({
  * on the home page.
  */
 export const attentionItemSchema = z.discriminatedUnion('kind', [
+  complaintClockItemSchema,
+  recallOpenItemSchema,
   formulaBlockedItemSchema,
   materialDocumentsItemSchema,
   lotExpiringItemSchema,
+  lotLowStockItemSchema,
+  batchAwaitingReleaseItemSchema,
+  batchCuringItemSchema,
   labelsOutOfDateItemSchema,
   invitationPendingItemSchema,
 ]);

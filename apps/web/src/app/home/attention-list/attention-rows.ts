@@ -1,10 +1,12 @@
 import { formatNumber } from '@angular/common';
 import {
   ATTENTION_EXPIRY_DAYS,
+  ATTENTION_LOW_STOCK_FRACTION,
   type Attention,
   type AttentionItem,
   type AttentionKind,
 } from '@batchproof/shared';
+import { reportingDeadline } from '../../complaints/reporting-deadline';
 import { formatDay } from '../../dates/calendar-day-pipe';
 
 /** One row on the home page: an icon, a plain sentence and where it leads. */
@@ -32,7 +34,11 @@ const inSentence = (message: string) =>
 
 const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
 
-type Formats = { date(day: string): string; number(n: number): string };
+type Formats = {
+  date(day: string): string;
+  number(n: number): string;
+  deadline(clock: Parameters<typeof reportingDeadline>[0]): string;
+};
 
 /** How each kind reads. A new kind of item gets its entry here and nowhere else on the page. */
 const KINDS: {
@@ -45,6 +51,33 @@ const KINDS: {
     row(item: Extract<AttentionItem, { kind: K }>, f: Formats): Omit<AttentionRow, 'key'>;
   };
 } = {
+  'complaint-clock': {
+    icon: 'timer',
+    heading: (n) =>
+      `${plural(n, 'serious complaint has', 'serious complaints have')} a US reporting clock running`,
+    clear: 'no serious complaint is waiting to be reported',
+    all: {
+      link: '/complaints',
+      queryParams: { serious: 'true', status: 'open' },
+      label: 'Open the serious complaints',
+    },
+    row: (i, f) => ({
+      icon: i.state === 'overdue' ? 'alarm' : 'timer',
+      link: `/complaints/${i.complaintId}`,
+      text: `${i.productName}${i.batchCode ? ` (batch ${i.batchCode})` : ''}, received ${f.date(i.receivedOn)}. ${f.deadline({ ...i, reportedOn: null })}`,
+    }),
+  },
+  'recall-open': {
+    icon: 'campaign',
+    heading: (n) => `${plural(n, 'recall is', 'recalls are')} open`,
+    clear: 'no recall is open',
+    all: { link: '/recalls', label: 'Open the recalls' },
+    row: (i, f) => ({
+      icon: 'campaign',
+      link: `/recalls/${i.recallId}`,
+      text: `${i.drill ? 'Recall drill' : 'Recall'} of ${i.batchCodes.length ? i.batchCodes.join(', ') : 'no finished lots yet'}, opened ${f.date(i.openedAt)}: ${i.reason}`,
+    }),
+  },
   'formula-blocked': {
     icon: 'block',
     heading: (n) =>
@@ -98,6 +131,40 @@ const KINDS: {
       text: `${i.materialName}: ${i.documents.map((d) => inSentence(d.message)).join('; ')}.`,
     }),
   },
+  'lot-low-stock': {
+    icon: 'inventory',
+    heading: (n) =>
+      `${plural(n, 'lot is', 'lots are')} low: less than ${ATTENTION_LOW_STOCK_FRACTION * 100} % of what was received is left`,
+    clear: `no lot is down to less than ${ATTENTION_LOW_STOCK_FRACTION * 100} % of what was received`,
+    all: { link: '/lots', label: 'Open the lots' },
+    row: (i, f) => ({
+      icon: 'inventory',
+      link: `/lots/${i.lotId}`,
+      text: `Lot ${i.supplierLotNumber} of ${i.materialName}: ${f.number(i.stockOnHand)} ${i.unit} left of ${f.number(i.quantity)} ${i.unit} received.`,
+    }),
+  },
+  'batch-awaiting-release': {
+    icon: 'pending_actions',
+    heading: (n) => `${plural(n, 'batch is', 'batches are')} waiting to be recorded and released`,
+    clear: 'no batch is waiting for release',
+    all: { link: '/production', label: 'Open production' },
+    row: (i, f) => ({
+      icon: 'pending_actions',
+      link: `/production/${i.batchId}`,
+      text: `${i.batchCode}, ${i.productName}, made ${f.date(i.madeOn)}: not released yet.`,
+    }),
+  },
+  'batch-curing': {
+    icon: 'hourglass_top',
+    heading: (n) => `${plural(n, 'batch is', 'batches are')} curing or drying`,
+    clear: 'no released batch is still curing',
+    all: { link: '/production', label: 'Open production' },
+    row: (i, f) => ({
+      icon: 'hourglass_top',
+      link: `/production/${i.batchId}`,
+      text: `${i.batchCode}, ${i.productName}: ready on ${f.date(i.readyOn)}, in ${plural(i.daysLeft, 'day', 'days')}.`,
+    }),
+  },
   'labels-out-of-date': {
     icon: 'label_off',
     heading: (n) =>
@@ -136,6 +203,7 @@ export function attentionGroups(
   const f: Formats = {
     date: (day) => formatDay(day, dateLocale),
     number: (n) => formatNumber(n, locale, '1.0-3'),
+    deadline: (clock) => reportingDeadline(clock, dateLocale),
   };
   const groups = new Map<AttentionKind, AttentionRow[]>();
   attention.items.forEach((item, index) => {
