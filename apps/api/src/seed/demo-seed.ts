@@ -5,7 +5,8 @@ import { BCRYPT_COST } from '../auth/auth-domain';
 import type { Database } from '../db/database';
 import { users, workshops } from '../db/schema';
 import { seedDemoLabels } from './demo-label-seed';
-import { seedDemoWorkspace } from './demo-workspace-seed';
+import { seedDemoProduction } from './demo-production-seed';
+import { demoOwner, seedDemoWorkspace } from './demo-workspace-seed';
 
 /**
  * Seeds the demo workshop once. On later runs it only makes sure the demo users' passwords match
@@ -28,15 +29,24 @@ export async function seedDemo(
       return workshop!.id;
     });
     await seedDemoWorkspace(db, workshopId);
+    await seedProduction(db, workshopId);
     return 'created';
   }
   // A demo database created before the workspace existed gets its materials and formulas once.
   await seedDemoWorkspace(db, existing[0]!.workshopId);
   // A demo database seeded before labels existed gets its address and product identities once.
   await seedDemoLabels(db, existing[0]!.workshopId);
+  // …and its production history once batches exist.
+  await seedProduction(db, existing[0]!.workshopId);
   const owner = existing.find((u) => u.role === 'owner') ?? existing[0]!;
   if (await bcrypt.compare(password, owner.passwordHash)) return 'unchanged';
   const passwordHash = await bcrypt.hash(password, BCRYPT_COST);
   await db.update(users).set({ passwordHash }).where(inArray(users.email, emails));
   return 'updated';
+}
+
+/** The production history, seeded as the workshop's owner. */
+async function seedProduction(db: Database, workshopId: string) {
+  const owner = await demoOwner(db, workshopId);
+  if (owner) await seedDemoProduction(db, owner);
 }

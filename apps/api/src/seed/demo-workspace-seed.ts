@@ -24,6 +24,17 @@ import { insertLot } from '../lots/lots-repository';
 import { insertMaterials } from '../materials/materials-repository';
 import { insertSupplier } from '../suppliers/suppliers-repository';
 
+/** The workshop's owner, as the seeds act: what they record is the owner's, as if entered. */
+export async function demoOwner(db: Database, workshopId: string): Promise<AuthUser | undefined> {
+  const [owner] = await db
+    .select()
+    .from(users)
+    .where(and(eq(users.workshopId, workshopId), eq(users.role, 'owner')))
+    .limit(1);
+  if (!owner) return undefined;
+  return { id: owner.id, workshopId, role: 'owner', name: owner.name, email: owner.email };
+}
+
 /** Audit action that marks the demo workspace as seeded, so it is never seeded twice. */
 const SEEDED = 'demo.workspace-seeded';
 const daysBefore = (now: Date, days: number) => addDays(todayIso(now), -days);
@@ -39,19 +50,8 @@ export async function seedDemoWorkspace(
   workshopId: string,
   now = new Date(),
 ): Promise<'seeded' | 'already-seeded'> {
-  const [owner] = await db
-    .select()
-    .from(users)
-    .where(and(eq(users.workshopId, workshopId), eq(users.role, 'owner')))
-    .limit(1);
-  if (!owner) return 'already-seeded';
-  const actor: AuthUser = {
-    id: owner.id,
-    workshopId,
-    role: 'owner',
-    name: owner.name,
-    email: owner.email,
-  };
+  const actor = await demoOwner(db, workshopId);
+  if (!actor) return 'already-seeded';
   return db.transaction(async (tx) => {
     // Serialise two starts racing on the same fresh database.
     await tx.execute('select pg_advisory_xact_lock(4242001)');
@@ -111,7 +111,11 @@ export async function seedDemoWorkspace(
         productType: f.productType,
         notes: f.notes,
         draft: {
-          lines: f.lines.map(([key, grams]) => ({ materialId: materialIds[key], grams })),
+          lines: f.lines.map(([key, grams, substitutes = []]) => ({
+            materialId: materialIds[key],
+            grams,
+            substitutes: substitutes.map((k) => materialIds[k]),
+          })),
           profile: f.profile,
           notes: null,
         },
