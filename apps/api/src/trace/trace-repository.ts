@@ -112,7 +112,10 @@ export async function finishedLotsUsingSupplierLot(
 
 /**
  * Every delivery of these finished lots (one row per delivery and lot, units summed over its
- * lines), by customer name then day. One query through delivery_lines(batch_id, delivery_id).
+ * lines), by customer name then day. The lines come through delivery_lines(batch_id,
+ * delivery_id); each line's delivery, customer and batch is then one key lookup. The lookups are
+ * LATERAL with LIMIT 1 so the planner cannot turn them into a hash join, which reads every
+ * delivery of the workshop (a full scan that grows with the years) to answer a few hundred rows.
  */
 export async function deliveriesOfFinishedLots(
   db: Database,
@@ -122,17 +125,29 @@ export async function deliveriesOfFinishedLots(
   const ids = uuidArray(batchIds);
   if (ids === '{}') return [];
   const result = await db.execute<FinishedLotDelivery & Record<string, unknown>>(sql`
-    select d.id as "deliveryId", d.delivered_on::text as "deliveredOn", d.reference,
+    select dl.delivery_id as "deliveryId", d.delivered_on::text as "deliveredOn", d.reference,
       c.id as "customerId", c.name as "customerName", c.email, c.phone,
-      b.id as "batchId", b.batch_code as "batchCode", ${productName} as "productName",
-      sum(dl.units)::int as units
-    from delivery_lines dl
-    join deliveries d on d.id = dl.delivery_id and d.workshop_id = ${workshopId}
-    join customers c on c.id = d.customer_id and c.workshop_id = ${workshopId}
-    join batches b on b.id = dl.batch_id and b.workshop_id = ${workshopId}
-    where dl.batch_id = any(${ids}::uuid[]) and dl.workshop_id = ${workshopId}
-    group by d.id, c.id, b.id
-    order by c.name, d.delivered_on, b.batch_code, d.id, b.id`);
+      fl.id as "batchId", fl.batch_code as "batchCode", fl.product_name as "productName",
+      dl.units
+    from (
+      select l.delivery_id, l.batch_id, sum(l.units)::int as units
+      from delivery_lines l
+      where l.batch_id = any(${ids}::uuid[]) and l.workshop_id = ${workshopId}
+      group by l.delivery_id, l.batch_id
+    ) dl
+    cross join lateral (
+      select x.delivered_on, x.reference, x.customer_id from deliveries x
+      where x.id = dl.delivery_id and x.workshop_id = ${workshopId} limit 1
+    ) d
+    cross join lateral (
+      select x.id, x.name, x.email, x.phone from customers x
+      where x.id = d.customer_id and x.workshop_id = ${workshopId} limit 1
+    ) c
+    cross join lateral (
+      select b.id, b.batch_code, ${productName} as product_name from batches b
+      where b.id = dl.batch_id and b.workshop_id = ${workshopId} limit 1
+    ) fl
+    order by c.name, d.delivered_on, fl.batch_code, dl.delivery_id, fl.id`);
   return result.rows;
 }
 
@@ -273,37 +288,65 @@ export async function documentsOfLotsAndMaterials(
 
 /**
  * The picker of the trace page: up to `limit` supplier lots whose number or material matches, and
- * up to `limit` finished lots whose batch code or product matches, newest first. Each side is a
- * UNION of index-backed lookups (trigram indexes on lot numbers, material names and batch codes;
- * a workshop's formulas and identities are few).
+ * up to `limit` finished lots whose batch code or product matches, newest first. Each branch
+ * takes its own newest `limit` through an index (trigram indexes on lot numbers, material names
+ * and batch codes; batches by formula and day made), so the merge and the reads of the rows shown
+ * stay small. The text matches sit behind OFFSET 0 so that they are found through the trigram
+ * index: otherwise the planner may walk the whole by-day index testing each row against the
+ * pattern, newest first, reading every batch for a code that matches only old ones.
  */
 export async function searchTrace(db: Database, workshopId: string, q: string, limit: number) {
   const p = containsPattern(q);
   const [lotRows, batchRows] = await Promise.all([
     db.execute<{ id: string; lotNumber: string; materialName: string; receivedOn: string }>(sql`
-      select l.id, l.supplier_lot_number as "lotNumber", l.material_name as "materialName",
-        l.received_on::text as "receivedOn"
-      from lots l
-      where l.workshop_id = ${workshopId} and l.id in (
-        select x.id from lots x where x.workshop_id = ${workshopId} and x.supplier_lot_number ilike ${p}
+      select hit.id, hit.supplier_lot_number as "lotNumber", hit.material_name as "materialName",
+        hit.received_on::text as "receivedOn"
+      from (
+        (select * from (
+            select l.id, l.supplier_lot_number, l.material_name, l.received_on from lots l
+            where l.workshop_id = ${workshopId} and l.supplier_lot_number ilike ${p}
+            offset 0
+          ) l
+          order by l.received_on desc, l.id desc limit ${limit})
         union
-        select x.id from lots x join materials m on m.id = x.material_id
-        where x.workshop_id = ${workshopId} and m.workshop_id = ${workshopId} and m.trade_name ilike ${p})
-      order by l.received_on desc, l.id desc
+        (select l.id, l.supplier_lot_number, l.material_name, l.received_on
+          from materials m
+          cross join lateral (
+            select l.id, l.supplier_lot_number, l.material_name, l.received_on from lots l
+            where l.material_id = m.id and l.workshop_id = ${workshopId}
+            order by l.received_on desc, l.id desc limit ${limit}
+          ) l
+          where m.workshop_id = ${workshopId} and m.trade_name ilike ${p})
+      ) hit
+      order by hit.received_on desc, hit.id desc
       limit ${limit}`),
     db.execute<{ batchId: string; batchCode: string; productName: string; madeOn: string }>(sql`
       select b.id as "batchId", b.batch_code as "batchCode", ${productName} as "productName",
         b.made_on::text as "madeOn"
-      from batches b
-      where b.workshop_id = ${workshopId} and b.state = 'released' and b.id in (
-        select x.id from batches x where x.workshop_id = ${workshopId} and x.batch_code ilike ${p}
+      from (
+        (select * from (
+            select x.id, x.made_on from batches x
+            where x.workshop_id = ${workshopId} and x.state = 'released' and x.batch_code ilike ${p}
+            offset 0
+          ) x
+          order by x.made_on desc, x.id desc limit ${limit})
         union
-        select x.id from batches x where x.workshop_id = ${workshopId} and x.formula_id in (
-          select f.id from formulas f where f.workshop_id = ${workshopId} and f.name ilike ${p}
-          union
-          select pi.formula_id from product_identities pi
-          where pi.workshop_id = ${workshopId} and pi.identity->>'productName' ilike ${p}))
-      order by b.made_on desc, b.id desc
+        (select x.id, x.made_on
+          from (
+            select f.id from formulas f where f.workshop_id = ${workshopId} and f.name ilike ${p}
+            union
+            select pi.formula_id from product_identities pi
+            where pi.workshop_id = ${workshopId} and pi.identity->>'productName' ilike ${p}
+          ) product
+          cross join lateral (
+            select x.id, x.made_on from batches x
+            where x.workshop_id = ${workshopId} and x.formula_id = product.id
+              and x.state = 'released'
+            order by x.made_on desc, x.id desc limit ${limit}
+          ) x)
+      ) hit
+      join batches b on b.id = hit.id and b.workshop_id = ${workshopId}
+      order by hit.made_on desc, hit.id desc
       limit ${limit}`),
   ]);
   return { supplierLots: lotRows.rows, finishedLots: batchRows.rows };
