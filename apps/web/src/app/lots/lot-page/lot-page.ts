@@ -20,6 +20,7 @@ import { DocumentPanel } from '../../documents/document-panel/document-panel';
 import { FormLeaving, type LeavesSafely } from '../../forms/unsaved-changes';
 import { messageOf } from '../../http/api-error';
 import { LotForm } from '../lot-form/lot-form';
+import { StockMovements } from '../stock-movements/stock-movements';
 import { EXPIRY_FLAGS, expiryState } from '../lot-expiry';
 import { LotsApi } from '../lots-api';
 import { DeleteLotDialog, type DeleteLotData } from './delete-lot-dialog';
@@ -42,6 +43,7 @@ import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
     MatIcon,
     MatProgressBar,
     RouterLink,
+    StockMovements,
   ],
   templateUrl: './lot-page.html',
   styleUrl: './lot-page.scss',
