@@ -39,6 +39,7 @@ import {
   type RemoveMemberData,
 } from '../remove-member-dialog/remove-member-dialog';
 import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
+import { ProductionSettingsCard } from '../production-settings/production-settings';
 import { WorkshopLabelDetails } from '../workshop-label-details/workshop-label-details';
 
 /**
@@ -61,6 +62,7 @@ import { WorkshopLabelDetails } from '../workshop-label-details/workshop-label-d
     MatTableModule,
     InvitationList,
     InviteForm,
+    ProductionSettingsCard,
     WorkshopLabelDetails,
   ],
   templateUrl: './members-page.html',
