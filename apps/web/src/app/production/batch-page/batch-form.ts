@@ -121,20 +121,11 @@ export function recordBody(form: BatchForm, batch: Batch): BatchRecordInput {
   };
 }
 
-/** Where a path of the record contract lives in the form (`checks.unitWeightsGrams.2` → the list). */
+/**
+ * Where a path of the record contract lives in the form (`checks.unitWeightsGrams.2` → the list).
+ * Release refusals (`batch_not_ready`, `stock_short`) name lines by their place too
+ * (`lines.0.lotPicks` is the first line), so the same map places them.
+ */
 export function recordPath(path: string): string {
   return path.startsWith('checks.unitWeightsGrams') ? 'checks.unitWeightsGrams' : path;
-}
-
-/**
- * Where a path of a release refusal lives in the form: `batch_not_ready` and `stock_short` name a
- * line by its number (`lines.3.lotPicks`, as amendments do), and line 3 is the form's third line.
- */
-export function releasePath(batch: Batch): (path: string) => string {
-  return (path) => {
-    const match = /^lines\.(\d+)(\..*)?$/.exec(path);
-    if (!match) return recordPath(path);
-    const index = batch.lines.findIndex((l) => l.lineNumber === Number(match[1]));
-    return index < 0 ? path : `lines.${index}${match[2] ?? ''}`;
-  };
 }

@@ -42,14 +42,7 @@ import { BatchesApi } from '../batches-api';
 import { focusFirstError } from '../focus-first-error';
 import { LotChoices } from '../lot-choices';
 import { AmendmentForm } from './amendment-form';
-import {
-  batchForm,
-  type BatchForm,
-  readUnitWeights,
-  recordBody,
-  recordPath,
-  releasePath,
-} from './batch-form';
+import { batchForm, type BatchForm, readUnitWeights, recordBody, recordPath } from './batch-form';
 import { BatchRecordView } from './batch-record-view';
 import { DeleteBatchDialog } from './delete-batch-dialog';
 import { WeighSheet } from './weigh-sheet';
@@ -246,7 +239,7 @@ export default class BatchPage implements LeavesSafely {
         this.sending.set(false);
         const form = this.form();
         if (form && err instanceof ApiError)
-          this.notice.set(showRequestError(form, err, releasePath(b)));
+          this.notice.set(showRequestError(form, err, recordPath));
         else this.notice.set(messageOf(err));
         this.focusError();
       },
