@@ -7,7 +7,7 @@ import {
   linkedSignal,
   signal,
 } from '@angular/core';
-import { MatButton, MatIconButton } from '@angular/material/button';
+import { MatAnchor, MatButton, MatIconButton } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatIcon } from '@angular/material/icon';
 import { MatProgressBar } from '@angular/material/progress-bar';
@@ -20,7 +20,7 @@ import {
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { MatSort, MatSortHeader, type Sort } from '@angular/material/sort';
 import { MatTableModule } from '@angular/material/table';
-import { ActivatedRoute, Router } from '@angular/router';
+import { ActivatedRoute, Router, RouterLink } from '@angular/router';
 import {
   type Invitation,
   type Member,
@@ -50,6 +50,7 @@ import { WorkshopLabelDetails } from '../workshop-label-details/workshop-label-d
   selector: 'bp-members-page',
   imports: [
     CalendarDayPipe,
+    MatAnchor,
     MatButton,
     MatIcon,
     MatIconButton,
@@ -63,6 +64,7 @@ import { WorkshopLabelDetails } from '../workshop-label-details/workshop-label-d
     InvitationList,
     InviteForm,
     ProductionSettingsCard,
+    RouterLink,
     WorkshopLabelDetails,
   ],
   templateUrl: './members-page.html',
