@@ -3,7 +3,7 @@ import { inject, Injectable } from '@angular/core';
 import { map, type Observable } from 'rxjs';
 
 /** The records that can be archived and deleted, by their API path. */
-export type ArchivableKind = 'materials' | 'suppliers' | 'formulas' | 'documents';
+export type ArchivableKind = 'materials' | 'suppliers' | 'formulas' | 'documents' | 'customers';
 
 /** What archiving answers of any record: its id and when it was archived (null once back). */
 export interface ArchiveState {
@@ -11,7 +11,7 @@ export interface ArchiveState {
   archivedAt: string | null;
 }
 
-/** Archive, unarchive and delete for any record kind (the routes are the same for all four). */
+/** Archive, unarchive and delete for any record kind (the routes are the same for every kind). */
 @Injectable({ providedIn: 'root' })
 export class HousekeepingApi {
   private readonly http = inject(HttpClient);
