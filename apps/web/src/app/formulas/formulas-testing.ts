@@ -71,6 +71,7 @@ export function aVersion(
       materialName: l.material.tradeName,
       grams: l.grams,
       percent: total > 0 ? (l.grams / total) * 100 : 0,
+      substitutes: [],
     })),
     totalGrams: total,
     profile: BATH_PROFILE,

@@ -7,18 +7,23 @@ import {
   type FormulaVersionInput,
   formulaVersionInputSchema,
   type ProductType,
+  type StoredSubstitute,
 } from '@batchproof/shared';
 import { contractErrors, type FieldErrors } from '../../forms/form-errors';
 
 /** How the maker enters amounts: grams per line, or percent per line with a batch total. */
 export type EntryMode = 'grams' | 'percent';
 
-/** One editable line: the material picker holds `materialId`; `materialName` is what it shows. */
+/**
+ * One editable line: the material picker holds `materialId`; `materialName` is what it shows;
+ * `substitutes` the approved alternatives, in order.
+ */
 export type LineGroup = FormGroup<{
   materialId: FormControl<string>;
   materialName: FormControl<string>;
   grams: FormControl<number | null>;
   percent: FormControl<number | null>;
+  substitutes: FormControl<StoredSubstitute[]>;
 }>;
 
 /** What a new or loaded line starts with. */
@@ -27,6 +32,7 @@ export interface LineSeed {
   materialName: string;
   grams: number | null;
   percent: number | null;
+  substitutes?: readonly StoredSubstitute[];
 }
 
 const round = (n: number, places: number) => Math.round(n * 10 ** places) / 10 ** places;
@@ -38,6 +44,7 @@ export function lineGroup(fb: NonNullableFormBuilder, seed: LineSeed): LineGroup
     materialName: seed.materialName,
     grams: fb.control<number | null>(seed.grams),
     percent: fb.control<number | null>(seed.percent),
+    substitutes: fb.control<StoredSubstitute[]>([...(seed.substitutes ?? [])]),
   });
 }
 
@@ -105,6 +112,10 @@ export function profileOf(v: Pick<FormulaFormValue, 'productType' | 'profile'>) 
   };
 }
 
+/** A line's substitutes for the body; left out when it has none (a PUT then stores none). */
+const substituteIds = (l: FormulaFormValue['lines'][number]) =>
+  l.substitutes.length > 0 ? { substitutes: l.substitutes.map((s) => s.materialId) } : {};
+
 /** The version body for `PUT /api/formulas/:id/versions/:n`, before the shared schema checks it. */
 export function toVersionInput(v: FormulaFormValue): FormulaVersionInput {
   const profile = profileOf(v);
@@ -112,7 +123,11 @@ export function toVersionInput(v: FormulaFormValue): FormulaVersionInput {
   const blank = null as unknown as number;
   if (v.entry === 'grams') {
     return {
-      lines: v.lines.map((l) => ({ materialId: l.materialId, grams: l.grams ?? blank })),
+      lines: v.lines.map((l) => ({
+        materialId: l.materialId,
+        grams: l.grams ?? blank,
+        ...substituteIds(l),
+      })),
       profile,
       notes: v.notes,
     };
@@ -120,7 +135,11 @@ export function toVersionInput(v: FormulaFormValue): FormulaVersionInput {
   return {
     byPercent: {
       batchGrams: v.batchGrams ?? blank,
-      lines: v.lines.map((l) => ({ materialId: l.materialId, percent: l.percent ?? blank })),
+      lines: v.lines.map((l) => ({
+        materialId: l.materialId,
+        percent: l.percent ?? blank,
+        ...substituteIds(l),
+      })),
     },
     profile,
     notes: v.notes,
@@ -141,10 +160,11 @@ export function draftErrors(v: FormulaFormValue): FieldErrors {
 
 /**
  * Where a contract path shows in the editor: percent lines and the batch total sit at the top
- * level (a line's `materialId` is its picker's own control).
+ * level (a line's `materialId` is its picker's own control); a message on one substitute shows on
+ * the line's substitutes.
  */
 export function editorPath(path: string): string {
-  return path.replace(/^byPercent\./, '');
+  return path.replace(/^byPercent\./, '').replace(/^(lines\.\d+\.substitutes)\.\d+$/, '$1');
 }
 
 /**

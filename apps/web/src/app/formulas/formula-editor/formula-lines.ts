@@ -20,6 +20,7 @@ import { MatTooltip } from '@angular/material/tooltip';
 import { errorMessage } from '../../forms/form-errors';
 import { MaterialPicker } from '../../materials/material-picker/material-picker';
 import { VolumeDialog, type VolumeLine } from '../scaling/volume-dialog';
+import { LineSubstitutes } from './line-substitutes';
 import {
   type EntryMode,
   type FormulaForm,
@@ -34,7 +35,8 @@ const EMPTY_LINE: LineSeed = { materialId: '', materialName: '', grams: null, pe
 
 /**
  * The formula's lines: a material and an amount each, in grams or in percent of a batch total
- * (switching converts). Totals and each line's share follow every keystroke. Lines are added,
+ * (switching converts), and any approved substitutes. Totals and each line's share follow every
+ * keystroke. Lines are added,
  * removed and moved with ordinary buttons, so all of it works from the keyboard.
  */
 @Component({
@@ -54,6 +56,7 @@ const EMPTY_LINE: LineSeed = { materialId: '', materialName: '', grams: null, pe
     MatSuffix,
     MatTooltip,
     MaterialPicker,
+    LineSubstitutes,
   ],
   templateUrl: './formula-lines.html',
   styleUrl: './formula-lines.scss',

@@ -151,7 +151,15 @@ export default class FormulaPage implements LeavesSafely {
 
   private readonly materialIds = computed(
     () =>
-      [...new Set((this.state()?.value.lines ?? []).map((l) => l.materialId))]
+      // Substitutes too: the live check runs the engine with each in its line's place.
+      [
+        ...new Set(
+          (this.state()?.value.lines ?? []).flatMap((l) => [
+            l.materialId,
+            ...l.substitutes.map((s) => s.materialId),
+          ]),
+        ),
+      ]
         .filter(Boolean)
         .sort(),
     { equal: sameIds },

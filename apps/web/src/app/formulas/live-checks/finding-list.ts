@@ -56,6 +56,12 @@ const MARKET_NAMES = new Map(MARKETS.map((m) => [m.code, m.name]));
               <div class="head">
                 <bp-severity-label [severity]="f.finding.severity" />
                 <span class="subject">{{ f.finding.subject }}</span>
+                @if (f.finding.substitute; as sub) {
+                  <span class="substitute">
+                    <mat-icon aria-hidden="true">swap_horiz</mat-icon>
+                    Substitute {{ sub.materialName }}, line {{ sub.lineNumber }}
+                  </span>
+                }
               </div>
               <p class="message">{{ f.text }}</p>
               @if (f.harm) {
@@ -119,6 +125,20 @@ const MARKET_NAMES = new Map(MARKETS.map((m) => [m.code, m.name]));
     .subject {
       font-weight: 600;
       overflow-wrap: anywhere;
+    }
+    .substitute {
+      display: inline-flex;
+      align-items: center;
+      gap: 4px;
+      color: var(--mat-sys-on-surface-variant);
+      font: var(--mat-sys-body-small);
+      overflow-wrap: anywhere;
+    }
+    .substitute mat-icon {
+      flex: none;
+      font-size: 16px;
+      width: 16px;
+      height: 16px;
     }
     p {
       margin: 4px 0 0;

@@ -60,6 +60,16 @@ const MARKET_NAMES = new Map(MARKETS.map((m) => [m.code, m.name]));
           </span>
         </h3>
         <bp-finding-list [findings]="result.findings" [markets]="result.markets" />
+        @if (substitutesChecked().length > 0) {
+          <ul class="substitutes" aria-label="Approved substitutes checked">
+            @for (s of substitutesChecked(); track s.key) {
+              <li>
+                <mat-icon aria-hidden="true">swap_horiz</mat-icon>
+                <span>{{ s.text }}</span>
+              </li>
+            }
+          </ul>
+        }
       </section>
       <section aria-labelledby="live-declarations">
         <h3 id="live-declarations">Ingredient declaration</h3>
@@ -131,6 +141,26 @@ const MARKET_NAMES = new Map(MARKETS.map((m) => [m.code, m.name]));
       margin: 4px 0 0;
       padding-left: 20px;
     }
+    .substitutes {
+      list-style: none;
+      margin: 8px 0 0;
+      padding: 0;
+      display: grid;
+      gap: 4px;
+      color: var(--mat-sys-on-surface-variant);
+      font: var(--mat-sys-body-medium);
+    }
+    .substitutes li {
+      display: flex;
+      gap: 6px;
+      align-items: flex-start;
+    }
+    .substitutes mat-icon {
+      flex: none;
+      font-size: 18px;
+      width: 18px;
+      height: 18px;
+    }
     .declarations {
       margin: 0;
       display: grid;
@@ -160,5 +190,25 @@ export class LiveChecks {
       warn: findings.filter((f) => f.severity === 'warn').length,
       info: findings.filter((f) => f.severity === 'info').length,
     };
+  });
+  /** Each approved substitute checked, and what it adds to the formula's own findings. */
+  protected readonly substitutesChecked = computed(() => {
+    const result = this.evaluation().result;
+    return (result?.substitutes ?? []).map((s) => {
+      const own = result!.findings.filter(
+        (f) =>
+          f.substitute?.lineNumber === s.lineNumber && f.substitute.materialId === s.materialId,
+      );
+      const blocks = own.filter((f) => f.severity === 'block').length;
+      const adds =
+        own.length === 0
+          ? 'adds no finding'
+          : `adds ${own.length} finding${own.length === 1 ? '' : 's'}` +
+            (blocks > 0 ? `, ${blocks} blocking` : '');
+      return {
+        key: `${s.lineNumber}|${s.materialId}`,
+        text: `${s.materialName} in place of ${s.replacesName} (line ${s.lineNumber}) checked: ${adds}.`,
+      };
+    });
   });
 }

@@ -1,12 +1,12 @@
 import {
-  evaluateFormula,
+  evaluateWithSubstitutes,
   type EvaluationResult,
   type FizzBalance,
   fizzBalance,
   fizzReactants,
   type Material,
-  prepareEvaluation,
   type ProductType,
+  type SubstituteSource,
 } from '@batchproof/shared';
 import { type FormulaFormValue, lineGrams, profileOf } from '../formula-editor/formula-form';
 import { isEffervescent } from '../product-types';
@@ -33,9 +33,10 @@ export interface LiveEvaluation {
 }
 
 /**
- * Runs the shared compliance engine on the editor's current value through `prepareEvaluation`,
- * the same builder the server uses on save, with the profile as it would be saved. Lines without a chosen material are left out
- * (and said so); nothing here throws on half-typed input.
+ * Runs the shared compliance engine on the editor's current value through
+ * `evaluateWithSubstitutes` (once for the formula, once more per approved substitute), the same
+ * path the server takes on save, with the profile as it would be saved. Lines without a chosen
+ * material are left out (and said so); nothing here throws on half-typed input.
  */
 export function evaluateDraft(
   value: FormulaFormValue,
@@ -46,6 +47,7 @@ export function evaluateDraft(
   const problems: string[] = [];
   let pending = false;
   const lines: { grams: number; material: Material }[] = [];
+  const substitutes: SubstituteSource[] = [];
   value.lines.forEach((line, i) => {
     if (!line.materialId) {
       problems.push(`Line ${i + 1} has no material yet: choose one from the list.`);
@@ -55,6 +57,17 @@ export function evaluateDraft(
     if (!material) {
       pending = true;
       return;
+    }
+    for (const { materialId } of line.substitutes) {
+      const substitute = materials.get(materialId);
+      if (substitute)
+        substitutes.push({
+          lineIndex: lines.length,
+          lineNumber: i + 1,
+          materialId,
+          material: substitute,
+        });
+      else pending = true;
     }
     lines.push({ grams: grams[i]!, material });
   });
@@ -67,19 +80,20 @@ export function evaluateDraft(
   }));
   const fizz = fizzFor(value.productType, lines);
 
-  const prepared = prepareEvaluation({
-    asOf,
-    productName: value.name,
-    productType: value.productType,
-    profile: profileOf(value),
-    lines,
-  });
-  if (!prepared.ok) {
-    problems.push(...prepared.problems);
-    return { result: null, problems, pending, fizz, composition, totalGrams };
-  }
+  const checked = evaluateWithSubstitutes(
+    {
+      asOf,
+      productName: value.name,
+      productType: value.productType,
+      profile: profileOf(value),
+      lines,
+    },
+    substitutes,
+  );
+  problems.push(...checked.problems);
+  if (!checked.ok) return { result: null, problems, pending, fizz, composition, totalGrams };
   return {
-    result: evaluateFormula(prepared.input),
+    result: checked.result,
     problems,
     pending,
     fizz,
