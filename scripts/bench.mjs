@@ -13,6 +13,7 @@ const benches = [
   'apps/api/bench/import-bench.ts',
   'apps/api/bench/label-pdf-bench.ts',
   'apps/api/bench/public-page-bench.ts',
+  'apps/api/bench/trace-bench.ts',
   'scripts/initial-bundle-check.mjs',
 ];
 let failed = false;

@@ -62,3 +62,17 @@ export async function startBench(name: string, poolSize: number) {
     },
   };
 }
+
+/** p50 and p95 of `run`, one call at a time, after five warm-up calls. */
+export async function latency(run: () => Promise<unknown>, runs: number) {
+  for (let i = 0; i < 5; i++) await run();
+  const times: number[] = [];
+  for (let i = 0; i < runs; i++) {
+    const start = performance.now();
+    await run();
+    times.push(performance.now() - start);
+  }
+  times.sort((a, b) => a - b);
+  const p = (q: number) => times[Math.min(times.length - 1, Math.ceil(q * times.length) - 1)]!;
+  return { p50: p(0.5), p95: p(0.95) };
+}

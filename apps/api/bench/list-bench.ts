@@ -4,7 +4,7 @@
 // a trivial query's measured in the same run (so a slower or busier machine moves both), never
 // asserts, and deletes its workshop at the end. Run: npx tsx apps/api/bench/list-bench.ts
 import { sql } from 'drizzle-orm';
-import { startBench } from './bench-app';
+import { latency, startBench } from './bench-app';
 
 const MATERIALS = 10_000;
 const LOTS = 100_000;
@@ -36,20 +36,6 @@ console.log(
   `seeded ${MATERIALS} materials and ${LOTS} lots in ${Math.round(performance.now() - t)} ms`,
 );
 
-/** p50 and p95 of `run`, one call at a time, after a warm-up. */
-async function latency(run: () => Promise<unknown>, runs = RUNS) {
-  for (let i = 0; i < 5; i++) await run();
-  const times: number[] = [];
-  for (let i = 0; i < runs; i++) {
-    const start = performance.now();
-    await run();
-    times.push(performance.now() - start);
-  }
-  times.sort((a, b) => a - b);
-  const p = (q: number) => times[Math.min(times.length - 1, Math.ceil(q * times.length) - 1)]!;
-  return { p50: p(0.5), p95: p(0.95) };
-}
-
 const ms = (n: number) => `${n.toFixed(1).padStart(6)} ms`;
 
 // The trivial query every figure is set against: `select 1` through the same app and pool, with
@@ -60,7 +46,7 @@ console.log(
 );
 
 async function measure(label: string, target: number, run: () => Promise<unknown>) {
-  const { p50, p95 } = await latency(run);
+  const { p50, p95 } = await latency(run, RUNS);
   const ratio = `${(p95 / trivial.p95).toFixed(1)}× trivial`;
   const verdict = p95 < target ? 'within' : 'OVER';
   console.log(
