@@ -2,16 +2,12 @@ import type * as z from 'zod';
 import {
   MATERIAL_CATEGORIES,
   MATERIAL_CATEGORY_LABELS,
-  UTF16_HELP,
-  UTF16_REFUSAL,
-  isUtf16,
   type MaterialCategory,
 } from '@batchproof/shared';
-import { AppError } from '../core/app-error';
 
 /**
  * The words of the materials CSV's messages: problems keyed by the file's column headers, said
- * in the screen's words, and the refusal of a file that is not UTF-8.
+ * in the screen's words. (A file that is not UTF-8 is refused in core/csv-upload.ts.)
  */
 
 /** Case, spaces, dashes and underscores folded, so "Essential oil" and "essential-oil" meet. */
@@ -72,14 +68,4 @@ export function columnErrors(error: z.ZodError, categoryCell: string) {
     if (!list.includes(message)) list.push(message);
   }
   return out;
-}
-
-/**
- * Refuses a file saved as UTF-16 (what Excel calls "Unicode text"): a byte-order mark, or NUL
- * bytes, which UTF-8 text never holds (see `isUtf16`).
- */
-export function refuseUtf16(content: Buffer | string): void {
-  const utf16 = isUtf16(content);
-  if (!utf16) return;
-  throw new AppError(400, 'validation_failed', UTF16_REFUSAL, { file: [UTF16_HELP] });
 }
