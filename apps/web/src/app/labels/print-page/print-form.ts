@@ -24,13 +24,23 @@ export const MOVABLE_FIELDS: readonly { key: LabelFieldKey; name: string }[] = [
   { key: 'productCode', name: 'Product code' },
 ];
 
-/** The print form, for a version sold in `markets`, on `stockId` to start with. */
+/** What a batch fixes on its labels: its batch code as the lot code, and its expiry. */
+export interface BatchLot {
+  batchCode: string;
+  expiresOn: string | null;
+}
+
+/**
+ * The print form, for a version sold in `markets`, on `stockId` to start with. For a batch the
+ * lot code and expiry are the batch's and cannot be changed.
+ */
 export function createPrintForm(
   fb: NonNullableFormBuilder,
   markets: readonly ComplianceMarket[],
   stockId: string,
+  batch?: BatchLot,
 ) {
-  return fb.group({
+  const form = fb.group({
     markets: fb.control<ComplianceMarket[]>([...markets]),
     stockId,
     layout: fb.control<LabelLayout>('single'),
@@ -40,17 +50,22 @@ export function createPrintForm(
     ),
     startPosition: fb.control<number>(1),
     copies: fb.control<number | null>(1),
-    lotCode: '',
-    expiresOn: '',
+    lotCode: batch?.batchCode ?? '',
+    expiresOn: batch?.expiresOn ?? '',
     barcode: fb.control<LotBarcode>('gs1-datamatrix'),
   });
+  if (batch) {
+    form.controls.lotCode.disable();
+    form.controls.expiresOn.disable();
+  }
+  return form;
 }
 export type PrintForm = ReturnType<typeof createPrintForm>;
 
 /** The request body for `POST /api/label-runs` the form stands for. */
 export function printBody(
   form: PrintForm,
-  run: { formulaId: string; version: number; overrideReason?: string },
+  run: { formulaId: string; version: number; overrideReason?: string; batchId?: string },
 ): LabelRunCreate {
   const v = form.getRawValue();
   const placement = Object.fromEntries(
@@ -70,5 +85,6 @@ export function printBody(
     barcode: v.barcode,
     outerPackConfirmed: v.layout === 'small' && v.outerPackConfirmed,
     ...(run.overrideReason ? { overrideReason: run.overrideReason } : {}),
+    ...(run.batchId ? { batchId: run.batchId } : {}),
   };
 }

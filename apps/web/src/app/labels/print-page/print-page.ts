@@ -10,6 +10,7 @@ import {
   untracked,
 } from '@angular/core';
 import { toObservable, toSignal } from '@angular/core/rxjs-interop';
+import { httpResource } from '@angular/common/http';
 import { NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import { MatRadioButton, MatRadioGroup } from '@angular/material/radio';
@@ -23,6 +24,7 @@ import { MatOption, MatSelect } from '@angular/material/select';
 import { RouterLink } from '@angular/router';
 import { map, of, startWith, switchMap } from 'rxjs';
 import {
+  batchSchema,
   type ComplianceMarket,
   labelRunCreateSchema,
   type LabelRunRecord,
@@ -46,7 +48,9 @@ import { StartPositionGrid } from './start-position-grid';
 const MARKET_NAMES = new Map(MARKETS.map((m) => [m.code, m.name]));
 
 /**
- * Prints labels for a released formula version (`/labels/print?formula=<id>&version=<n>`):
+ * Prints labels for a released formula version (`/labels/print?formula=<id>&version=<n>`), or
+ * for a released batch (`/labels/print?batch=<id>`: the formula, the version it was made of, the
+ * lot code and the expiry come from the batch, and production may print it):
  * markets, stock, layout, start position on a part-used sheet, copies, lot code, expiry and
  * barcode, checked with the shared `labelRunCreateSchema`. A refusal lists what is missing per
  * market with links to the fields, or what cannot fit; a run shows its progress, then its PDF.
@@ -85,6 +89,8 @@ export default class PrintPage {
   readonly formula = input<string>();
   /** The released version's number, from the `version` query parameter. */
   readonly version = input<string>();
+  /** A batch to print for, from the `batch` query parameter; it fixes formula, version and lot. */
+  readonly batch = input<string>();
 
   private readonly fb = inject(NonNullableFormBuilder);
   private readonly runsApi = inject(LabelRunsApi);
@@ -98,33 +104,65 @@ export default class PrintPage {
   protected readonly movable = MOVABLE_FIELDS;
   protected readonly marketNames = MARKET_NAMES;
 
-  protected readonly canPrint = computed(() => this.session.hasRole(ROLE_SETS.writers));
+  /** The batch printed for, read while the `batch` parameter names one. */
+  protected readonly batchRecord = httpResource(
+    () => {
+      const id = this.batch();
+      return id ? `/api/batches/${encodeURIComponent(id)}` : undefined;
+    },
+    { parse: (body) => batchSchema.parse(body) },
+  );
+  protected readonly forBatch = computed(() =>
+    this.batch() && this.batchRecord.hasValue() ? this.batchRecord.value() : undefined,
+  );
+  /** Production prints for a batch; the owner and formulators print for either. */
+  protected readonly canPrint = computed(() =>
+    this.session.hasRole(this.batch() ? ROLE_SETS.goodsIn : ROLE_SETS.writers),
+  );
   protected readonly isOwner = computed(() => this.session.hasRole(ROLE_SETS.ownerOnly));
+  /** The formula printed: the batch's, else the `formula` parameter. */
+  protected readonly formulaId = computed(() =>
+    this.batch() ? this.forBatch()?.formulaId : this.formula(),
+  );
   protected readonly number = computed(() => {
+    if (this.batch()) return this.forBatch()?.version;
     const n = Number(this.version());
     return Number.isInteger(n) && n > 0 ? n : undefined;
   });
-  protected readonly formulaMeta = this.formulasApi.formula(() => this.formula());
+  protected readonly formulaMeta = this.formulasApi.formula(() => this.formulaId());
   protected readonly versionRecord = this.formulasApi.version(() => {
-    const id = this.formula();
+    const id = this.formulaId();
     const n = this.number();
     return id && n ? { id, n } : undefined;
   });
   protected readonly stocks = inject(LabelStocksApi).stocks();
   protected readonly loadError = computed(() => {
-    const error = this.formulaMeta.error() ?? this.versionRecord.error() ?? this.stocks.error();
+    const error =
+      this.batchRecord.error() ??
+      this.formulaMeta.error() ??
+      this.versionRecord.error() ??
+      this.stocks.error();
     return error ? messageOf(error) : '';
   });
-  protected readonly released = computed(
-    () => this.versionRecord.hasValue() && this.versionRecord.value().state === 'released',
-  );
+  /** Whether labels may be printed from here: a released version, or a released batch. */
+  protected readonly released = computed(() => {
+    if (!this.versionRecord.hasValue()) return false;
+    // A batch prints from the version it was made of, even once a newer one is released.
+    if (this.batch()) return this.forBatch()?.state === 'released';
+    return this.versionRecord.value().state === 'released';
+  });
 
   /** The form, built once the version and the stocks are read. */
   protected readonly form = computed(() => {
     if (!this.versionRecord.hasValue() || !this.stocks.hasValue()) return undefined;
+    if (this.batch() && !this.forBatch()) return undefined;
     const markets = this.versionRecord.value().profile.markets;
     const first = this.stocks.value()[0]?.id ?? '';
-    return untracked(() => createPrintForm(this.fb, markets, first));
+    const batch = this.forBatch();
+    const lot = batch
+      ? { batchCode: batch.batchCode, expiresOn: batch.durability.expiresOn }
+      : undefined;
+    return untracked(() => createPrintForm(this.fb, markets, first, lot));
   });
   /** The form's value as it changes, for the parts of the page that follow it. */
   protected readonly value = toSignal(
@@ -193,19 +231,20 @@ export default class PrintPage {
   /** Checks the form with the shared schema and records the run (with the owner's reason). */
   print(overrideReason?: string): void {
     const form = this.form();
-    const formulaId = this.formula();
+    const formulaId = this.formulaId();
     const version = this.number();
     if (!form || !formulaId || !version || this.sending()) return;
     this.notice.set('');
+    const run = { formulaId, version, overrideReason, batchId: this.forBatch()?.id };
     const { value, notice } = checkForm(form, {
       schema: labelRunCreateSchema,
-      body: printBody(form, { formulaId, version, overrideReason }),
+      body: printBody(form, run),
     });
     if (!value) {
       this.notice.set(notice || 'Some fields need attention; each says why below it.');
       return;
     }
-    const body = printBody(form, { formulaId, version, overrideReason });
+    const body = printBody(form, run);
     this.sending.set(true);
     this.run.set(null);
     this.runsApi.create(body, this.submission.for(body)).subscribe({
