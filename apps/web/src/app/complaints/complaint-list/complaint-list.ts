@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, computed, inject, LOCALE_ID } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { MatAnchor, MatButton } from '@angular/material/button';
 import { MatFormField, MatLabel, MatPrefix } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
@@ -10,6 +10,7 @@ import { MatTableModule } from '@angular/material/table';
 import { RouterLink } from '@angular/router';
 import { type Complaint, complaintListQuerySchema, ROLE_SETS } from '@batchproof/shared';
 import { Session } from '../../auth/session';
+import { browserLocale } from '../../dates/calendar-day-adapter';
 import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
 import { ListCard } from '../../lists/list-card';
 import { injectUrlListQuery, keepLastValue } from '../../lists/url-list-query';
@@ -46,7 +47,8 @@ import { reportingDeadline } from '../reporting-deadline';
 })
 export default class ComplaintList {
   private readonly session = inject(Session);
-  private readonly locale = inject(LOCALE_ID);
+  /** Dates read in the browser's language, as the day pipe shows them. */
+  private readonly locale = browserLocale();
   protected readonly canRecord = computed(() => this.session.hasRole(ROLE_SETS.goodsIn));
   protected readonly columns = [
     'receivedOn',

@@ -4,7 +4,6 @@ import {
   computed,
   inject,
   input,
-  LOCALE_ID,
   linkedSignal,
   signal,
   untracked,
@@ -31,7 +30,7 @@ import {
   todayIso,
 } from '@batchproof/shared';
 import { Session } from '../../auth/session';
-import { provideCalendarDays } from '../../dates/calendar-day-adapter';
+import { browserLocale, provideCalendarDays } from '../../dates/calendar-day-adapter';
 import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
 import { errorMessage, validateForm } from '../../forms/form-errors';
 import { sendForm } from '../../forms/send-form';
@@ -82,7 +81,8 @@ export default class ComplaintPage implements LeavesSafely {
   private readonly router = inject(Router);
   private readonly snackBar = inject(MatSnackBar);
   private readonly fb = inject(NonNullableFormBuilder);
-  private readonly locale = inject(LOCALE_ID);
+  /** Dates read in the browser's language, as the day pipe shows them. */
+  private readonly locale = browserLocale();
   private readonly submission = new SubmissionKey();
 
   protected readonly help = SERIOUS_ADVERSE_EVENT_HELP;
