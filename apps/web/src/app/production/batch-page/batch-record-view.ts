@@ -43,27 +43,29 @@ import { BATCH_FIELDS, fieldLabel, releasedValue, valueText } from './amendable-
       }
     </section>
 
-    <section class="card" aria-labelledby="amendments-heading">
-      <h2 id="amendments-heading">Amendments</h2>
-      @if (b.amendments.length === 0) {
-        <p class="muted">
-          None. A released batch never changes; a correction is recorded here with its reason.
-        </p>
-      } @else {
-        <ol class="amendments">
-          @for (a of amendments(); track a.id) {
-            <li>
-              <strong>{{ a.label }}</strong>: {{ a.previous }} → {{ a.value }}
-              <span class="muted">
-                · <time [attr.datetime]="a.amendedAt">{{ a.amendedAt | day }}</time> ·
-                {{ a.amendedBy }}</span
-              >
-              <span class="reason">{{ a.reason }}</span>
-            </li>
-          }
-        </ol>
-      }
-    </section>
+    @if (b.state === 'released') {
+      <section class="card" aria-labelledby="amendments-heading">
+        <h2 id="amendments-heading">Amendments</h2>
+        @if (b.amendments.length === 0) {
+          <p class="muted">
+            None. A released batch never changes; a correction is recorded here with its reason.
+          </p>
+        } @else {
+          <ol class="amendments">
+            @for (a of amendments(); track a.id) {
+              <li>
+                <strong>{{ a.label }}</strong>: {{ a.previous }} → {{ a.value }}
+                <span class="muted">
+                  · <time [attr.datetime]="a.amendedAt">{{ a.amendedAt | day }}</time> ·
+                  {{ a.amendedBy }}</span
+                >
+                <span class="reason">{{ a.reason }}</span>
+              </li>
+            }
+          </ol>
+        }
+      </section>
+    }
   `,
   styles: `
     :host {
