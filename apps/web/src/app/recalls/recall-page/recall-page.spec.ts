@@ -20,6 +20,9 @@ import { signedInAs } from '../../auth/signed-in-as';
 import NewRecall from '../new-recall/new-recall';
 import RecallPage from './recall-page';
 
+/** A supplier lot's id (scopes carry record ids). */
+const LOT = '7d3e1c0a-5b2f-4c1d-9e8a-1f2b3c4d5e6f';
+
 const HARBOUR = {
   customerId: 'c1',
   customerName: 'Harbour Soap Shop',
@@ -56,7 +59,7 @@ function aRecall(overrides: Partial<Recall> = {}): Recall {
     id: 'r1',
     createdAt: '2026-03-01T09:00:00.000Z',
     updatedAt: '2026-03-01T09:00:00.000Z',
-    scope: { kind: 'supplier-lot', supplierLotId: 'l1' },
+    scope: { kind: 'supplier-lot', supplierLotId: LOT },
     batchCodes: ['261101-SGF-1', '261102-SGF-2'],
     reason: 'Possible metal fragments in the citric acid.',
     severity: 'serious-harm',
@@ -117,8 +120,8 @@ describe('RecallPage', () => {
     expect(await dialog.getContentText()).toContain('1 customer(s) get the notice by e-mail now');
     expect(await dialog.getContentText()).toContain('1 customer(s) have no e-mail address');
     page.backend.expectNone((r) => r.url === '/api/recalls/r1/notices');
-    await page.click('Send notices', dialog);
-
+    // The click settles once the answer is in, so it is awaited after the answer is given.
+    const clicked = page.click('Send notices', dialog);
     const post = await sent(page.backend, (r) => r.url === '/api/recalls/r1/notices');
     expect(post.request.body).toEqual({ whatToDo: null });
     post.flush(
@@ -145,6 +148,7 @@ describe('RecallPage', () => {
         ],
       }),
     );
+    await clicked;
     await page.harness.fixture.whenStable();
     expect(page.text()).toContain('Sent');
     expect(page.text()).toContain('No e-mail address: call 07700 900123');
@@ -176,9 +180,9 @@ describe('NewRecall', () => {
   beforeEach(() => localStorage.clear());
 
   it('shows whom a supplier-lot recall reaches, then opens a drill with the reason and severity', async () => {
-    const page = await openAs('owner', '/recalls/new?supplierLot=l1');
+    const page = await openAs('owner', `/recalls/new?supplierLot=${LOT}`);
     const preview = await sent(page.backend, (r) => r.url === '/api/recalls/preview');
-    expect(preview.request.body).toEqual({ scope: { kind: 'supplier-lot', supplierLotId: 'l1' } });
+    expect(preview.request.body).toEqual({ scope: { kind: 'supplier-lot', supplierLotId: LOT } });
     const answer: RecallPreview = {
       batchCodes: ['261101-SGF-1', '261102-SGF-2'],
       products: ['Sea Glass Fizzer'],
@@ -209,7 +213,7 @@ describe('NewRecall', () => {
     await page.click(/Start the drill/);
     const open = await sent(page.backend, (r) => r.url === '/api/recalls' && r.method === 'POST');
     expect(open.request.body).toEqual({
-      scope: { kind: 'supplier-lot', supplierLotId: 'l1' },
+      scope: { kind: 'supplier-lot', supplierLotId: LOT },
       reason: 'Drill: a supplier recall of citric acid',
       severity: 'minor-harm',
       drill: true,
