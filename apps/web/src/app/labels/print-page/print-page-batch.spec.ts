@@ -9,6 +9,7 @@ import {
   nextRequest,
   openAs,
 } from '../../formulas/formulas-testing';
+import { aBatch } from '../../production/production-testing';
 import { aRun, LETTER_30, ROLL_2X1 } from '../labels-testing';
 import PrintPage from './print-page';
 
@@ -20,42 +21,23 @@ const ROUTES = [
   { path: 'production/:id', children: [] },
   { path: 'formulas/:id/identity', children: [] },
 ];
-const check = { result: 'not-checked' as const, note: null };
-
 /** A released batch of the test formula's version 1, as `GET /api/batches/:id` answers it. */
-const aBatch = (fields: Partial<Batch> = {}): Batch => ({
-  id: BATCH_ID,
-  createdAt: '2026-11-03T08:00:00.000Z',
-  updatedAt: '2026-11-03T08:00:00.000Z',
-  formulaId: FORMULA_ID,
-  formulaName: 'Lavender Fizzer',
-  version: 1,
-  batchCode: '261103-LF-1',
-  state: 'released',
-  madeOn: '2026-11-03',
-  size: { units: 10, unitMassGrams: 150, targetGrams: 1500, lossPercent: 0, batchGrams: 1500 },
-  sum: { batchGrams: 1500, roundedGrams: 1500, differenceGrams: 0, withinRounding: true },
-  weighSheetNotes: [],
-  tolerancePercent: 2,
-  lines: [],
-  conditions: { roomTemperatureC: null, humidityPercent: null },
-  mould: { name: null, unitsMade: 10 },
-  timing: { hoursInMould: null, curingDays: null, readyOn: null },
-  checks: {
-    appearance: check,
-    hardness: check,
-    fizzOrLather: check,
-    unitWeightsGrams: [],
-    unitWeight: null,
-    ph: null,
-  },
-  notes: null,
-  durability: { bestBeforeMonth: '2027-11', expiresOn: '2027-11-30', periodAfterOpeningMonths: 6 },
-  releasedAt: '2026-11-05T08:00:00.000Z',
-  releasedBy: null,
-  amendments: [],
-  ...fields,
-});
+const aReleasedBatch = (fields: Partial<Batch> = {}): Batch =>
+  aBatch({
+    id: BATCH_ID,
+    formulaId: FORMULA_ID,
+    version: 1,
+    batchCode: '261103-LF-1',
+    state: 'released',
+    madeOn: '2026-11-03',
+    durability: {
+      bestBeforeMonth: '2027-11',
+      expiresOn: '2027-11-30',
+      periodAfterOpeningMonths: 6,
+    },
+    releasedAt: '2026-11-05T08:00:00.000Z',
+    ...fields,
+  });
 
 const isCreate = (r: HttpRequest<unknown>) => r.method === 'POST' && r.url === '/api/label-runs';
 
@@ -78,7 +60,7 @@ async function openForBatch(batch: Batch) {
 
 describe('PrintPage for a batch (?batch=)', () => {
   it('lets production print a released batch with its lot code and expiry fixed', async () => {
-    const page = await openForBatch(aBatch());
+    const page = await openForBatch(aReleasedBatch());
     const lot = await page.loader.getHarness(MatInputHarness.with({ selector: '#lotCode' }));
     expect(await lot.getValue()).toBe('261103-LF-1');
     expect(await lot.isDisabled()).toBe(true);
@@ -105,7 +87,7 @@ describe('PrintPage for a batch (?batch=)', () => {
   });
 
   it('says a draft batch prints once released, and offers no form', async () => {
-    const page = await openForBatch(aBatch({ state: 'draft', releasedAt: null }));
+    const page = await openForBatch(aReleasedBatch({ state: 'draft', releasedAt: null }));
     const host = page.el;
     expect(host.querySelector('[role="alert"]')?.textContent).toContain(
       'Batch 261103-LF-1 is still a draft: its labels print once it is released.',
