@@ -11,15 +11,15 @@ export type Role = z.infer<typeof roleSchema>;
  */
 export const ROLE_DESCRIPTIONS: Record<Role, string> = {
   owner:
-    'Everything a formulator does, plus members and their roles, and releasing a version over blocking findings with a recorded reason.',
+    'Everything a formulator does, plus members and their roles, production settings, recalls and the audit log, and releasing a version over blocking findings with a recorded reason.',
   formulator:
-    'Materials, suppliers, documents, lots and formulas: writes them, runs the checks and releases versions that pass.',
+    'Materials, suppliers, documents, lots and formulas: writes them, runs the checks and releases versions that pass; releases and corrects batches; prints labels.',
   production:
-    'Records goods-in and corrects lots; reads formulas, materials and documents, and scales a formula to a batch size.',
+    'Records goods-in and corrects stock; starts and records batches from the weigh sheet and prints their labels; records customers, deliveries and complaints; reads formulas, materials and documents.',
   assessor:
     'Reads the reference lists the checks rest on, and the labels printed (print runs and their PDFs).',
   viewer:
-    'Reads formulas, materials, documents, lots and members, and changes nothing. For bookkeepers and auditors.',
+    'Reads formulas, materials, documents, lots, batches, deliveries, traces, recalls, complaints and members, and changes nothing. For bookkeepers and auditors.',
 };
 
 /** Sets of roles that routes and screens allow; one place so client and server agree. */
