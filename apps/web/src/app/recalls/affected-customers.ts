@@ -73,9 +73,10 @@ import type { RecallAffectedCustomer, RecallReply } from '@batchproof/shared';
     table {
       width: 100%;
     }
+    /* Addresses and lot codes stay whole; the table scrolls sideways in its card instead. */
     .line {
       display: block;
-      overflow-wrap: anywhere;
+      white-space: nowrap;
     }
     .muted {
       color: var(--mat-sys-on-surface-variant);

@@ -17,7 +17,7 @@ import { MatError, MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/m
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
-import { MatOption, MatSelect } from '@angular/material/select';
+import { MatOption, MatSelect, MatSelectTrigger } from '@angular/material/select';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router, RouterLink } from '@angular/router';
 import {
@@ -63,6 +63,7 @@ import { reportingDeadline } from '../reporting-deadline';
     MatOption,
     MatProgressBar,
     MatSelect,
+    MatSelectTrigger,
     MatSuffix,
     ReactiveFormsModule,
     RouterLink,
@@ -124,6 +125,12 @@ export default class ComplaintPage implements LeavesSafely {
       }),
     );
   });
+  /** The chosen batch's code, for the closed picker ("Not known" when none). */
+  protected batchCode(id: string | null): string {
+    if (!id) return 'Not known';
+    return this.batches.value()?.items.find((b) => b.id === id)?.batchCode ?? '';
+  }
+
   /** The product chosen in the form, so the batch picker offers its batches only. */
   protected readonly chosenProduct = linkedSignal(() => this.complaint()?.formulaId ?? '');
   protected readonly batches = this.api.batchesOf(() => this.chosenProduct() || undefined);

@@ -5,7 +5,7 @@ import { MatButton, MatIconButton } from '@angular/material/button';
 import { MatError, MatFormField, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
-import { MatOption, MatSelect } from '@angular/material/select';
+import { MatOption, MatSelect, MatSelectTrigger } from '@angular/material/select';
 import {
   type Batch,
   type BatchLine,
@@ -40,6 +40,7 @@ interface LotOption {
     MatLabel,
     MatOption,
     MatSelect,
+    MatSelectTrigger,
     MatSuffix,
     ReactiveFormsModule,
   ],
@@ -70,6 +71,17 @@ export class WeighSheet {
 
   protected materialOptions(line: BatchLine) {
     return [{ materialId: line.materialId, materialName: line.materialName }, ...line.substitutes];
+  }
+
+  /** The chosen material's name, for the closed select (the options also say "approved substitute"). */
+  protected materialName(line: BatchLine, materialId: string | null): string {
+    return this.materialOptions(line).find((m) => m.materialId === materialId)?.materialName ?? '';
+  }
+
+  /** The chosen lot's number, for the closed select. */
+  protected lotNumber(index: number, lotId: string | null): string {
+    const label = this.lotOptions(index).find((o) => o.id === lotId)?.label ?? '';
+    return label.split(' ')[0] ?? '';
   }
 
   /** The lots a line may be weighed from: its material's lots with stock, and any already known. */
