@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import type { Express } from 'express';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { errorEnvelopeSchema } from '@batchproof/shared';
+import { DEFAULT_BATCH_CODE_PATTERN, errorEnvelopeSchema } from '@batchproof/shared';
 import { aBathProfile, aDraft, aFormula } from '../../fixtures/builders/formula-builder';
 import { aLot } from '../../fixtures/builders/lot-builder';
 import { aSheetLabelStock } from '../../fixtures/builders/label-stock-builder';
@@ -13,8 +13,12 @@ import {
 } from '../../fixtures/builders/label-run-builder';
 import { aFragrance, aMaterial, aSupplier } from '../../fixtures/builders/material-builder';
 import { pdfBytes } from '../../fixtures/builders/document-files';
+import { aCustomer, aDelivery } from '../../fixtures/builders/delivery-builder';
 import { startApiHarness, TEST_JWT_SECRET, type ApiHarness } from '../support/api-harness';
+import { buildFinishedLot, buildReleasedFormula } from '../support/finished-lot-builder';
 import { hostileBody } from '../support/hostile-values';
+import { buildCustomer, buildDelivery, buildRecallScenario } from '../support/recall-scenario';
+import { buildWeighedBatch } from '../support/released-batch-builder';
 import { buildLot, buildMaterial, buildSupplier } from '../support/row-builders';
 import {
   addMember,
@@ -118,10 +122,17 @@ const printable = async () => {
   );
   return id;
 };
+const customer = () =>
+  buildCustomer(db(), w.id, {
+    name: `Fuzz Gifts ${crypto.randomUUID().slice(0, 6)}`,
+    email: uniqueEmail('shop'),
+    phone: null,
+  });
 /** A record of each archivable kind, made once per fuzzed route. */
 const archivable = {
   materials: material,
   suppliers: async () => (await buildSupplier(db(), w.id)).id,
+  customers: async () => (await customer()).id,
   formulas: formula,
   documents: async () => {
     const res = await upload(h.app, '/api/documents', w.members.owner.token, {
@@ -142,6 +153,62 @@ const archivable = {
     return res.body.id as string;
   },
 };
+/** A finished lot (a released batch) of 40 units, or a draft batch, straight in the database. */
+const finishedLot = async (state: 'draft' | 'released' = 'released') =>
+  buildFinishedLot(db(), w.id, {
+    ...(await buildReleasedFormula(db(), w.id)),
+    batchCode: `FZ${crypto.randomUUID().slice(0, 8).toUpperCase()}`,
+    unitsMade: 40,
+    state,
+  });
+/** A batch of one weighed line (100 g from a lot counted in kg), and a second lot to pick. */
+const weighedBatch = async (state: 'draft' | 'released') => {
+  const m = await buildMaterial(db(), w.id);
+  const lot = async () => (await buildLot(db(), w.id, m.id, { unit: 'kg', quantity: 10 })).id;
+  const first = await lot();
+  const batch = await buildWeighedBatch(db(), w.id, {
+    state,
+    lines: [
+      {
+        materialId: m.id,
+        materialName: m.tradeName,
+        grams: 100,
+        picks: [{ lotId: first, grams: 100 }],
+      },
+    ],
+  });
+  return {
+    id: batch.id,
+    picks: [
+      { lotId: first, grams: 60 },
+      { lotId: await lot(), grams: 40 },
+    ],
+  };
+};
+/** A recall of the scenario's citric lot (reaching Harbour and Tideline), opened by the owner. */
+const recall = async () => {
+  const s = await buildRecallScenario(db(), w.id);
+  const res = await json('post')(h.app, '/api/recalls', w.members.owner.token, {
+    scope: { kind: 'supplier-lot', supplierLotId: s.citricLot.id },
+    reason: 'Citric acid lot failed the supplier purity check',
+    severity: 'minor-harm',
+  });
+  return { id: res.body.id as string, s };
+};
+const complaintBody = (formulaId: string, batch: { id: string; batchCode: string }) => ({
+  formulaId,
+  batchId: batch.id,
+  finishedLotCode: batch.batchCode,
+  receivedOn: '2026-01-20',
+  reporterName: 'Ivy Marsh',
+  reporterContact: 'ivy@example.test',
+  whatHappened: 'Red skin on the arms after a bath',
+  bodyArea: 'Arms',
+  serious: true,
+  status: 'open',
+  followUpNotes: null,
+  reportedToFdaOn: '2026-01-22',
+});
 const signUpBody = () => ({
   workshopName: 'Fuzzed Suds',
   name: 'Pat Fuzz',
@@ -437,17 +504,224 @@ const cases: FuzzCase[] = [
     },
     send: json('post'),
   },
+  {
+    route: 'PUT /api/workshop/production',
+    prepare: async () => ({
+      path: '/api/workshop/production',
+      valid: {
+        weighingTolerancePercent: 2,
+        batchCodePattern: DEFAULT_BATCH_CODE_PATTERN,
+        smallBusiness: true,
+      },
+    }),
+    send: json('put'),
+  },
+  {
+    route: 'POST /api/batches',
+    prepare: async () => ({
+      path: '/api/batches',
+      valid: {
+        formulaId: await printable(),
+        version: 1,
+        totalGrams: 1000,
+        lossPercent: 2,
+        madeOn: '2026-01-15',
+      },
+    }),
+    send: json('post'),
+  },
+  {
+    route: 'PUT /api/batches/:id',
+    prepare: async () => {
+      const batch = await weighedBatch('draft');
+      const check = { result: 'pass', note: 'Even colour' };
+      return {
+        path: `/api/batches/${batch.id}`,
+        valid: {
+          lines: [{ lineNumber: 1, usedMaterialId: null, lotPicks: batch.picks, actualGrams: 100 }],
+          conditions: { roomTemperatureC: 19.5, humidityPercent: 45 },
+          mould: { name: 'Sphere tray', unitsMade: 6 },
+          timing: { hoursInMould: 12, curingDays: 2 },
+          checks: {
+            appearance: check,
+            hardness: check,
+            fizzOrLather: check,
+            unitWeightsGrams: [151.2],
+            ph: 7,
+          },
+          notes: 'Made in the morning',
+        },
+      };
+    },
+    send: json('put'),
+  },
+  {
+    route: 'POST /api/batches/:id/release',
+    // Takes no body: the first run may release the draft, the rest find it released.
+    prepare: async () => ({
+      path: `/api/batches/${(await weighedBatch('draft')).id}/release`,
+      valid: {},
+    }),
+    send: json('post'),
+  },
+  {
+    route: 'POST /api/batches/:id/amendments',
+    prepare: async () => {
+      const batch = await weighedBatch('released');
+      return {
+        path: `/api/batches/${batch.id}/amendments`,
+        valid: {
+          field: 'lines.1.lotPicks',
+          value: batch.picks,
+          reason: 'The scoop came from two tubs',
+        },
+      };
+    },
+    send: json('post'),
+  },
+  {
+    route: 'POST /api/lots/:id/adjustments',
+    prepare: async () => ({
+      path: `/api/lots/${(await buildLot(db(), w.id, await material())).id}/adjustments`,
+      valid: { quantity: -0.5, reason: 'spillage', note: 'Knocked off the bench' },
+    }),
+    send: json('post'),
+  },
+  {
+    route: 'POST /api/customers',
+    prepare: async () => ({ path: '/api/customers', valid: aCustomer() }),
+    send: json('post'),
+  },
+  {
+    route: 'PUT /api/customers/:id',
+    prepare: async () => ({ path: `/api/customers/${(await customer()).id}`, valid: aCustomer() }),
+    send: json('put'),
+  },
+  {
+    route: 'POST /api/deliveries',
+    prepare: async () => ({
+      path: '/api/deliveries',
+      valid: aDelivery((await customer()).id, [
+        { lotCode: (await finishedLot()).batchCode, units: 1 },
+      ]),
+    }),
+    send: json('post'),
+  },
+  {
+    route: 'PUT /api/deliveries/:id',
+    prepare: async () => {
+      const [c, lot] = [await customer(), await finishedLot()];
+      const delivery = await buildDelivery(db(), w.id, c.id, '2026-02-01', [
+        { batchId: lot.id, units: 2 },
+      ]);
+      return {
+        path: `/api/deliveries/${delivery.id}`,
+        valid: aDelivery(c.id, [{ lotCode: lot.batchCode, units: 3 }]),
+      };
+    },
+    send: json('put'),
+  },
+  ...(['/import/preview', '/import'] as const).map((tail): FuzzCase => ({
+    route: `POST /api/deliveries${tail}`,
+    prepare: async () => ({
+      path: `/api/deliveries${tail}`,
+      valid: {
+        delivered_on: '2026-02-05',
+        customer: (await customer()).name,
+        lot_code: (await finishedLot()).batchCode,
+        units: '1',
+      },
+    }),
+    send: csv,
+  })),
+  {
+    route: 'POST /api/recalls/preview',
+    prepare: async () => ({
+      path: '/api/recalls/preview',
+      valid: { scope: { kind: 'finished-lots', finishedLotIds: [(await finishedLot()).id] } },
+    }),
+    send: json('post'),
+  },
+  {
+    route: 'POST /api/recalls',
+    prepare: async () => ({
+      path: '/api/recalls',
+      valid: {
+        scope: {
+          kind: 'supplier-lot',
+          supplierLotId: (await buildRecallScenario(db(), w.id)).citricLot.id,
+        },
+        reason: 'Citric acid lot failed the supplier purity check',
+        severity: 'serious-harm',
+        drill: true,
+      },
+    }),
+    send: json('post'),
+  },
+  {
+    route: 'POST /api/recalls/:id/notices',
+    prepare: async () => ({
+      path: `/api/recalls/${(await recall()).id}/notices`,
+      valid: { whatToDo: 'Take the fizzers off the shelf' },
+    }),
+    send: json('post'),
+  },
+  {
+    route: 'POST /api/recalls/:id/replies',
+    prepare: async () => {
+      const { id, s } = await recall();
+      return {
+        path: `/api/recalls/${id}/replies`,
+        valid: {
+          customerId: s.harbour.id,
+          repliedOn: '2026-03-02',
+          unitsOnHand: 4,
+          unitsReturned: 3,
+          notes: 'Posted back',
+        },
+      };
+    },
+    send: json('post'),
+  },
+  {
+    route: 'POST /api/recalls/:id/close',
+    // The first accepted run closes it; the rest find it closed.
+    prepare: async () => ({
+      path: `/api/recalls/${(await recall()).id}/close`,
+      valid: { summary: 'Every unit came back or was sold before the notice.' },
+    }),
+    send: json('post'),
+  },
+  {
+    route: 'POST /api/complaints',
+    prepare: async () => {
+      const lot = await finishedLot();
+      return { path: '/api/complaints', valid: complaintBody(lot.formulaId, lot) };
+    },
+    send: json('post'),
+  },
+  {
+    route: 'PUT /api/complaints/:id',
+    prepare: async () => {
+      const lot = await finishedLot();
+      const valid = complaintBody(lot.formulaId, lot);
+      const res = await json('post')(h.app, '/api/complaints', w.members.owner.token, valid);
+      return { path: `/api/complaints/${res.body.id}`, valid: { ...valid, status: 'closed' } };
+    },
+    send: json('put'),
+  },
   // Archiving takes no body: whatever is sent, the record is archived or brought back.
-  ...(['materials', 'suppliers', 'formulas', 'documents', 'label-stocks'] as const).flatMap(
-    (feature) =>
-      (['archive', 'unarchive'] as const).map((action): FuzzCase => ({
-        route: `POST /api/${feature}/:id/${action}`,
-        prepare: async () => ({
-          path: `/api/${feature}/${await archivable[feature]()}/${action}`,
-          valid: {},
-        }),
-        send: json('post'),
-      })),
+  ...(
+    ['materials', 'suppliers', 'customers', 'formulas', 'documents', 'label-stocks'] as const
+  ).flatMap((feature) =>
+    (['archive', 'unarchive'] as const).map((action): FuzzCase => ({
+      route: `POST /api/${feature}/:id/${action}`,
+      prepare: async () => ({
+        path: `/api/${feature}/${await archivable[feature]()}/${action}`,
+        valid: {},
+      }),
+      send: json('post'),
+    })),
   ),
 ];
 
