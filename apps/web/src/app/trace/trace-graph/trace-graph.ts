@@ -1,6 +1,6 @@
 import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
 import { Router } from '@angular/router';
-import { type Edge, GraphComponent, type Node } from '@swimlane/ngx-graph';
+import { type Edge, GraphComponent, LayoutService, type Node } from '@swimlane/ngx-graph';
 import type { TraceEdge, TraceNode, TraceNodeKind } from '@batchproof/shared';
 
 /** The most nodes drawn; a bigger trace is read in its tables (a graph that size reads as noise). */
@@ -56,6 +56,8 @@ interface NodeData {
 @Component({
   selector: 'bp-trace-graph',
   imports: [GraphComponent],
+  // The graph finds its layouts through this service, which its NgModule would otherwise provide.
+  providers: [LayoutService],
   template: `
     <figure class="figure" role="group" [attr.aria-label]="summary()">
       @if (tooBig()) {
