@@ -154,15 +154,13 @@ describe('POST /api/batches/:id/amendments: fields of the record', () => {
       .insert(deliveries)
       .values({ workshopId: w.id, customerId: customer!.id, deliveredOn: '2026-02-01' })
       .returning();
-    await db
-      .insert(deliveryLines)
-      .values({
-        workshopId: w.id,
-        deliveryId: delivery!.id,
-        position: 1,
-        batchId: batch.id,
-        units: 20,
-      });
+    await db.insert(deliveryLines).values({
+      workshopId: w.id,
+      deliveryId: delivery!.id,
+      position: 1,
+      batchId: batch.id,
+      units: 20,
+    });
     const res = await amend(batch.id, { field: 'mould.unitsMade', value: 19, reason: REASON });
     expect(res.status).toBe(409);
     expect(res.body.error.fieldErrors.value).toEqual(['At least 20: the units already delivered']);

@@ -100,14 +100,11 @@ describe('PUT /api/workshop/production', () => {
   });
 
   it('refuses a tolerance outside 0.1–20 % and a pattern without a sequence with 400 field errors', async () => {
-    const res = await request(h.app)
-      .put(URL)
-      .set(bearer(w.members.owner))
-      .send({
-        weighingTolerancePercent: 25,
-        batchCodePattern: 'BATCH/{YYMMDD}',
-        smallBusiness: 'yes',
-      });
+    const res = await request(h.app).put(URL).set(bearer(w.members.owner)).send({
+      weighingTolerancePercent: 25,
+      batchCodePattern: 'BATCH/{YYMMDD}',
+      smallBusiness: 'yes',
+    });
     expect(res.status).toBe(400);
     expect(res.body.error.fieldErrors.weighingTolerancePercent).toEqual([
       'The weighing tolerance must be 0.1 to 20 %',
