@@ -25,6 +25,7 @@ import type { BatchSheet } from '../db/schema';
 import * as formulasRepo from '../formulas/formulas-repository';
 import { findProductIdentity } from '../labels/product-identity-repository';
 import { pickQuantity, usedMaterialOf, type BatchRow } from './batch-view';
+import { lotAmount } from '../lots/stock-adjustments';
 import * as repo from './batches-repository';
 
 const BATCH = 'That batch';
@@ -388,8 +389,6 @@ function notReady(batch: Batch): Record<string, string[]> {
   return errors;
 }
 
-const amount = (quantity: number, unit: string) => `${roundTo(quantity, 4)} ${unit}`;
-
 /**
  * Releases a draft (owner or formulator): in one transaction, locks the batch and every lot it
  * picks (in id order), reads their stock, refuses 409 `stock_short` if any lot would go below
@@ -435,7 +434,7 @@ export async function releaseBatch(db: Database, actor: AuthUser, id: string): P
         const onHand = stock.get(pick.lotId) ?? 0;
         if (roundTo(onHand - need.get(pick.lotId)!, 4) < 0)
           (short[`lines.${i}.lotPicks`] ??= []).push(
-            `Lot ${pick.supplierLotNumber} has only ${amount(Math.max(0, onHand), pick.unit)} on hand; this batch needs ${amount(need.get(pick.lotId)!, pick.unit)}`,
+            `Lot ${pick.supplierLotNumber} has only ${lotAmount(Math.max(0, onHand), pick.unit)} on hand; this batch needs ${lotAmount(need.get(pick.lotId)!, pick.unit)}`,
           );
       }
     });

@@ -8,11 +8,11 @@ import {
   withTotal,
 } from '../core/list-paging';
 import type { Database } from '../db/database';
+import { findSubstitutes } from '../formulas/formulas-repository';
 import {
   batchAmendments,
   batches,
   formulaLines,
-  formulaLineSubstitutes,
   formulas,
   formulaVersions,
   lotConsumptions,
@@ -253,31 +253,15 @@ export async function sheetSources(db: Database, workshopId: string, versionId: 
     .innerJoin(materials, eq(materials.id, formulaLines.materialId))
     .where(and(eq(formulaLines.workshopId, workshopId), eq(formulaLines.versionId, versionId)))
     .orderBy(asc(formulaLines.position));
-  const lineIds = lines.map((l) => l.lineId);
-  const substitutes =
-    lineIds.length === 0
-      ? []
-      : await db
-          .select({
-            lineId: formulaLineSubstitutes.lineId,
-            materialId: formulaLineSubstitutes.materialId,
-            materialName: materials.tradeName,
-          })
-          .from(formulaLineSubstitutes)
-          .innerJoin(materials, eq(materials.id, formulaLineSubstitutes.materialId))
-          .where(
-            and(
-              eq(formulaLineSubstitutes.workshopId, workshopId),
-              inArray(formulaLineSubstitutes.lineId, lineIds),
-            ),
-          )
-          .orderBy(asc(formulaLineSubstitutes.position), asc(formulaLineSubstitutes.id));
+  const substitutes = await findSubstitutes(
+    db,
+    workshopId,
+    lines.map((l) => l.lineId),
+  );
   return lines.map(({ lineId, weightPerVolume, ...line }) => ({
     ...line,
     gramsPerMillilitre: weightPerVolume.millilitre ?? null,
-    substitutes: substitutes
-      .filter((s) => s.lineId === lineId)
-      .map(({ materialId, materialName }) => ({ materialId, materialName })),
+    substitutes: substitutes.get(lineId) ?? [],
   }));
 }
 
