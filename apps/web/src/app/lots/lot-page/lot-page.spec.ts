@@ -10,7 +10,7 @@ import { MatFormFieldHarness } from '@angular/material/form-field/testing';
 import { MatInputHarness } from '@angular/material/input/testing';
 import { Router } from '@angular/router';
 import { RouterTestingHarness } from '@angular/router/testing';
-import type { Lot, MaterialSummary, Role } from '@batchproof/shared';
+import type { Lot, MaterialSummary, Role, StockMovement } from '@batchproof/shared';
 import { signedInAs } from '../../auth/signed-in-as';
 import { aMaterial, answerMaterialsRead } from '../../materials/materials-testing';
 import LotPage from './lot-page';
@@ -90,12 +90,55 @@ async function openAs(role: Role, url: string) {
 const sent = (backend: HttpTestingController, match: (r: HttpRequest<unknown>) => boolean) =>
   vi.waitFor(() => backend.expectOne(match));
 
-/** Answers the lot read, then the read of its documents that the lot's page starts. */
+/**
+ * What moved LOT's stock, newest first: a spillage and a released batch's line, which take its
+ * 5000 g received down to the 3250.5 g on hand (movements store stock taken out as positive).
+ */
+const MOVEMENTS: StockMovement[] = [
+  {
+    id: 'd4e5f6a7-0000-4000-8000-000000000002',
+    lotId: LOT_ID,
+    kind: 'adjustment',
+    quantity: 249.5,
+    unit: 'g',
+    grams: null,
+    batchId: null,
+    batchCode: null,
+    lineNumber: null,
+    reason: 'spillage',
+    note: 'Tub dropped in the store room.',
+    createdAt: '2026-03-12T12:00:00.000Z',
+    createdByName: 'Ada Marsh',
+  },
+  {
+    id: 'd4e5f6a7-0000-4000-8000-000000000001',
+    lotId: LOT_ID,
+    kind: 'batch',
+    quantity: 1500,
+    unit: 'g',
+    grams: 1500,
+    batchId: 'e5f6a7b8-0000-4000-8000-000000000001',
+    batchCode: '260310-SGF-003',
+    lineNumber: 2,
+    reason: null,
+    note: null,
+    createdAt: '2026-03-10T12:00:00.000Z',
+    createdByName: 'Tomas Reed',
+  },
+];
+
+/**
+ * Answers the lot read, then the reads its page starts once the lot is shown: its documents and
+ * its stock movements (resource reads keep the page from settling until they are answered).
+ */
 async function answerLot(backend: HttpTestingController, lot: Lot = LOT) {
   (await sent(backend, (r) => r.url === `/api/lots/${lot.id}`)).flush(lot);
   const docs = await sent(backend, (r) => r.url === '/api/documents');
   expect(docs.request.params.get('lotId')).toBe(lot.id);
   docs.flush({ items: [] });
+  const movements = await sent(backend, (r) => r.url === `/api/lots/${lot.id}/movements`);
+  expect(movements.request.method).toBe('GET');
+  movements.flush(lot.id === LOT_ID ? MOVEMENTS : []);
 }
 
 describe('LotPage', () => {
@@ -250,6 +293,25 @@ describe('LotPage', () => {
     await page.harness.fixture.whenStable();
 
     expect(page.text()).toContain('3,250.5 g');
+    // Its stock movements, newest first, signed as changes to the stock on hand.
+    const el = page.harness.routeNativeElement as HTMLElement;
+    const rows = [...el.querySelectorAll('bp-stock-movements tbody tr')].map((tr) =>
+      [...tr.querySelectorAll('td')].map((td) => td.textContent?.replace(/\s+/g, ' ').trim()),
+    );
+    expect(rows).toEqual([
+      [
+        'Mar 12, 2026',
+        'Adjustment',
+        '-249.5 g',
+        'Spillage Tub dropped in the store room.',
+        'Ada Marsh',
+      ],
+      ['Mar 10, 2026', 'Batch 260310-SGF-003 line 2', '-1,500 g', '', 'Tomas Reed'],
+    ]);
+    expect(el.querySelector('bp-stock-movements a')?.getAttribute('href')).toBe(
+      `/production/${MOVEMENTS[1]!.batchId}`,
+    );
+    expect(el.querySelector('bp-stock-movements form')?.textContent).toContain('Adjust stock');
     expect(await page.value('Material')).toBe('Shea butter, refined');
     expect(await page.value('Quantity received')).toBe('5000');
     await page.fill('Quantity received', '1000');
@@ -317,10 +379,21 @@ describe('LotPage', () => {
     const el = page.harness.routeNativeElement as HTMLElement;
     expect(el.querySelector('form')).toBeNull();
     expect(el.querySelector('input')).toBeNull();
-    expect(await page.loader.getAllHarnesses(MatButtonHarness)).toEqual([]);
+    expect(
+      await page.loader.getAllHarnesses(MatButtonHarness.with({ selector: 'button' })),
+    ).toEqual([]);
+    // The one button-styled control is a link that only reads: the lot's forward trace.
+    const links = await page.loader.getAllHarnesses(MatButtonHarness);
+    expect(links).toHaveLength(1);
+    expect(await links[0]!.getText()).toContain('Trace forward');
+    expect(await (await links[0]!.host()).getAttribute('href')).toBe(
+      `/trace/supplier-lots/${LOT_ID}`,
+    );
     expect(page.text()).toContain('SB-2231');
     expect(page.text()).toContain('3,250.5 g');
     expect(page.text()).toContain('Two tubs.');
+    expect(el.querySelector('bp-stock-movements')?.textContent).toContain('260310-SGF-003');
+    expect(page.text()).not.toContain('Adjust stock');
   });
 
   it('refuses a received date in the future beside the field, sending nothing', async () => {
