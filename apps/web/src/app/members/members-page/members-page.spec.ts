@@ -10,7 +10,7 @@ import { MatSortHarness } from '@angular/material/sort/testing';
 import { MatRowHarness, MatTableHarness } from '@angular/material/table/testing';
 import { Router } from '@angular/router';
 import { RouterTestingHarness } from '@angular/router/testing';
-import type { Member, Role } from '@batchproof/shared';
+import type { Member, ProductionSettings, Role } from '@batchproof/shared';
 import { signedInAs } from '../../auth/signed-in-as';
 import MembersPage from './members-page';
 
@@ -33,6 +33,13 @@ const MEMBERS: Member[] = [
 
 const isMembersList = (req: { url: string }) => req.url === '/api/members';
 
+/** The workshop's production settings, as `GET /api/workshop/production` answers them. */
+const PRODUCTION: ProductionSettings = {
+  weighingTolerancePercent: 2.5,
+  batchCodePattern: '{YYMMDD}-{CODE}-{SEQ}',
+  smallBusiness: true,
+};
+
 async function openMembersAs(role: Role, url = '/workshop') {
   const backend = await signedInAs(role, [{ path: 'workshop', component: MembersPage }]);
   const harness = await RouterTestingHarness.create();
@@ -44,8 +51,9 @@ async function openMembersAs(role: Role, url = '/workshop') {
 type Page = Awaited<ReturnType<typeof openMembersAs>>;
 
 /**
- * Answers the members read (and, for owners, the invitations read) and waits for the page to
- * settle; resource reads count as pending work, so all of them are answered before waiting.
+ * Answers the members read (and, for owners, the invitations read), the label details and the
+ * production settings the page's cards read, and waits for the page to settle; resource reads
+ * count as pending work, so all of them are answered before waiting.
  */
 async function flushReads(page: Page, invitations?: unknown[]): Promise<TestRequest> {
   const req = page.backend.expectOne(isMembersList);
@@ -55,8 +63,18 @@ async function flushReads(page: Page, invitations?: unknown[]): Promise<TestRequ
   for (const details of page.backend.match('/api/workshop/label-details')) {
     details.flush({ name: 'Hollowmere Bathworks', address: '4 Mill Lane, Hollowmere' });
   }
+  // The production settings card's read, once per page.
+  page.backend.expectOne({ method: 'GET', url: '/api/workshop/production' }).flush(PRODUCTION);
   await page.harness.fixture.whenStable();
   return req;
+}
+
+/** The production settings card's weighing tolerance field and its input. */
+async function toleranceField(page: Page) {
+  const field = await page.loader.getHarness(
+    MatFormFieldHarness.with({ floatingLabelText: 'Weighing tolerance' }),
+  );
+  return { field, input: (await field.getControl()) as MatInputHarness };
 }
 
 /** Types an e-mail into the invite form and sends it. */
@@ -140,6 +158,14 @@ describe('MembersPage', () => {
       await page.loader.getAllHarnesses(MatSelectHarness.with({ selector: '.role-select' })),
     ).toHaveLength(2);
     expect(el.querySelector('bp-invitation-list')?.textContent).toContain('new@example.com');
+    expect(el.querySelector('a[href="/audit-log"]')?.textContent).toContain('Audit log');
+    // The production settings as read, for the owner to change, with today's example code.
+    const tolerance = await toleranceField(page);
+    expect(await tolerance.input.getValue()).toBe('2.5');
+    expect(await tolerance.field.isDisabled()).toBe(false);
+    const settings = el.querySelector('bp-production-settings')!;
+    expect(settings.querySelector('.example')?.textContent).toMatch(/\d{6}-SGF-007/);
+    expect(settings.querySelector('button[type="submit"]')?.textContent).toContain('Save');
   });
 
   it('shows everyone else the table read-only, without the invite form or invitations', async () => {
@@ -156,6 +182,14 @@ describe('MembersPage', () => {
       ),
     ).toHaveLength(0);
     page.backend.expectNone('/api/members/invitations');
+    expect(el.querySelector('a[href="/audit-log"]')).toBeNull();
+    // The production settings are shown to read, not to change.
+    const tolerance = await toleranceField(page);
+    expect(await tolerance.input.getValue()).toBe('2.5');
+    expect(await tolerance.field.isDisabled()).toBe(true);
+    expect(el.querySelector('bp-production-settings')?.textContent).toContain(
+      "The workshop's owner changes these.",
+    );
   });
 
   it('says the earlier link stopped working when an invitation replaces a pending one', async () => {
