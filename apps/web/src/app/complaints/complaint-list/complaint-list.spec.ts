@@ -8,8 +8,12 @@ const sent = (backend: HttpTestingController, match: (r: HttpRequest<unknown>) =
   vi.waitFor(() => backend.expectOne(match));
 
 describe('ComplaintList', { timeout: 20_000 }, () => {
+  // Dates follow the browser's language; en-GB here, and given back after each test, since the
+  // spec files share one window and other pages' specs expect the default (en-US).
+  beforeEach(() => vi.spyOn(globalThis.navigator, 'language', 'get').mockReturnValue('en-GB'));
+  afterEach(() => vi.restoreAllMocks());
+
   it('shows each complaint with its clock in words, and filters through the URL', async () => {
-    Object.defineProperty(globalThis.navigator, 'language', { value: 'en-GB', configurable: true });
     const backend = await signedInAs('viewer', [{ path: 'complaints', component: ComplaintList }]);
     const harness = await RouterTestingHarness.create();
     await harness.navigateByUrl('/complaints?serious=true');

@@ -47,7 +47,6 @@ const sent = (backend: HttpTestingController, match: (r: HttpRequest<unknown>) =
   vi.waitFor(() => backend.expectOne(match));
 
 async function open(complaint: Complaint) {
-  Object.defineProperty(globalThis.navigator, 'language', { value: 'en-GB', configurable: true });
   const backend = await signedInAs('production', [
     { path: 'complaints', children: [] },
     { path: 'complaints/:id', component: ComplaintPage },
@@ -73,6 +72,11 @@ async function open(complaint: Complaint) {
 
 // The first render compiles Material's date and select modules: slow on a busy machine.
 describe('ComplaintPage', { timeout: 20_000 }, () => {
+  // Dates follow the browser's language; en-GB here, and given back after each test, since the
+  // spec files share one window and other pages' specs expect the default (en-US).
+  beforeEach(() => vi.spyOn(globalThis.navigator, 'language', 'get').mockReturnValue('en-GB'));
+  afterEach(() => vi.restoreAllMocks());
+
   it('shows the US reporting clock in plain words with its source and who decides', async () => {
     const el = await open(COMPLAINT);
     expect(el.querySelector('[data-testid=reporting-clock]')?.textContent?.trim()).toBe(
