@@ -104,7 +104,13 @@ describe('journey: every production and recall page of the demo workshop at thre
     await page.getByRole('heading', { name: 'Recalls', level: 1 }).waitFor();
     await page.getByRole('table').getByRole('link').first().waitFor();
     await h.screenshot(page, 'every-production-15-recalls');
-    await page.getByRole('table').getByRole('link').first().click();
+    // The demo's drill (another journey may have opened a real recall in the same workshop).
+    const token = await h.apiSignIn('owner@hollowmere.example', DEMO_PASSWORD);
+    const drills = await fetch(`${h.baseUrl}/api/recalls?drill=true`, {
+      headers: { Authorization: `Bearer ${token}` },
+    });
+    const { items } = (await drills.json()) as { items: { id: string }[] };
+    await page.goto(`/recalls/${items[0]!.id}`);
     await page.getByRole('heading', { name: 'Drill report' }).waitFor();
     await h.screenshot(page, 'every-production-16-recall-drill');
 
