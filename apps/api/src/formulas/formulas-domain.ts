@@ -48,6 +48,12 @@ export async function createFormula(
       ...evaluation,
     });
     await repo.replaceLines(tx, actor.workshopId, versionId, lines);
+    await recordAudit(tx, actor, {
+      action: 'formula.created',
+      subjectType: 'formula',
+      subjectId: formulaId,
+      detail: { name: input.name, lines: lines.length },
+    });
     return getFormula(tx, actor, formulaId);
   });
 }
@@ -58,8 +64,17 @@ export async function updateFormula(
   id: string,
   input: z.output<typeof formulaUpdateSchema>,
 ) {
-  if (!(await repo.updateFormula(db, actor.workshopId, id, input))) throw notFound('That formula');
-  return getFormula(db, actor, id);
+  return db.transaction(async (tx) => {
+    if (!(await repo.updateFormula(tx, actor.workshopId, id, input)))
+      throw notFound('That formula');
+    await recordAudit(tx, actor, {
+      action: 'formula.changed',
+      subjectType: 'formula',
+      subjectId: id,
+      detail: { ...input },
+    });
+    return getFormula(tx, actor, id);
+  });
 }
 
 /**
@@ -88,6 +103,12 @@ export async function saveDraft(
     });
     await repo.replaceLines(tx, actor.workshopId, version.id, lines);
     await repo.updateFormula(tx, actor.workshopId, formulaId, {});
+    await recordAudit(tx, actor, {
+      action: 'formula.draft-saved',
+      subjectType: 'formula',
+      subjectId: formulaId,
+      detail: { version: n, lines: lines.length },
+    });
     const row = (await repo.findVersion(tx, actor.workshopId, formulaId, n))!;
     return versionView(tx, actor.workshopId, row);
   });
@@ -152,6 +173,12 @@ export async function newDraft(
     });
     await repo.replaceLines(tx, actor.workshopId, versionId, lines);
     await repo.updateFormula(tx, actor.workshopId, formulaId, {});
+    await recordAudit(tx, actor, {
+      action: 'formula.draft-started',
+      subjectType: 'formula',
+      subjectId: formulaId,
+      detail: { version: latest + 1, copiedFrom: source.number },
+    });
     const row = (await repo.findVersion(tx, actor.workshopId, formulaId, latest + 1))!;
     return versionView(tx, actor.workshopId, row);
   });

@@ -1,4 +1,5 @@
 import type { FieldWarning, LotFields, LotListQuery } from '@batchproof/shared';
+import { recordAudit } from '../audit/audit-log';
 import type { AuthUser } from '../auth/authenticate';
 import { AppError, conflict, notFound } from '../core/app-error';
 import { withIsoDates } from '../core/list-paging';
@@ -61,6 +62,12 @@ export async function createLot(db: Database, actor: AuthUser, input: LotFields)
   return db.transaction(async (tx) => {
     await checkMaterial(tx, actor.workshopId, input);
     const id = await repo.insertLot(tx, actor.workshopId, input);
+    await recordAudit(tx, actor, {
+      action: 'lot.received',
+      subjectType: 'lot',
+      subjectId: id,
+      detail: lotDetail(input),
+    });
     const warnings = await lotNumberWarnings(tx, actor.workshopId, input, id);
     return { ...(await getLot(tx, actor, id)), warnings };
   });
@@ -71,18 +78,35 @@ export async function createLot(db: Database, actor: AuthUser, input: LotFields)
  * stock on hand would go negative.
  */
 export async function updateLot(db: Database, actor: AuthUser, id: string, input: LotFields) {
-  if (!(await repo.findLot(db, actor.workshopId, id))) throw notFound('That lot');
-  await checkMaterial(db, actor.workshopId, input);
-  const consumed = await repo.consumedQuantity(db, actor.workshopId, id);
-  if (input.quantity < consumed) {
-    throw conflict(`Batches already used ${consumed} of this lot.`, {
-      quantity: [`The quantity cannot be less than the ${consumed} already used`],
+  return db.transaction(async (tx) => {
+    if (!(await repo.findLot(tx, actor.workshopId, id))) throw notFound('That lot');
+    await checkMaterial(tx, actor.workshopId, input);
+    const consumed = await repo.consumedQuantity(tx, actor.workshopId, id);
+    if (input.quantity < consumed) {
+      throw conflict(`Batches already used ${consumed} of this lot.`, {
+        quantity: [`The quantity cannot be less than the ${consumed} already used`],
+      });
+    }
+    await repo.updateLot(tx, actor.workshopId, id, input);
+    await recordAudit(tx, actor, {
+      action: 'lot.changed',
+      subjectType: 'lot',
+      subjectId: id,
+      detail: lotDetail(input),
     });
-  }
-  await repo.updateLot(db, actor.workshopId, id, input);
-  const warnings = await lotNumberWarnings(db, actor.workshopId, input, id);
-  return { ...(await getLot(db, actor, id)), warnings };
+    const warnings = await lotNumberWarnings(tx, actor.workshopId, input, id);
+    return { ...(await getLot(tx, actor, id)), warnings };
+  });
 }
+
+/** What the audit log keeps of goods-in: the lot as entered. */
+const lotDetail = (input: LotFields) => ({
+  supplierLotNumber: input.supplierLotNumber,
+  quantity: input.quantity,
+  unit: input.unit,
+  receivedOn: input.receivedOn,
+  expiresOn: input.expiresOn,
+});
 
 /** Deletes a lot no batch has drawn from. */
 export async function deleteLot(db: Database, actor: AuthUser, id: string) {
@@ -90,5 +114,8 @@ export async function deleteLot(db: Database, actor: AuthUser, id: string) {
   if ((await repo.consumedQuantity(db, actor.workshopId, id)) > 0) {
     throw conflict('Batches have used this lot; it cannot be deleted.');
   }
-  await repo.deleteLot(db, actor.workshopId, id);
+  await db.transaction(async (tx) => {
+    await repo.deleteLot(tx, actor.workshopId, id);
+    await recordAudit(tx, actor, { action: 'lot.deleted', subjectType: 'lot', subjectId: id });
+  });
 }
