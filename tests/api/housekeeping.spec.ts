@@ -208,7 +208,10 @@ describe('formulas: archive and delete', () => {
     const draftOnly = await f$.createFormula();
     expect((await del(owner, `/api/formulas/${draftOnly.id}`)).status).toBe(204);
     expect((await get(owner, `/api/formulas/${draftOnly.id}`)).status).toBe(404);
-    expect(await auditActions(f$.w.id, draftOnly.id)).toEqual(['formula delete']);
+    expect(await auditActions(f$.w.id, draftOnly.id)).toEqual([
+      'formula formula.created',
+      'formula delete',
+    ]);
 
     const released = await f$.createFormula();
     expect((await f$.release(released.id, 1)).status).toBe(200);
