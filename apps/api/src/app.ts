@@ -31,6 +31,9 @@ import { deliveriesRouter } from './deliveries/deliveries-router';
 import { traceRouter } from './trace/trace-router';
 import { recallsRouter } from './recalls/recalls-router';
 import { complaintsRouter } from './complaints/complaints-router';
+import { assessmentSharesRouter } from './assessments/assessment-shares-router';
+import { assessmentsRouter } from './assessments/assessments-router';
+import { readinessRouter } from './readiness/readiness-router';
 import { auditRouter } from './audit/audit-router';
 
 /** Everything the app needs from outside; tests pass their own. */
@@ -116,6 +119,10 @@ export function createApp(deps: AppDeps): Express {
   api.use('/recalls', recallsRouter(production));
   api.use('/complaints', complaintsRouter(production));
   api.use('/audit-events', auditRouter(production));
+  // Safety assessment and market readiness.
+  api.use('/assessment-shares', assessmentSharesRouter(production));
+  api.use('/assessments', assessmentsRouter(production));
+  api.use('/readiness', readinessRouter(production));
   api.use(apiNotFound);
   api.use(errorHandler);
   app.use('/api', api);

@@ -52,3 +52,4 @@ export * from './batches/batch-effective-record';
 export * from './trace/trace-schema';
 export * from './audit/audit-schema';
 export * from './workshop/production-settings-schema';
+export * from './assessments/index';

@@ -9,6 +9,7 @@ import {
   lotConsumptions,
   lots,
   materials,
+  memberships,
   refreshSessions,
   suppliers,
   users,
@@ -16,13 +17,18 @@ import {
 } from './schema';
 
 export const workshopRelations = relations(workshops, ({ many }) => ({
-  users: many(users),
+  memberships: many(memberships),
   invitations: many(invitations),
 }));
 
-export const userRelations = relations(users, ({ one, many }) => ({
-  workshop: one(workshops, { fields: [users.workshopId], references: [workshops.id] }),
+export const userRelations = relations(users, ({ many }) => ({
+  memberships: many(memberships),
   refreshSessions: many(refreshSessions),
+}));
+
+export const membershipRelations = relations(memberships, ({ one }) => ({
+  workshop: one(workshops, { fields: [memberships.workshopId], references: [workshops.id] }),
+  user: one(users, { fields: [memberships.userId], references: [users.id] }),
 }));
 
 export const invitationRelations = relations(invitations, ({ one }) => ({

@@ -27,6 +27,8 @@ export const routes: Routes = [
       { path: 'trace', loadChildren: () => import('./trace/trace.routes') },
       { path: 'recalls', loadChildren: () => import('./recalls/recalls.routes') },
       { path: 'complaints', loadChildren: () => import('./complaints/complaints.routes') },
+      { path: 'assessments', loadChildren: () => import('./assessments/assessments.routes') },
+      { path: 'readiness', loadChildren: () => import('./readiness/readiness.routes') },
       { path: 'audit-log', loadChildren: () => import('./audit-log/audit-log.routes') },
       { path: 'reference', loadChildren: () => import('./reference-lists/reference-lists.routes') },
       {

@@ -57,12 +57,26 @@ export type SignIn = z.infer<typeof signInSchema>;
 
 export const workshopSummarySchema = z.object({ id: z.string(), name: z.string() });
 
+/** One workshop a person belongs to, with the role they hold there. */
+export const membershipSchema = z.object({
+  workshopId: z.string(),
+  workshopName: z.string(),
+  role: roleSchema,
+});
+export type Membership = z.infer<typeof membershipSchema>;
+
+/**
+ * The signed-in person as `GET /api/me` and every session answer give it: `role` and `workshop`
+ * are those of the active workshop (the one the access token names); `memberships` lists every
+ * workshop they belong to, the active one included, by name.
+ */
 export const userSchema = z.object({
   id: z.string(),
   name: z.string(),
   email: z.string(),
   role: roleSchema,
   workshop: workshopSummarySchema,
+  memberships: z.array(membershipSchema),
 });
 export type User = z.infer<typeof userSchema>;
 
@@ -78,6 +92,11 @@ export const invitationPreviewSchema = z.object({
   role: roleSchema,
   workshopName: z.string(),
   invitedBy: z.string(),
+  /**
+   * True when the address already has a Batchproof account: accepting then asks for that
+   * account's password and adds a membership, instead of creating an account.
+   */
+  existingAccount: z.boolean(),
 });
 export type InvitationPreview = z.infer<typeof invitationPreviewSchema>;
 
@@ -86,12 +105,29 @@ export const tokenSchema = textField('The link', 'The link is missing its token.
   .min(20, 'The link is incomplete; open it again from the e-mail.')
   .max(200);
 
+/** Accepting an invitation for a new account: a name and a new password. */
 export const acceptInvitationSchema = z.object({
   token: tokenSchema,
   name: personNameSchema,
   password: newPasswordSchema,
 });
 export type AcceptInvitation = z.infer<typeof acceptInvitationSchema>;
+
+/**
+ * Accepting an invitation with an account that already exists: that account's password (the
+ * name is already known). The invitation then adds a membership.
+ */
+export const acceptInvitationExistingSchema = z.object({
+  token: tokenSchema,
+  password: z.string({ error: 'Password is required.' }).min(1, 'Password is required.').max(200),
+});
+export type AcceptInvitationExisting = z.infer<typeof acceptInvitationExistingSchema>;
+
+/** `POST /api/auth/workshop`: the workshop to work in; answers a new session for it. */
+export const switchWorkshopSchema = z.object({
+  workshopId: z.uuid({ error: 'Choose one of your workshops.' }),
+});
+export type SwitchWorkshop = z.infer<typeof switchWorkshopSchema>;
 
 /** `POST /api/auth/sign-up/confirm`: the token from the confirmation e-mail. */
 export const signUpConfirmSchema = z.object({ token: tokenSchema });

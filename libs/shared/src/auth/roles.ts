@@ -30,4 +30,9 @@ export const ROLE_SETS = {
   writers: ['owner', 'formulator'],
   /** Who records goods-in: production receives deliveries as well as the writers. */
   goodsIn: ['owner', 'formulator', 'production'],
+  /**
+   * Who opens Assessments: the workshop's owner, formulators and viewers see every assessment;
+   * an assessor sees only the versions shared with them.
+   */
+  assessments: ['owner', 'formulator', 'viewer', 'assessor'],
 } as const satisfies Record<string, readonly Role[]>;

@@ -30,6 +30,13 @@ export const errorCodeSchema = z.enum([
   'stock_short',
   /** A released record cannot be changed (409): batches take amendments instead. */
   'record_released',
+  /** A signed assessment cannot be changed (409): share the new version and assess it. */
+  'assessment_signed',
+  /**
+   * Signing refused because the packet changed since the assessor read it (409): the answer's
+   * message says so; reload, read again and sign the new content.
+   */
+  'packet_changed',
   /** An `Idempotency-Key` already used for a different request. */
   'idempotency_key_reused',
   /** The database cannot be reached right now (503); the request may be retried. */

@@ -1,6 +1,6 @@
 import { index, jsonb, pgTable, text, uuid } from 'drizzle-orm/pg-core';
 import { id, timestamps, workshopKey, workshopReference } from './columns';
-import { users } from './users';
+import { members } from './users';
 import { workshops } from './workshops';
 
 /** Who did what to which record, across the workshop's data. */
@@ -24,7 +24,7 @@ export const auditEvents = pgTable(
     workshopReference(
       'audit_events_actor_fk',
       { workshopId: t.workshopId, column: t.actorId },
-      users,
+      members,
       'set null',
     ),
   ],

@@ -22,7 +22,7 @@ import {
 import { id, timestamps, workshopKey, workshopReference } from './columns';
 import { formulaLines, formulas, formulaVersions } from './formulas';
 import { materials } from './materials';
-import { users } from './users';
+import { members } from './users';
 import { workshops } from './workshops';
 
 export const batchStateEnum = pgEnum('batch_state', BATCH_STATES);
@@ -113,13 +113,13 @@ export const batches = pgTable(
     workshopReference(
       'batches_created_by_fk',
       { workshopId: t.workshopId, column: t.createdBy },
-      users,
+      members,
       'set null',
     ),
     workshopReference(
       'batches_released_by_fk',
       { workshopId: t.workshopId, column: t.releasedBy },
-      users,
+      members,
       'set null',
     ),
   ],
@@ -153,7 +153,7 @@ export const batchAmendments = pgTable(
     workshopReference(
       'batch_amendments_amended_by_fk',
       { workshopId: t.workshopId, column: t.amendedBy },
-      users,
+      members,
       'set null',
     ),
   ],

@@ -3,7 +3,7 @@ import { COMPLAINT_STATUSES } from '@batchproof/shared';
 import { id, timestamps, workshopKey, workshopReference } from './columns';
 import { batches } from './batches';
 import { formulas } from './formulas';
-import { users } from './users';
+import { members } from './users';
 import { workshops } from './workshops';
 
 export const complaintStatusEnum = pgEnum('complaint_status', COMPLAINT_STATUSES);
@@ -51,7 +51,7 @@ export const complaints = pgTable(
     workshopReference(
       'complaints_created_by_fk',
       { workshopId: t.workshopId, column: t.createdBy },
-      users,
+      members,
       'set null',
     ),
   ],

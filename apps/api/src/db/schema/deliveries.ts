@@ -22,7 +22,7 @@ import {
 import { archivedAt, id, timestamps, workshopKey, workshopReference } from './columns';
 import { batches } from './batches';
 import { lots } from './lots';
-import { users } from './users';
+import { members } from './users';
 import { workshops } from './workshops';
 
 export const customerKindEnum = pgEnum('customer_kind', CUSTOMER_KINDS);
@@ -80,7 +80,7 @@ export const deliveries = pgTable(
     workshopReference(
       'deliveries_created_by_fk',
       { workshopId: t.workshopId, column: t.createdBy },
-      users,
+      members,
       'set null',
     ),
   ],
@@ -165,13 +165,13 @@ export const recalls = pgTable(
     workshopReference(
       'recalls_opened_by_fk',
       { workshopId: t.workshopId, column: t.openedBy },
-      users,
+      members,
       'set null',
     ),
     workshopReference(
       'recalls_closed_by_fk',
       { workshopId: t.workshopId, column: t.closedBy },
-      users,
+      members,
       'set null',
     ),
   ],
@@ -248,7 +248,7 @@ export const recallReplies = pgTable(
     workshopReference(
       'recall_replies_created_by_fk',
       { workshopId: t.workshopId, column: t.createdBy },
-      users,
+      members,
       'set null',
     ),
   ],

@@ -14,7 +14,7 @@ import { DOCUMENT_KINDS } from '@batchproof/shared';
 import { archivedAt, bytea, id, timestamps, workshopKey, workshopReference } from './columns';
 import { lots } from './lots';
 import { materials } from './materials';
-import { users } from './users';
+import { members } from './users';
 import { workshops } from './workshops';
 
 export const documentKindEnum = pgEnum('document_kind', DOCUMENT_KINDS);
@@ -81,7 +81,7 @@ export const documents = pgTable(
     workshopReference(
       'documents_uploaded_by_fk',
       { workshopId: t.workshopId, column: t.uploadedBy },
-      users,
+      members,
       'set null',
     ),
   ],

@@ -14,7 +14,7 @@ import {
 import { PRODUCT_TYPES, type EvaluationResult, type ProductProfile } from '@batchproof/shared';
 import { archivedAt, id, timestamps, workshopKey, workshopReference } from './columns';
 import { materials } from './materials';
-import { users } from './users';
+import { members } from './users';
 import { workshops } from './workshops';
 
 export const productTypeEnum = pgEnum('product_type', PRODUCT_TYPES);
@@ -92,7 +92,7 @@ export const formulaVersions = pgTable(
     workshopReference(
       'formula_versions_released_by_fk',
       { workshopId: t.workshopId, column: t.releasedBy },
-      users,
+      members,
       'set null',
     ),
   ],

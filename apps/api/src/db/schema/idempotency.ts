@@ -1,6 +1,6 @@
 import { integer, pgTable, primaryKey, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { workshopReference } from './columns';
-import { users } from './users';
+import { members } from './users';
 import { workshops } from './workshops';
 
 /**
@@ -28,7 +28,7 @@ export const idempotencyKeys = pgTable(
     workshopReference(
       'idempotency_keys_user_fk',
       { workshopId: t.workshopId, column: t.userId },
-      users,
+      members,
       'cascade',
     ),
   ],

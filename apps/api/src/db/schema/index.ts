@@ -14,3 +14,4 @@ export * from './label-runs';
 export * from './batches';
 export * from './deliveries';
 export * from './complaints';
+export * from './assessments';

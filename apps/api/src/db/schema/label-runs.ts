@@ -24,7 +24,7 @@ import type {
 import { bytea, id, timestamps, workshopKey, workshopReference } from './columns';
 import { batches } from './batches';
 import { formulas, formulaVersions } from './formulas';
-import { users } from './users';
+import { members } from './users';
 import { workshops } from './workshops';
 
 /**
@@ -56,7 +56,7 @@ export const productIdentities = pgTable(
     workshopReference(
       'product_identities_updated_by_fk',
       { workshopId: t.workshopId, column: t.updatedBy },
-      users,
+      members,
       'set null',
     ),
   ],
@@ -140,7 +140,7 @@ export const labelRuns = pgTable(
     workshopReference(
       'label_runs_created_by_fk',
       { workshopId: t.workshopId, column: t.createdBy },
-      users,
+      members,
       'set null',
     ),
   ],

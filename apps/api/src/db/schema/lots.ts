@@ -15,7 +15,7 @@ import { LOT_UNITS } from '@batchproof/shared';
 import { id, timestamps, workshopKey, workshopReference } from './columns';
 import { batches, stockAdjustmentReasonEnum, stockMovementKindEnum } from './batches';
 import { materials } from './materials';
-import { users } from './users';
+import { members } from './users';
 import { workshops } from './workshops';
 
 export const lotUnitEnum = pgEnum('lot_unit', LOT_UNITS);
@@ -129,7 +129,7 @@ export const lotConsumptions = pgTable(
     workshopReference(
       'lot_consumptions_created_by_fk',
       { workshopId: t.workshopId, column: t.createdBy },
-      users,
+      members,
       'set null',
     ),
   ],

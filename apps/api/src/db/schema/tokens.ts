@@ -1,6 +1,6 @@
 import { index, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { id, timestamps, workshopKey, workshopReference } from './columns';
-import { roleEnum, users } from './users';
+import { members, roleEnum } from './users';
 import { workshops } from './workshops';
 
 /** Pending invitations; only the SHA-256 of the token sent by e-mail is kept. */
@@ -25,7 +25,7 @@ export const invitations = pgTable(
     workshopReference(
       'invitations_invited_by_fk',
       { workshopId: t.workshopId, column: t.invitedBy },
-      users,
+      members,
       'set null',
     ),
   ],
@@ -50,7 +50,7 @@ export const passwordResets = pgTable(
     workshopReference(
       'password_resets_user_fk',
       { workshopId: t.workshopId, column: t.userId },
-      users,
+      members,
       'cascade',
     ),
   ],
@@ -82,7 +82,7 @@ export const refreshSessions = pgTable(
     workshopReference(
       'refresh_sessions_user_fk',
       { workshopId: t.workshopId, column: t.userId },
-      users,
+      members,
       'cascade',
     ),
   ],

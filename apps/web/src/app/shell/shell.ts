@@ -34,7 +34,8 @@ const NAV: readonly NavEntry[] = [
   { label: 'Trace', icon: 'route', link: '/trace', roles: ROLE_SETS.members },
   { label: 'Recalls', icon: 'campaign', link: '/recalls', roles: ROLE_SETS.members },
   { label: 'Complaints', icon: 'report', link: '/complaints', roles: ROLE_SETS.members },
-  { label: 'Assessments', icon: 'fact_check' },
+  { label: 'Assessments', icon: 'fact_check', link: '/assessments', roles: ROLE_SETS.assessments },
+  { label: 'Readiness', icon: 'storefront', link: '/readiness', roles: ROLE_SETS.members },
   { label: 'Reference lists', icon: 'menu_book', link: '/reference' },
   { label: 'Workshop', icon: 'groups', link: '/workshop', roles: ROLE_SETS.members },
 ];

@@ -1,0 +1,4 @@
+export * from './assessment-api';
+export * from './safety-packet';
+export * from './exposure-defaults';
+export * from './readiness-api';
