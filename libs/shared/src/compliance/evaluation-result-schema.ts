@@ -43,6 +43,7 @@ export const findingCodeSchema = z.enum([
   'WARNING_FOAMING_BATH_DIRECTIONS',
   'SOAP_NOT_A_COSMETIC',
   'LABEL_DETAILS_MISSING',
+  'SAFETY_ASSESSMENT_MISSING',
 ]);
 /** A finding code. */
 export type FindingCode = z.infer<typeof findingCodeSchema>;
