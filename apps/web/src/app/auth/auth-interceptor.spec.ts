@@ -16,6 +16,7 @@ const session = (accessToken: string): SessionBody => ({
     email: 'ada@example.com',
     role: 'owner',
     workshop: { id: 'w1', name: 'Hollowmere Bathworks' },
+    memberships: [{ workshopId: 'w1', workshopName: 'Hollowmere Bathworks', role: 'owner' }],
   },
 });
 const unauthenticated = {

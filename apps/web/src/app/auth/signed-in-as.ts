@@ -4,7 +4,7 @@ import { provideZonelessChangeDetection } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
 import { provideRouter, type Routes, withComponentInputBinding } from '@angular/router';
 import { firstValueFrom } from 'rxjs';
-import type { Role } from '@batchproof/shared';
+import type { Membership, Role } from '@batchproof/shared';
 import { errorInterceptor } from '../http/error-interceptor';
 import { authInterceptor } from './auth-interceptor';
 import { Session } from './session';
@@ -14,9 +14,15 @@ import { Session } from './session';
 /**
  * Configures the TestBed as the app runs (zoneless, the router on `routes` with component input
  * binding, HttpClient with the app's interceptors, answered by the testing backend), then signs a
- * member of `role` in through the real {@link Session}. Returns the testing backend.
+ * member of `role` in through the real {@link Session}, active in Hollowmere Bathworks (w1).
+ * `otherMemberships` are the workshops they also belong to (none unless given). Returns the
+ * testing backend.
  */
-export async function signedInAs(role: Role, routes: Routes = []): Promise<HttpTestingController> {
+export async function signedInAs(
+  role: Role,
+  routes: Routes = [],
+  otherMemberships: readonly Membership[] = [],
+): Promise<HttpTestingController> {
   TestBed.configureTestingModule({
     providers: [
       provideZonelessChangeDetection(),
@@ -38,6 +44,10 @@ export async function signedInAs(role: Role, routes: Routes = []): Promise<HttpT
       email: 'me@example.com',
       role,
       workshop: { id: 'w1', name: 'Hollowmere Bathworks' },
+      memberships: [
+        { workshopId: 'w1', workshopName: 'Hollowmere Bathworks', role },
+        ...otherMemberships,
+      ],
     },
   });
   await signingIn;

@@ -127,6 +127,7 @@ describe('SignInPage', () => {
         email: 'ada@example.com',
         role: 'owner',
         workshop: { id: 'w1', name: 'Hollowmere Bathworks' },
+        memberships: [{ workshopId: 'w1', workshopName: 'Hollowmere Bathworks', role: 'owner' }],
       },
     });
     await page.harness.fixture.whenStable();

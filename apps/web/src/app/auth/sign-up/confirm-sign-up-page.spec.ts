@@ -52,6 +52,7 @@ describe('ConfirmSignUpPage', () => {
           email: 'ada@example.com',
           role: 'owner',
           workshop: { id: 'w1', name: 'Hollowmere Bathworks' },
+          memberships: [{ workshopId: 'w1', workshopName: 'Hollowmere Bathworks', role: 'owner' }],
         },
       },
       { status: 201, statusText: 'Created' },
