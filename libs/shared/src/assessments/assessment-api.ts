@@ -123,6 +123,12 @@ export const shareCreateSchema = z.object({
 });
 export type ShareCreate = z.infer<typeof shareCreateSchema>;
 
+/** `GET /api/assessment-shares?versionId=`: the live shares, of one version when named. */
+export const shareListQuerySchema = z.object({
+  versionId: recordIdSchema('formula version').optional(),
+});
+export type ShareListQuery = z.infer<typeof shareListQuerySchema>;
+
 /** `POST /api/assessments` (the assessor): accept a share and start the assessment. */
 export const assessmentCreateSchema = z.object({ shareId: recordIdSchema('shared version') });
 export type AssessmentCreate = z.infer<typeof assessmentCreateSchema>;

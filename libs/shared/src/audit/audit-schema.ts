@@ -9,6 +9,8 @@ import { isoDate, recordIdSchema } from '../records/record-fields';
 
 /** Plain names for the subject types the features record; an unknown type shows as it is. */
 export const AUDIT_SUBJECT_LABELS: Readonly<Record<string, string>> = {
+  assessment: 'Safety assessment',
+  assessment_share: 'Shared formula version',
   batch: 'Batch',
   complaint: 'Complaint',
   customer: 'Customer',
