@@ -86,3 +86,24 @@ export function accountExistsMail(input: { to: string; resetLink: string }): Out
     html: wrap(lines, { href: input.resetLink, label: 'Choose a new password' }),
   };
 }
+
+/** Tells an assessor that a workshop shared a formula version with them for safety assessment. */
+export function versionSharedMail(input: {
+  to: string;
+  workshopName: string;
+  sharedByName: string;
+  formulaName: string;
+  versionNumber: number;
+  link: string;
+}): OutgoingMail {
+  const lines = [
+    `${input.sharedByName} of ${input.workshopName} has shared ${input.formulaName}, version ${input.versionNumber}, with you for its safety assessment.`,
+    `Open Assessments in Batchproof (switch to ${input.workshopName} if you work for several workshops) to read the packet and start the assessment.`,
+  ];
+  return {
+    to: input.to,
+    subject: `${input.workshopName} shared ${input.formulaName} (version ${input.versionNumber}) for assessment`,
+    text: `${lines.join('\n\n')}\n\n${input.link}\n`,
+    html: wrap(lines, { href: input.link, label: 'Open Assessments' }),
+  };
+}
