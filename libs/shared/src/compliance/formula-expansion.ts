@@ -36,7 +36,7 @@ export interface ExpandedFormula {
 }
 
 /** Expands blends into their components and works out each line's and ingredient's share. */
-export function expandFormula(input: EvaluationInput): ExpandedFormula {
+export function expandFormula(input: Pick<EvaluationInput, 'lines'>): ExpandedFormula {
   const totalGrams = input.lines.reduce((sum, line) => sum + line.grams, 0);
   const lines = input.lines.map((line, index) => ({
     index,
