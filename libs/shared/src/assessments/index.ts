@@ -2,3 +2,4 @@ export * from './assessment-api';
 export * from './safety-packet';
 export * from './exposure-defaults';
 export * from './readiness-api';
+export * from './build-safety-packet';
