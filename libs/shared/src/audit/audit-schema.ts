@@ -21,6 +21,7 @@ export const AUDIT_SUBJECT_LABELS: Readonly<Record<string, string>> = {
   label_run: 'Label print run',
   label_stock: 'Label stock',
   lot: 'Lot',
+  market_record: 'Notification or listing record',
   material: 'Material',
   recall: 'Recall',
   supplier: 'Supplier',
