@@ -73,7 +73,6 @@ CREATE TABLE "safety_notes" (
 -- Every existing user becomes a member of the workshop they belonged to, with the same role.
 INSERT INTO "memberships" ("workshop_id", "user_id", "role", "last_active_at", "created_at", "updated_at")
   SELECT "workshop_id", "id", "role", now(), "created_at", "updated_at" FROM "users";--> statement-breakpoint
-ALTER TABLE "users" DROP CONSTRAINT "users_workshop_key";--> statement-breakpoint
 ALTER TABLE "users" DROP CONSTRAINT "users_workshop_id_workshops_id_fk";
 --> statement-breakpoint
 ALTER TABLE "invitations" DROP CONSTRAINT "invitations_invited_by_fk";
@@ -112,6 +111,8 @@ ALTER TABLE "recalls" DROP CONSTRAINT "recalls_closed_by_fk";
 --> statement-breakpoint
 ALTER TABLE "complaints" DROP CONSTRAINT "complaints_created_by_fk";
 --> statement-breakpoint
+-- Dropped after the foreign keys that use it as their target.
+ALTER TABLE "users" DROP CONSTRAINT "users_workshop_key";--> statement-breakpoint
 DROP INDEX "users_workshop_idx";--> statement-breakpoint
 ALTER TABLE "memberships" ADD CONSTRAINT "memberships_workshop_id_workshops_id_fk" FOREIGN KEY ("workshop_id") REFERENCES "public"."workshops"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "memberships" ADD CONSTRAINT "memberships_user_id_users_id_fk" FOREIGN KEY ("user_id") REFERENCES "public"."users"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
