@@ -33,6 +33,7 @@ import { recallsRouter } from './recalls/recalls-router';
 import { complaintsRouter } from './complaints/complaints-router';
 import { assessmentSharesRouter } from './assessments/assessment-shares-router';
 import { assessmentsRouter } from './assessments/assessments-router';
+import { safetyNotesRouter } from './assessments/safety-notes-router';
 import { readinessRouter } from './readiness/readiness-router';
 import { auditRouter } from './audit/audit-router';
 
@@ -105,6 +106,7 @@ export function createApp(deps: AppDeps): Express {
   api.use('/documents', documentsRouter({ db: deps.db, authn }));
   api.use('/lots', lotsRouter({ db: deps.db, authn }));
   api.use('/formulas', productIdentityRouter({ db: deps.db, authn }));
+  api.use('/formulas', safetyNotesRouter({ db: deps.db, authn }));
   api.use('/formulas', formulasRouter({ db: deps.db, authn }));
   api.use('/attention', attentionRouter({ db: deps.db, authn }));
   api.use('/label-stocks', labelStocksRouter({ db: deps.db, authn }));
