@@ -24,8 +24,8 @@ import {
   lotConsumptions,
   lots,
   materials,
+  memberships,
   recalls,
-  users,
 } from '../db/schema';
 import { productNameOf, soldInUs } from '../complaints/complaints-repository';
 import { documentInUse } from '../documents/documents-repository';
@@ -182,7 +182,7 @@ export async function formulasWithOutOfDateLabels(db: Database, workshopId: stri
 /** How many materials, lots, formulas and members the workshop has. */
 export async function workshopCounts(db: Database, workshopId: string) {
   const countOf = async (
-    table: typeof materials | typeof lots | typeof formulas | typeof users,
+    table: typeof materials | typeof lots | typeof formulas | typeof memberships,
   ) => {
     const [row] = await db
       .select({ n: count() })
@@ -194,7 +194,7 @@ export async function workshopCounts(db: Database, workshopId: string) {
     countOf(materials),
     countOf(lots),
     countOf(formulas),
-    countOf(users),
+    countOf(memberships),
   ]);
   return { materials: m, lots: l, formulas: f, members: u };
 }

@@ -26,9 +26,14 @@ export interface AuthConfig {
 
 export const hashPassword = (password: string) => bcrypt.hash(password, BCRYPT_COST);
 
+/** The signed-in person in their active workshop, with every workshop they belong to. */
 export async function toUser(db: Database, u: AuthUser): Promise<User> {
-  const workshop = await repo.findWorkshop(db, u.workshopId);
-  return { id: u.id, name: u.name, email: u.email, role: u.role, workshop: workshop! };
+  const memberships = await repo.listMemberships(db, u.id);
+  const active = memberships.find((m) => m.workshopId === u.workshopId);
+  const workshop = active
+    ? { id: active.workshopId, name: active.workshopName }
+    : (await repo.findWorkshop(db, u.workshopId))!;
+  return { id: u.id, name: u.name, email: u.email, role: u.role, workshop, memberships };
 }
 
 /**
@@ -116,14 +121,52 @@ export async function confirmSignUp(db: Database, token: string) {
   });
 }
 
-export async function verifyCredentials(db: Database, input: SignIn): Promise<AuthUser> {
+/** Whether `password` is the account's; compares against a decoy when there is no account. */
+export async function passwordMatches(
+  account: { passwordHash: string } | undefined,
+  password: string,
+) {
+  const ok = await bcrypt.compare(password, account?.passwordHash ?? decoyHash);
+  return ok && account !== undefined;
+}
+
+/**
+ * Checks an e-mail and password and answers the user in the workshop they worked in last
+ * (which this sign-in marks as worked in now).
+ */
+export async function verifyCredentials(db: Database, input: SignIn): Promise<repo.SessionUser> {
   const found = await repo.findUserByEmail(db, input.email);
-  const ok = await bcrypt.compare(input.password, found?.passwordHash ?? decoyHash);
-  if (!found || !ok) {
+  const ok = await passwordMatches(found, input.password);
+  const user = found && ok ? await repo.findLatestSessionUser(db, found.id) : undefined;
+  if (!user) {
     throw new AppError(401, 'unauthenticated', 'That e-mail and password do not match an account.');
   }
-  const { passwordHash: _omit, ...user } = found;
+  await repo.touchMembership(db, user.id, user.workshopId);
   return user;
+}
+
+/**
+ * Moves the signed-in user to another of their workshops: marks it worked in now and spends the
+ * refresh token they presented (if it is theirs and live), so the new session continues its
+ * family. Refused with a field error when they are not a member there.
+ */
+export async function switchWorkshop(
+  db: Database,
+  actor: AuthUser,
+  workshopId: string,
+  refreshToken: string | undefined,
+) {
+  const user = await repo.findSessionUser(db, actor.id, workshopId);
+  if (!user) {
+    throw new AppError(400, 'validation_failed', 'You are not a member of that workshop.', {
+      workshopId: ['Choose one of your workshops.'],
+    });
+  }
+  await repo.touchMembership(db, user.id, workshopId);
+  const spent = refreshToken
+    ? await repo.spendRefreshSession(db, hashToken(refreshToken), actor.id)
+    : undefined;
+  return { user, familyId: spent?.familyId };
 }
 
 const sessionEnded = () =>
@@ -140,8 +183,9 @@ export async function refresh(db: Database, token: string | undefined) {
     await repo.revokeFamilyOfSpentToken(db, hashToken(token));
     throw sessionEnded();
   }
-  const user = await repo.findUserById(db, spent.userId);
-  if (!user || user.workshopId !== spent.workshopId) throw sessionEnded();
+  // The session stays in its workshop, as long as the user is still a member there.
+  const user = await repo.findSessionUser(db, spent.userId, spent.workshopId);
+  if (!user) throw sessionEnded();
   return { user, familyId: spent.familyId };
 }
 
@@ -164,7 +208,9 @@ export async function requestPasswordReset(
   appUrl: string,
   email: string,
 ) {
-  const user = await repo.findUserByEmail(db, email);
+  const account = await repo.findUserByEmail(db, email);
+  // A reset row belongs to a membership: the one the user worked in last.
+  const user = account && (await repo.findLatestSessionUser(db, account.id));
   if (!user) return;
   const token = newOpaqueToken();
   await repo.insertPasswordReset(db, {

@@ -1,13 +1,21 @@
-import { and, eq, gt, inArray, isNotNull, isNull, ne, sql } from 'drizzle-orm';
-import type { Role } from '@batchproof/shared';
+import { and, asc, eq, gt, inArray, isNotNull, isNull, ne, sql } from 'drizzle-orm';
+import type { Membership, Role } from '@batchproof/shared';
 import type { Database } from '../db/database';
-import { passwordResets, refreshSessions, signUpRequests, users, workshops } from '../db/schema';
+import {
+  memberships,
+  passwordResets,
+  refreshSessions,
+  signUpRequests,
+  users,
+  workshops,
+} from '../db/schema';
 import type { AuthUser } from './authenticate';
 
+/** A person in one of their workshops: the user's columns with that membership's role. */
 const authUserColumns = {
   id: users.id,
-  workshopId: users.workshopId,
-  role: users.role,
+  workshopId: memberships.workshopId,
+  role: memberships.role,
   name: users.name,
   email: users.email,
   tokenVersion: users.tokenVersion,
@@ -16,14 +24,73 @@ const authUserColumns = {
 /** A member as the session code reads them: with the version their access tokens must carry. */
 export type SessionUser = AuthUser & { tokenVersion: number };
 
-export async function findUserById(db: Database, id: string): Promise<SessionUser | undefined> {
-  const [row] = await db.select(authUserColumns).from(users).where(eq(users.id, id));
+/** People in their workshops: one row per membership. */
+const sessionUsers = (db: Database) =>
+  db.select(authUserColumns).from(memberships).innerJoin(users, eq(users.id, memberships.userId));
+
+/** The user as a member of one workshop; undefined when they are not (or no longer) a member. */
+export async function findSessionUser(
+  db: Database,
+  userId: string,
+  workshopId: string,
+): Promise<SessionUser | undefined> {
+  const [row] = await sessionUsers(db).where(
+    and(eq(memberships.userId, userId), eq(memberships.workshopId, workshopId)),
+  );
   return row;
 }
 
+/**
+ * The user in the workshop they worked in last (latest `last_active_at`; never-opened
+ * memberships after those, oldest first); undefined when they belong to no workshop.
+ */
+export async function findLatestSessionUser(
+  db: Database,
+  userId: string,
+): Promise<SessionUser | undefined> {
+  const [row] = await sessionUsers(db)
+    .where(eq(memberships.userId, userId))
+    .orderBy(
+      sql`${memberships.lastActiveAt} desc nulls last`,
+      asc(memberships.createdAt),
+      asc(memberships.workshopId),
+    )
+    .limit(1);
+  return row;
+}
+
+/** Every workshop the user belongs to, by workshop name. */
+export async function listMemberships(db: Database, userId: string): Promise<Membership[]> {
+  return db
+    .select({
+      workshopId: memberships.workshopId,
+      workshopName: workshops.name,
+      role: memberships.role,
+    })
+    .from(memberships)
+    .innerJoin(workshops, eq(workshops.id, memberships.workshopId))
+    .where(eq(memberships.userId, userId))
+    .orderBy(asc(workshops.name), asc(workshops.id));
+}
+
+/** Records that the user works in this workshop now, so their next sign-in opens it. */
+export async function touchMembership(db: Database, userId: string, workshopId: string) {
+  await db
+    .update(memberships)
+    .set({ lastActiveAt: new Date() })
+    .where(and(eq(memberships.userId, userId), eq(memberships.workshopId, workshopId)));
+}
+
+/** The account an e-mail names, with its password hash; undefined when there is none. */
 export async function findUserByEmail(db: Database, email: string) {
   const [row] = await db
-    .select({ ...authUserColumns, passwordHash: users.passwordHash })
+    .select({
+      id: users.id,
+      name: users.name,
+      email: users.email,
+      tokenVersion: users.tokenVersion,
+      passwordHash: users.passwordHash,
+    })
     .from(users)
     .where(eq(users.email, email));
   return row;
@@ -45,15 +112,20 @@ export async function createWorkshopWithOwner(
     const [workshop] = await tx.insert(workshops).values({ name: input.workshopName }).returning();
     const [user] = await tx
       .insert(users)
-      .values({
-        workshopId: workshop!.id,
-        email: input.email,
-        name: input.name,
-        passwordHash: input.passwordHash,
-        role: 'owner' satisfies Role,
-      })
-      .returning(authUserColumns);
-    return user!;
+      .values({ email: input.email, name: input.name, passwordHash: input.passwordHash })
+      .returning();
+    const role: Role = 'owner';
+    await tx
+      .insert(memberships)
+      .values({ workshopId: workshop!.id, userId: user!.id, role, lastActiveAt: new Date() });
+    return {
+      id: user!.id,
+      workshopId: workshop!.id,
+      role,
+      name: user!.name,
+      email: user!.email,
+      tokenVersion: user!.tokenVersion,
+    };
   });
 }
 
@@ -67,8 +139,9 @@ export async function insertRefreshSession(
 /**
  * Marks a live refresh session used and returns it; undefined when the token is unknown,
  * expired or already revoked. The update is the claim, so a token can be spent once.
+ * With `userId`, only that user's session is spent.
  */
-export async function spendRefreshSession(db: Database, tokenHash: string) {
+export async function spendRefreshSession(db: Database, tokenHash: string, userId?: string) {
   const [row] = await db
     .update(refreshSessions)
     .set({ revokedAt: new Date() })
@@ -77,6 +150,7 @@ export async function spendRefreshSession(db: Database, tokenHash: string) {
         eq(refreshSessions.tokenHash, tokenHash),
         isNull(refreshSessions.revokedAt),
         gt(refreshSessions.expiresAt, new Date()),
+        userId === undefined ? undefined : eq(refreshSessions.userId, userId),
       ),
     )
     .returning({

@@ -1,12 +1,12 @@
 import { Router, type CookieOptions, type Response } from 'express';
 import {
-  acceptInvitationSchema,
   type EmailSent,
   passwordResetCompleteSchema,
   passwordResetRequestSchema,
   signInSchema,
   signUpConfirmSchema,
   signUpSchema,
+  switchWorkshopSchema,
   tokenSchema,
 } from '@batchproof/shared';
 import { runAfterAnswer } from '../core/after-answer';
@@ -82,6 +82,19 @@ export function authRouter({ db, mailer, authn, limits, config }: AuthRouterDeps
     await respondWithSession(res, user, 200, familyId);
   });
 
+  // Works in another of the user's workshops from now on: a new access token naming it, and a
+  // refresh cookie (same family as the one presented) that keeps the session there.
+  router.post('/workshop', ...limits.refresh, authn.authenticate, async (req, res) => {
+    const { workshopId } = parse(switchWorkshopSchema, req.body);
+    const { user, familyId } = await auth.switchWorkshop(
+      db,
+      req.user!,
+      workshopId,
+      req.cookies?.[REFRESH_COOKIE],
+    );
+    await respondWithSession(res, user, 200, familyId);
+  });
+
   router.post('/sign-out', async (req, res) => {
     await auth.signOut(db, req.cookies?.[REFRESH_COOKIE]);
     clearRefreshCookie(res);
@@ -99,8 +112,7 @@ export function authRouter({ db, mailer, authn, limits, config }: AuthRouterDeps
   });
 
   router.post('/invitations/accept', ...limits.linkToken, async (req, res) => {
-    const input = parse(acceptInvitationSchema, req.body);
-    await respondWithSession(res, await acceptInvitation(db, input), 201);
+    await respondWithSession(res, await acceptInvitation(db, req.body), 201);
   });
 
   // Answers before looking the address up: the same answer in the same time either way.
@@ -123,7 +135,7 @@ export function authRouter({ db, mailer, authn, limits, config }: AuthRouterDeps
   return router;
 }
 
-/** `GET /api/me`: the signed-in user, their workshop and role. */
+/** `GET /api/me`: the signed-in user, their active workshop and role, and all their workshops. */
 export function meRouter({ db, authn }: Pick<AuthRouterDeps, 'db' | 'authn'>): Router {
   const router = Router();
   router.get('/', authn.authenticate, async (req, res) => {

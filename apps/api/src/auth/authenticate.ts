@@ -7,9 +7,12 @@ import { AppError, forbidden } from '../core/app-error';
 import { isRecordId } from '../core/record-id';
 import type { Database } from '../db/database';
 import { JWT_ALGORITHM, JWT_AUDIENCE, JWT_ISSUER } from './access-tokens';
-import { findUserById } from './auth-repository';
+import { findSessionUser } from './auth-repository';
 
-/** The signed-in member, as handlers see it on `req.user`. */
+/**
+ * The signed-in member, as handlers see it on `req.user`: the person in the workshop their
+ * access token names (its `wid`), with the role they hold there.
+ */
 export interface AuthUser {
   id: string;
   workshopId: string;
@@ -27,8 +30,9 @@ declare global {
 }
 
 /**
- * Builds the bearer-token authenticator. The user is loaded from the database on every request,
- * so a removed member, a changed role or a raised token version (password reset, sign out
+ * Builds the bearer-token authenticator. The user and their membership of the token's workshop
+ * are loaded from the database on every request, so a removed member, a changed role or a raised
+ * token version (password reset, sign out
  * everywhere) takes effect at once, not when the token expires.
  */
 export function createAuthenticator(db: Database, secret: string) {
@@ -49,13 +53,15 @@ export function createAuthenticator(db: Database, secret: string) {
     ) => {
       // A subject that is not a record id is no one: refused before it reaches a uuid column.
       if (!isRecordId(payload.sub) || !isRecordId(payload.wid)) return done(null, false);
-      // A token signed before the user's last password reset or sign-out everywhere is refused.
-      findUserById(db, payload.sub).then(
-        (u) =>
-          done(
-            null,
-            u && u.workshopId === payload.wid && u.tokenVersion === (payload.ver ?? 0) ? u : false,
-          ),
+      // The person as a member of the token's workshop: no membership there (removed, or never
+      // a member) is no one. A token signed before the user's last password reset or sign-out
+      // everywhere is refused.
+      findSessionUser(db, payload.sub, payload.wid).then(
+        (u) => {
+          if (!u || u.tokenVersion !== (payload.ver ?? 0)) return done(null, false);
+          const { tokenVersion: _version, ...user } = u;
+          done(null, user);
+        },
         (err) => done(err),
       );
     },

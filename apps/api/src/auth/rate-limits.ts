@@ -20,7 +20,10 @@ export interface RateLimitPolicy {
   signUpPerAddress: number;
   /** Uses of a link token from one address: invitation preview and acceptance, reset, sign-up confirmation. */
   linkTokenPerAddress: number;
-  /** Refreshes from one address; every open tab refreshes every few minutes, so this is generous. */
+  /**
+   * Refreshes and workshop switches from one address (both issue a session); every open tab
+   * refreshes every few minutes, so this is generous.
+   */
   refreshPerAddress: number;
 }
 

@@ -1,13 +1,18 @@
-import type {
-  AcceptInvitation,
-  InvitationCreate,
-  InvitationPreview,
-  MemberListQuery,
-  Role,
+import {
+  acceptInvitationExistingSchema,
+  acceptInvitationSchema,
+  tokenSchema,
+  type InvitationCreate,
+  type InvitationPreview,
+  type MemberListQuery,
+  type Role,
 } from '@batchproof/shared';
+import * as z from 'zod';
 import { hashToken, newOpaqueToken } from '../auth/access-tokens';
-import { hashPassword } from '../auth/auth-domain';
+import { hashPassword, passwordMatches } from '../auth/auth-domain';
+import { findUserByEmail, type SessionUser } from '../auth/auth-repository';
 import type { AuthUser } from '../auth/authenticate';
+import { parse } from '../core/validate';
 import { AppError, conflict, notFound } from '../core/app-error';
 import type { Database } from '../db/database';
 import { invitationMail } from '../mail/mail-templates';
@@ -28,9 +33,16 @@ export async function listInvitations(db: Database, actor: AuthUser) {
   return { items: (await repo.listPendingInvitations(db, actor.workshopId)).map(iso) };
 }
 
+const alreadyMember = () =>
+  conflict('This e-mail already belongs to a member of this workshop.', {
+    email: ['This e-mail already belongs to a member of this workshop.'],
+  });
+
 /**
  * Creates an invitation and e-mails its one-time link. An invitation to the same address in this
- * workshop that was not accepted yet is replaced: one link stays valid, the newest.
+ * workshop that was not accepted yet is replaced: one link stays valid, the newest. An address
+ * that already has an account may be invited (accepting adds a membership), unless that account
+ * is a member here already.
  */
 export async function invite(
   db: Database,
@@ -39,11 +51,7 @@ export async function invite(
   actor: AuthUser,
   input: InvitationCreate,
 ) {
-  if (await repo.countUsersWithEmail(db, input.email)) {
-    throw conflict('This e-mail already belongs to a Batchproof account.', {
-      email: ['This e-mail already belongs to a Batchproof account.'],
-    });
-  }
+  if (await repo.isMemberByEmail(db, actor.workshopId, input.email)) throw alreadyMember();
   const token = newOpaqueToken();
   const created = await db.transaction(async (tx) => {
     await repo.lockInvitationsTo(tx, actor.workshopId, input.email);
@@ -123,27 +131,61 @@ export async function previewInvitation(db: Database, token: string): Promise<In
     role: found.role,
     workshopName: found.workshopName,
     invitedBy: found.invitedBy ?? 'A workshop owner',
+    existingAccount: (await repo.countUsersWithEmail(db, found.email)) > 0,
   };
 }
 
-/** Turns a live invitation into a member with a password, once. */
-export async function acceptInvitation(db: Database, input: AcceptInvitation): Promise<AuthUser> {
+const wrongPassword = () =>
+  new AppError(401, 'unauthenticated', 'That password does not match the invited account.', {
+    password: ['That password does not match the invited account.'],
+  });
+
+/**
+ * Accepts a live invitation, once, and answers the member in the invited workshop. For a new
+ * address the body is `acceptInvitationSchema` (a name and a new password: the account is
+ * created); for an address that already has an account it is `acceptInvitationExistingSchema`
+ * (that account's password: a membership is added).
+ */
+export async function acceptInvitation(db: Database, body: unknown): Promise<SessionUser> {
+  const { token } = parse(z.object({ token: tokenSchema }), body);
+  const invited = await usableInvitation(db, token);
+  const account = await findUserByEmail(db, invited.email);
+  if (account) {
+    const { password } = parse(acceptInvitationExistingSchema, body);
+    if (!(await passwordMatches(account, password))) throw wrongPassword();
+    return db.transaction(async (tx) => {
+      const found = await acceptOnce(tx, token);
+      if (await repo.isMemberByEmail(tx, found.workshopId, found.email)) throw alreadyMember();
+      const membership = { workshopId: found.workshopId, userId: account.id, role: found.role };
+      await repo.insertMembership(tx, membership);
+      const { passwordHash: _hash, ...user } = account;
+      return { ...user, workshopId: found.workshopId, role: found.role };
+    });
+  }
+  const input = parse(acceptInvitationSchema, body);
   const passwordHash = await hashPassword(input.password);
   return db.transaction(async (tx) => {
-    const found = await usableInvitation(tx, input.token);
-    // Another acceptance of the same link committed first: this one is the second use.
-    if (!(await repo.markInvitationAccepted(tx, found.id))) throw linkRefusals.used();
+    const found = await acceptOnce(tx, token);
     if (await repo.countUsersWithEmail(tx, found.email)) {
       throw conflict('This e-mail already belongs to a Batchproof account. Sign in instead.');
     }
-    return repo.insertMember(tx, {
+    const member = await repo.insertMember(tx, {
       workshopId: found.workshopId,
       email: found.email,
       name: input.name,
       passwordHash,
       role: found.role,
     });
+    return { ...member, tokenVersion: 0 };
   });
+}
+
+/** Marks the invitation accepted inside the caller's transaction; a second use is refused. */
+async function acceptOnce(tx: Database, token: string) {
+  const found = await usableInvitation(tx, token);
+  // Another acceptance of the same link committed first: this one is the second use.
+  if (!(await repo.markInvitationAccepted(tx, found.id))) throw linkRefusals.used();
+  return found;
 }
 
 const lastOwner = () =>

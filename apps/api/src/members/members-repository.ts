@@ -1,63 +1,82 @@
 import { and, asc, count, desc, eq, gt, isNull, sql, type SQL } from 'drizzle-orm';
 import type { MemberListQuery, Role } from '@batchproof/shared';
 import type { Database } from '../db/database';
-import { invitations, users, workshops } from '../db/schema';
+import { invitations, memberships, users, workshops } from '../db/schema';
 
+/** A member: the person's name and e-mail, with the role and joining date of this membership. */
 const memberColumns = {
   id: users.id,
   name: users.name,
   email: users.email,
-  role: users.role,
-  joinedAt: users.createdAt,
+  role: memberships.role,
+  joinedAt: memberships.createdAt,
 };
 
 const sortColumns = {
   name: users.name,
   email: users.email,
-  role: users.role,
-  joinedAt: users.createdAt,
+  role: memberships.role,
+  joinedAt: memberships.createdAt,
 } as const;
+
+const ofWorkshop = (workshopId: string, userId?: string) =>
+  and(
+    eq(memberships.workshopId, workshopId),
+    userId === undefined ? undefined : eq(memberships.userId, userId),
+  );
 
 export async function listMembers(db: Database, workshopId: string, q: MemberListQuery) {
   const order = q.dir === 'desc' ? desc : asc;
   return db
     .select(memberColumns)
-    .from(users)
-    .where(eq(users.workshopId, workshopId))
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .where(ofWorkshop(workshopId))
     .orderBy(order(sortColumns[q.sort]), asc(users.id));
 }
 
 export async function findMember(db: Database, workshopId: string, id: string) {
   const [row] = await db
     .select(memberColumns)
-    .from(users)
-    .where(and(eq(users.workshopId, workshopId), eq(users.id, id)));
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .where(ofWorkshop(workshopId, id));
   return row;
 }
 
 /** Locks the workshop's owners so two concurrent changes can't both remove "the other" owner. */
 export async function lockOwners(tx: Database, workshopId: string) {
   return tx
-    .select({ id: users.id })
-    .from(users)
-    .where(and(eq(users.workshopId, workshopId), eq(users.role, 'owner')))
+    .select({ id: memberships.userId })
+    .from(memberships)
+    .where(and(ofWorkshop(workshopId), eq(memberships.role, 'owner')))
     .for('update');
 }
 
 export async function setRole(db: Database, workshopId: string, id: string, role: Role) {
   const [row] = await db
-    .update(users)
+    .update(memberships)
     .set({ role })
-    .where(and(eq(users.workshopId, workshopId), eq(users.id, id)))
-    .returning(memberColumns);
-  return row;
+    .where(ofWorkshop(workshopId, id))
+    .returning({ id: memberships.userId });
+  return row && findMember(db, workshopId, id);
 }
 
+/**
+ * Ends someone's membership of the workshop; a person left with no workshop at all is deleted
+ * (they could no longer sign in to anything).
+ */
 export async function deleteMember(db: Database, workshopId: string, id: string) {
   const [row] = await db
-    .delete(users)
-    .where(and(eq(users.workshopId, workshopId), eq(users.id, id)))
-    .returning({ id: users.id });
+    .delete(memberships)
+    .where(ofWorkshop(workshopId, id))
+    .returning({ id: memberships.userId });
+  if (!row) return undefined;
+  const [left] = await db
+    .select({ n: count() })
+    .from(memberships)
+    .where(eq(memberships.userId, id));
+  if ((left?.n ?? 0) === 0) await db.delete(users).where(eq(users.id, id));
   return row;
 }
 
@@ -163,6 +182,16 @@ export async function countUsersWithEmail(db: Database, email: string) {
   return row?.n ?? 0;
 }
 
+/** Whether the account with this e-mail is already a member of the workshop. */
+export async function isMemberByEmail(db: Database, workshopId: string, email: string) {
+  const [row] = await db
+    .select({ n: count() })
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .where(and(ofWorkshop(workshopId), eq(users.email, email)));
+  return (row?.n ?? 0) > 0;
+}
+
 export async function markInvitationAccepted(db: Database, id: string) {
   const [row] = await db
     .update(invitations)
@@ -172,16 +201,23 @@ export async function markInvitationAccepted(db: Database, id: string) {
   return row;
 }
 
+/** Adds an existing person to a workshop with a role; they work there from now on. */
+export async function insertMembership(
+  db: Database,
+  row: { workshopId: string; userId: string; role: Role },
+) {
+  await db.insert(memberships).values({ ...row, lastActiveAt: new Date() });
+}
+
+/** Creates a person and their membership of the workshop that invited them. */
 export async function insertMember(
   db: Database,
   row: { workshopId: string; email: string; name: string; passwordHash: string; role: Role },
 ) {
-  const [created] = await db.insert(users).values(row).returning({
-    id: users.id,
-    workshopId: users.workshopId,
-    role: users.role,
-    name: users.name,
-    email: users.email,
-  });
-  return created!;
+  const [created] = await db
+    .insert(users)
+    .values({ email: row.email, name: row.name, passwordHash: row.passwordHash })
+    .returning({ id: users.id, name: users.name, email: users.email });
+  await insertMembership(db, { workshopId: row.workshopId, userId: created!.id, role: row.role });
+  return { ...created!, workshopId: row.workshopId, role: row.role };
 }

@@ -19,6 +19,7 @@ import {
   batches,
   formulas,
   lots,
+  memberships,
   productIdentities,
   recallNotices,
   recallReplies,
@@ -283,7 +284,8 @@ export async function userNames(db: Database, workshopId: string, ids: (string |
   if (wanted.length === 0) return new Map<string, string>();
   const rows = await db
     .select({ id: users.id, name: users.name })
-    .from(users)
-    .where(and(eq(users.workshopId, workshopId), inArray(users.id, wanted)));
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .where(and(eq(memberships.workshopId, workshopId), inArray(memberships.userId, wanted)));
   return new Map(rows.map((r) => [r.id, r.name]));
 }

@@ -1,9 +1,9 @@
 import bcrypt from 'bcryptjs';
-import { inArray } from 'drizzle-orm';
+import { asc, eq, inArray, sql } from 'drizzle-orm';
 import { demoMembers, demoWorkshop } from './hollowmere';
 import { BCRYPT_COST } from '../auth/auth-domain';
 import type { Database } from '../db/database';
-import { users, workshops } from '../db/schema';
+import { memberships, users, workshops } from '../db/schema';
 import { seedDemoLabels } from './demo-label-seed';
 import { seedDemoProduction } from './demo-production-seed';
 import { demoOwner, seedDemoWorkspace } from './demo-workspace-seed';
@@ -18,14 +18,33 @@ export async function seedDemo(
   password: string,
 ): Promise<'created' | 'updated' | 'unchanged'> {
   const emails = demoMembers.map((m) => m.email);
-  const existing = await db.select().from(users).where(inArray(users.email, emails));
+  // One row per membership of a demo user; the demo workshop's come first.
+  const existing = await db
+    .select({
+      passwordHash: users.passwordHash,
+      workshopId: memberships.workshopId,
+      role: memberships.role,
+    })
+    .from(users)
+    .innerJoin(memberships, eq(memberships.userId, users.id))
+    .innerJoin(workshops, eq(workshops.id, memberships.workshopId))
+    .where(inArray(users.email, emails))
+    .orderBy(sql`${workshops.name} = ${demoWorkshop.name} desc`, asc(memberships.createdAt));
   if (existing.length === 0) {
     const passwordHash = await bcrypt.hash(password, BCRYPT_COST);
     const workshopId = await db.transaction(async (tx) => {
       const [workshop] = await tx.insert(workshops).values({ name: demoWorkshop.name }).returning();
-      await tx
+      const created = await tx
         .insert(users)
-        .values(demoMembers.map((m) => ({ ...m, workshopId: workshop!.id, passwordHash })));
+        .values(demoMembers.map(({ role: _role, ...m }) => ({ ...m, passwordHash })))
+        .returning({ id: users.id, email: users.email });
+      await tx.insert(memberships).values(
+        demoMembers.map((m) => ({
+          workshopId: workshop!.id,
+          userId: created.find((u) => u.email === m.email)!.id,
+          role: m.role,
+        })),
+      );
       return workshop!.id;
     });
     await seedDemoWorkspace(db, workshopId);

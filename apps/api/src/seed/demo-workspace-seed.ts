@@ -1,4 +1,4 @@
-import { and, count, eq } from 'drizzle-orm';
+import { and, asc, count, eq } from 'drizzle-orm';
 import {
   addDays,
   todayIso,
@@ -18,7 +18,7 @@ import {
 import { recordAudit } from '../audit/audit-log';
 import type { AuthUser } from '../auth/authenticate';
 import type { Database } from '../db/database';
-import { auditEvents, materials, users } from '../db/schema';
+import { auditEvents, materials, memberships, users } from '../db/schema';
 import { createFormula, release } from '../formulas/formulas-domain';
 import { insertLot } from '../lots/lots-repository';
 import { insertMaterials } from '../materials/materials-repository';
@@ -27,9 +27,11 @@ import { insertSupplier } from '../suppliers/suppliers-repository';
 /** The workshop's owner, as the seeds act: what they record is the owner's, as if entered. */
 export async function demoOwner(db: Database, workshopId: string): Promise<AuthUser | undefined> {
   const [owner] = await db
-    .select()
-    .from(users)
-    .where(and(eq(users.workshopId, workshopId), eq(users.role, 'owner')))
+    .select({ id: users.id, name: users.name, email: users.email })
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .where(and(eq(memberships.workshopId, workshopId), eq(memberships.role, 'owner')))
+    .orderBy(asc(memberships.createdAt))
     .limit(1);
   if (!owner) return undefined;
   return { id: owner.id, workshopId, role: 'owner', name: owner.name, email: owner.email };
