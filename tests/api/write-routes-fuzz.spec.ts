@@ -209,6 +209,47 @@ const complaintBody = (formulaId: string, batch: { id: string; batchCode: string
   followUpNotes: null,
   reportedToFdaOn: '2026-01-22',
 });
+/** The workshop's assessor, added once. */
+let assessorMember: Awaited<ReturnType<typeof addMember>> | undefined;
+const assessor = async () =>
+  (assessorMember ??= await addMember(db(), TEST_JWT_SECRET, w.id, 'assessor'));
+/** The id of a released formula's version 1. */
+const releasedVersionId = async () => {
+  const version = await request(h.app)
+    .get(`/api/formulas/${await released()}/versions/1`)
+    .set('Authorization', `Bearer ${w.members.owner.token}`);
+  return version.body.id as string;
+};
+/** A released version shared with the assessor: the share's id. */
+const sharedVersion = async () => {
+  const share = await json('post')(h.app, '/api/assessment-shares', w.members.owner.token, {
+    versionId: await releasedVersionId(),
+    assessorId: (await assessor()).id,
+  });
+  return { shareId: share.body.id as string };
+};
+/** An assessment the assessor started from a fresh share. */
+const startedAssessment = async () => {
+  const { shareId } = await sharedVersion();
+  const res = await json('post')(h.app, '/api/assessments', (await assessor()).token, { shareId });
+  return res.body.id as string;
+};
+const assessmentBody = {
+  exposure: {
+    presetKey: null,
+    dailyAmountGrams: 7.82,
+    retentionFactor: 1,
+    bodyWeightKg: 60,
+    source: 'SCCS Notes of Guidance, body lotion',
+  },
+  substances: [],
+  partB: {
+    conclusion: 'Safe as used',
+    labelWarnings: '',
+    reasoning: 'Margins above 100',
+    credentials: 'MSc toxicology',
+  },
+};
 const signUpBody = () => ({
   workshopName: 'Fuzzed Suds',
   name: 'Pat Fuzz',
@@ -708,6 +749,65 @@ const cases: FuzzCase[] = [
       const res = await json('post')(h.app, '/api/complaints', w.members.owner.token, valid);
       return { path: `/api/complaints/${res.body.id}`, valid: { ...valid, status: 'closed' } };
     },
+    send: json('put'),
+  },
+  {
+    route: 'POST /api/assessment-shares',
+    prepare: async () => ({
+      path: '/api/assessment-shares',
+      valid: { versionId: await releasedVersionId(), assessorId: (await assessor()).id },
+    }),
+    send: json('post'),
+  },
+  {
+    route: 'POST /api/assessments',
+    // The first accepted run starts it; the rest find the version assessed.
+    prepare: async () => ({
+      path: '/api/assessments',
+      valid: { shareId: (await sharedVersion()).shareId },
+      token: (await assessor()).token,
+    }),
+    send: json('post'),
+  },
+  {
+    route: 'PUT /api/assessments/:id',
+    prepare: async () => ({
+      path: `/api/assessments/${await startedAssessment()}`,
+      valid: assessmentBody,
+      token: (await assessor()).token,
+    }),
+    send: json('put'),
+  },
+  {
+    route: 'POST /api/assessments/:id/sign',
+    prepare: async () => {
+      const id = await startedAssessment();
+      const token = (await assessor()).token;
+      await json('put')(h.app, `/api/assessments/${id}`, token, assessmentBody);
+      const detail = await request(h.app)
+        .get(`/api/assessments/${id}`)
+        .set('Authorization', `Bearer ${token}`);
+      return {
+        path: `/api/assessments/${id}/sign`,
+        valid: { contentHash: detail.body.contentHash, confirm: true },
+        token,
+      };
+    },
+    send: json('post'),
+  },
+  {
+    route: 'PUT /api/formulas/:id/versions/:n/safety-notes',
+    prepare: async () => ({
+      path: `/api/formulas/${await released()}/versions/1/safety-notes`,
+      valid: {
+        physicalChemical: 'White lotion, pH 5.5',
+        stability: '12 weeks at 40 °C, no change',
+        microbiological: 'Challenge test passed (criteria A)',
+        impurities: '',
+        packaging: 'HDPE bottle',
+        normalUse: 'Apply to the body once a day',
+      },
+    }),
     send: json('put'),
   },
   // Archiving takes no body: whatever is sent, the record is archived or brought back.
