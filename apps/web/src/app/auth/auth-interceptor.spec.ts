@@ -64,6 +64,16 @@ describe('authInterceptor', () => {
     backend.expectNone('/api/auth/refresh');
   });
 
+  it('adds the bearer token to the auth routes that act for the signed-in person', async () => {
+    for (const url of ['/api/auth/workshop', '/api/auth/sign-out-everywhere']) {
+      const call = firstValueFrom(http.post(url, {}));
+      const req = backend.expectOne(url);
+      expect(req.request.headers.get('Authorization')).toBe('Bearer token-1');
+      req.flush({ ok: true });
+      await call;
+    }
+  });
+
   it('on 401 refreshes once and retries the call with the new token', async () => {
     const me = firstValueFrom(http.get('/api/me'));
     backend

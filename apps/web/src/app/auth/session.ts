@@ -1,15 +1,30 @@
 import { HttpClient } from '@angular/common/http';
 import { computed, inject, Injectable, signal } from '@angular/core';
-import { catchError, finalize, firstValueFrom, map, type Observable, of, shareReplay } from 'rxjs';
+import { MatSnackBar } from '@angular/material/snack-bar';
+import { Router } from '@angular/router';
+import {
+  catchError,
+  finalize,
+  firstValueFrom,
+  from,
+  map,
+  type Observable,
+  of,
+  shareReplay,
+  switchMap,
+} from 'rxjs';
 import {
   type AcceptInvitation,
+  type AcceptInvitationExisting,
   type EmailSent,
   emailSentSchema,
+  type Membership,
   type Role,
   type Session as SessionBody,
   sessionSchema,
   type SignIn,
   type SignUp,
+  type SwitchWorkshop,
   type User,
 } from '@batchproof/shared';
 
@@ -26,6 +41,8 @@ const SIGNED_IN_HINT = 'batchproof.signed-in';
 @Injectable({ providedIn: 'root' })
 export class Session {
   private readonly http = inject(HttpClient);
+  private readonly router = inject(Router);
+  private readonly snackBar = inject(MatSnackBar);
   private readonly current = signal<SessionBody | null>(null);
   private refreshing: Observable<string | null> | null = null;
   private restoring: Promise<void> | null = null;
@@ -38,6 +55,13 @@ export class Session {
   readonly signedIn = computed(() => this.current() !== null);
   /** The signed-in user's role in their workshop, or null. */
   readonly role = computed<Role | null>(() => this.user()?.role ?? null);
+  /**
+   * The active workshop's id, or null. Anything kept per workshop (a cache, a page's reads) follows
+   * this signal: it changes only when the person switches workshop or signs out.
+   */
+  readonly workshopId = computed<string | null>(() => this.user()?.workshop.id ?? null);
+  /** Every workshop the signed-in person belongs to, with their role there (sorted by name). */
+  readonly memberships = computed<readonly Membership[]>(() => this.user()?.memberships ?? []);
 
   /** Signs in with e-mail and password. */
   signIn(input: SignIn): Observable<User> {
@@ -62,6 +86,42 @@ export class Session {
   /** Accepts an invitation with a name and password, and signs the new member in. */
   acceptInvitation(input: AcceptInvitation): Observable<User> {
     return this.start(this.http.post<unknown>('/api/auth/invitations/accept', input));
+  }
+
+  /**
+   * Accepts an invitation with the password of the account the invited address already has; the
+   * invitation adds a membership, and the session opens in the invited workshop.
+   */
+  acceptInvitationExisting(input: AcceptInvitationExisting): Observable<User> {
+    return this.start(this.http.post<unknown>('/api/auth/invitations/accept', input));
+  }
+
+  /**
+   * Moves to another of the person's workshops. First goes Home, so a page with unsaved changes
+   * can still ask (and the member can stay: then nothing is switched and the result is null), and
+   * so no page of the workshop left stays open; then `POST /api/auth/workshop` answers a new
+   * session (access token, refresh cookie, user) for that workshop, which replaces this one.
+   * Everything kept per workshop follows {@link workshopId}; the shell rebuilds the page. Says
+   * "Now working in …" when done. A refusal (not one of their workshops) errors as ApiError.
+   */
+  switchWorkshop(workshopId: string): Observable<User | null> {
+    const home = this.atHome() ? Promise.resolve(true) : this.router.navigateByUrl('/');
+    return from(home).pipe(
+      switchMap((left) => {
+        if (!left) return of(null);
+        const body: SwitchWorkshop = { workshopId };
+        return this.start(
+          // The refresh cookie (path /api/auth, same origin) comes along as it does for refresh:
+          // the API revokes it and sets a new one for the new workshop.
+          this.http.post<unknown>('/api/auth/workshop', body),
+        ).pipe(
+          map((user) => {
+            this.snackBar.open(`Now working in ${user.workshop.name}.`, 'OK', { duration: 5000 });
+            return user;
+          }),
+        );
+      }),
+    );
   }
 
   /**
@@ -109,6 +169,11 @@ export class Session {
   hasRole(roles: readonly Role[]): boolean {
     const role = this.role();
     return role !== null && roles.includes(role);
+  }
+
+  /** Whether the page open is Home (whatever its query or fragment). */
+  private atHome(): boolean {
+    return this.router.parseUrl(this.router.url).root.children['primary'] === undefined;
   }
 
   private start(request: Observable<unknown>): Observable<User> {

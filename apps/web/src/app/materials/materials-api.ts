@@ -1,5 +1,5 @@
 import { HttpClient, httpResource } from '@angular/common/http';
-import { inject, Injectable, type Signal, signal } from '@angular/core';
+import { effect, inject, Injectable, type Signal, signal, untracked } from '@angular/core';
 import { rxResource } from '@angular/core/rxjs-interop';
 import { forkJoin, map, type Observable, of, shareReplay, tap } from 'rxjs';
 import {
@@ -15,6 +15,7 @@ import {
   materialSchema,
   materialsByIdSchema,
 } from '@batchproof/shared';
+import { Session } from '../auth/session';
 
 /** How many materials a picker offers at once; typing narrows them. */
 const PICKER_OPTIONS = 20;
@@ -34,6 +35,18 @@ export class MaterialsApi {
   private readonly records = signal<ReadonlyMap<string, Material>>(new Map());
   /** Moves on whenever a record is replaced or removed, so open resources read it again. */
   private readonly revision = signal(0);
+
+  constructor() {
+    // The records belong to the active workshop: switching workshop (or signing out) drops them.
+    const session = inject(Session);
+    let workshopId = untracked(session.workshopId);
+    effect(() => {
+      const now = session.workshopId();
+      if (now === workshopId) return;
+      workshopId = now;
+      untracked(() => this.forgetAll());
+    });
+  }
 
   /** One page of materials, filtered, sorted and paged on the server. */
   page(query: () => MaterialListQuery) {
