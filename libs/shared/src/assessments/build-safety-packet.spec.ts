@@ -5,6 +5,7 @@ import {
   type SafetyPacketInput,
   type SafetyPacketLineInput,
 } from './build-safety-packet';
+import { DEFAULT_BODY_WEIGHT_KG, EXPOSURE_DEFAULTS } from './exposure-defaults';
 import type { SafetyPacket } from './safety-packet';
 
 const material = (
@@ -163,13 +164,33 @@ describe('buildSafetyPacket', () => {
     expect(m.marginOfSafety).toBeCloseTo(25.65, 2);
     expect(m.flagged).toBe(true);
     expect(m.absorptionDefaulted).toBe(true);
-    expect(packet.attention.join(' ')).toContain(
-      'Linalool at 3.5 %: margin of safety 26 is below 100',
+    expect(packet.attention).toContain(
+      'MoS 26 for Linalool is below 100: the safety assessor must review it before the product is released.',
     );
-    expect(packet.attention.join(' ')).toContain('No point of departure entered for Aqua');
+    expect(packet.attention).toContain('Point of departure not entered for Aqua.');
     const water = packet.margins.find((x) => x.substanceKey === 'aqua')!;
     expect(water.marginOfSafety).toBeNull();
     expect(water.sedMgPerKgDay).toBeCloseTo(78.2, 6);
+  });
+
+  it('takes a shipped preset as published and marks it a default', () => {
+    const preset = EXPOSURE_DEFAULTS[0]!;
+    const i = input();
+    i.assessment.exposure = {
+      presetKey: preset.key,
+      dailyAmountGrams: preset.dailyAmountGrams,
+      retentionFactor: preset.retentionFactor,
+      bodyWeightKg: DEFAULT_BODY_WEIGHT_KG,
+      source: '',
+    };
+    const packet = buildSafetyPacket(i);
+    expect(packet.exposure).toMatchObject({
+      exposureMgPerKgDay: preset.exposureMgPerKgDay,
+      defaulted: true,
+      presetLabel: preset.label,
+    });
+    const m = packet.margins.find((x) => x.substanceKey === 'linalool')!;
+    expect(m.sedMgPerKgDay).toBeCloseTo(preset.exposureMgPerKgDay * 0.035, 9);
   });
 
   it('has no SED or MoS before the exposure is entered, and says so', () => {
@@ -180,7 +201,7 @@ describe('buildSafetyPacket', () => {
     expect(packet.margins.every((m) => m.sedMgPerKgDay === null && m.marginOfSafety === null)).toBe(
       true,
     );
-    expect(packet.attention[0]).toContain('Exposure to the product is not entered yet');
+    expect(packet.attention[0]).toContain('Exposure to the product is not chosen yet');
   });
 });
 

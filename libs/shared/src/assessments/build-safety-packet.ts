@@ -1,8 +1,6 @@
 import type { EvaluationResult } from '../compliance/evaluation-result-schema';
 import type { EvaluationInput } from '../compliance/evaluation-input-schema';
-import { formatPercent } from '../compliance/finding-builder';
 import { expandFormula } from '../compliance/formula-expansion';
-import { marginOfSafety, MINIMUM_MARGIN_OF_SAFETY } from '../compliance/margin-of-safety';
 import { MATERIAL_CATEGORY_LABELS } from '../materials/material-category-labels';
 import {
   materialToEngineInput,
@@ -16,13 +14,13 @@ import type {
   SafetyNotes,
   SubstanceInput,
 } from './assessment-api';
-import { DEFAULT_DERMAL_ABSORPTION_PERCENT, EXPOSURE_DEFAULTS } from './exposure-defaults';
+import { productExposure } from './exposure-defaults';
+import { marginAttention, substanceMargins } from './substance-margins';
 import type {
   PacketBatch,
   PacketCompositionLine,
   PacketDocument,
   PacketExposure,
-  PacketMargin,
   PacketMarketInformation,
   PacketMissingDocument,
   PacketSubstance,
@@ -133,108 +131,9 @@ function productSubstances(
   };
 }
 
-/**
- * Exposure to the product (item 6): a shipped preset's published A, or the assessor's own daily
- * amount × retention factor × 1000 / body weight (SCCS Notes of Guidance, from memory).
- */
+/** Exposure to the product (item 6) as used: the input and the A `productExposure` gives. */
 function packetExposure(input: ExposureInput | null): PacketExposure | null {
-  if (!input) return null;
-  const preset = input.presetKey
-    ? EXPOSURE_DEFAULTS.find((row) => row.key === input.presetKey)
-    : undefined;
-  if (preset) {
-    return {
-      input,
-      exposureMgPerKgDay: preset.exposureMgPerKgDay,
-      presetLabel: preset.label,
-      source: preset.source,
-      defaulted: true,
-    };
-  }
-  return {
-    input,
-    // A = E_product × RF × 1000 / bw (mg/kg bw/day) — SCCS Notes of Guidance, from memory
-    exposureMgPerKgDay:
-      (input.dailyAmountGrams * input.retentionFactor * 1000) / input.bodyWeightKg,
-    presetLabel: null,
-    source: input.source,
-    defaulted: false,
-  };
-}
-
-/** One substance's SED and MoS (items 7–8) from `marginOfSafety`. */
-function packetMargin(
-  substance: PacketSubstance,
-  input: SubstanceInput | undefined,
-  exposure: PacketExposure | null,
-): PacketMargin {
-  const absorption = input?.dermalAbsorptionPercent ?? null;
-  const dermalAbsorptionPercent = absorption ?? DEFAULT_DERMAL_ABSORPTION_PERCENT;
-  const pod = input?.pointOfDepartureMgPerKgDay ?? null;
-  const concentration = Math.min(substance.percent, 100);
-  let sed: number | null = null;
-  let mos: number | null = null;
-  if (exposure) {
-    // SED = A × C/100 × DAp/100 — SCCS Notes of Guidance, from memory (as in marginOfSafety)
-    sed = exposure.exposureMgPerKgDay * (concentration / 100) * (dermalAbsorptionPercent / 100);
-    if (pod !== null) {
-      const result = marginOfSafety({
-        exposureMgPerKgDay: exposure.exposureMgPerKgDay,
-        concentrationPercent: concentration,
-        dermalAbsorptionPercent,
-        pointOfDepartureMgPerKgDay: pod,
-      });
-      sed = result.sedMgPerKgDay;
-      mos = result.marginOfSafety;
-    }
-  }
-  return {
-    substanceKey: substance.key,
-    inci: substance.inci,
-    percent: substance.percent,
-    dermalAbsorptionPercent,
-    absorptionDefaulted: absorption === null,
-    dermalAbsorptionSource: input?.dermalAbsorptionSource ?? '',
-    pointOfDepartureMgPerKgDay: pod,
-    pointOfDepartureSource: input?.pointOfDepartureSource ?? '',
-    sedMgPerKgDay: sed,
-    marginOfSafety: mos,
-    flagged: mos !== null && mos < MINIMUM_MARGIN_OF_SAFETY,
-  };
-}
-
-const listed = (names: string[]) =>
-  names.length <= 5
-    ? names.join(', ')
-    : `${names.slice(0, 5).join(', ')} and ${names.length - 5} more`;
-
-/** What the assessor should look at, in words. */
-function attentionOf(exposure: PacketExposure | null, margins: PacketMargin[]): string[] {
-  const out: string[] = [];
-  if (!exposure) out.push('Exposure to the product is not entered yet (item 6).');
-  else if (exposure.defaulted) {
-    out.push(
-      `Exposure is the shipped default "${exposure.presetLabel}" (${exposure.source}): check it fits this product.`,
-    );
-  }
-  for (const m of margins.filter((x) => x.flagged)) {
-    const shown =
-      m.marginOfSafety! >= 10 ? Math.round(m.marginOfSafety!) : m.marginOfSafety!.toFixed(1);
-    out.push(
-      `${m.inci} at ${formatPercent(m.percent)}: margin of safety ${shown} is below ${MINIMUM_MARGIN_OF_SAFETY}.`,
-    );
-  }
-  const noPod = margins.filter((m) => m.pointOfDepartureMgPerKgDay === null).map((m) => m.inci);
-  if (noPod.length > 0) out.push(`No point of departure entered for ${listed(noPod)}.`);
-  const defaulted = margins
-    .filter((m) => m.absorptionDefaulted && m.pointOfDepartureMgPerKgDay !== null)
-    .map((m) => m.inci);
-  if (defaulted.length > 0) {
-    out.push(
-      `Dermal absorption left at the default ${DEFAULT_DERMAL_ABSORPTION_PERCENT} % for ${listed(defaulted)}.`,
-    );
-  }
-  return out;
+  return input ? { input, ...productExposure(input) } : null;
 }
 
 /** Item 10 per market, from the stored evaluation as it is. */
@@ -276,8 +175,11 @@ export function buildSafetyPacket(input: SafetyPacketInput): SafetyPacket {
     };
   });
   const exposure = packetExposure(input.assessment.exposure);
-  const inputs = new Map(input.assessment.substances.map((s) => [s.substanceKey, s]));
-  const margins = substances.map((s) => packetMargin(s, inputs.get(s.key), exposure));
+  const margins = substanceMargins(
+    exposure?.exposureMgPerKgDay ?? null,
+    substances,
+    input.assessment.substances,
+  );
   const a = input.assessment;
   return {
     formula: { ...input.formula },
@@ -289,7 +191,7 @@ export function buildSafetyPacket(input: SafetyPacketInput): SafetyPacket {
     exposure,
     substances,
     margins,
-    attention: attentionOf(exposure, margins),
+    attention: marginAttention(margins, exposure),
     undesirableEffects: input.complaints,
     markets: marketInformation(input.evaluation),
     findings: input.evaluation?.findings ?? [],
