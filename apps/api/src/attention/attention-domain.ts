@@ -19,6 +19,7 @@ import {
 import type { AuthUser } from '../auth/authenticate';
 import type { Database } from '../db/database';
 import { listPendingInvitations } from '../members/members-repository';
+import { releasedWithoutAssessment } from '../readiness/readiness-repository';
 import * as repo from './attention-repository';
 
 /** The rows of one kind the caller is shown, and how many there are in all. */
@@ -192,6 +193,19 @@ const COLLECTORS: readonly Collector[] = [
           ...row,
         })),
       };
+    },
+  },
+  {
+    kind: 'assessment-missing',
+    roles: ROLE_SETS.members,
+    async collect(db, workshopId) {
+      const rows = await releasedWithoutAssessment(db, workshopId, limit);
+      return counted(rows, (row) => ({
+        kind: 'assessment-missing',
+        ...row,
+        // The query keeps only the version's EU and UK markets.
+        markets: row.markets as ('EU' | 'UK')[],
+      }));
     },
   },
   {

@@ -11,6 +11,7 @@ import type { AuthUser } from '../auth/authenticate';
 import { AppError, notFound } from '../core/app-error';
 import { withIsoDates } from '../core/list-paging';
 import type { Database } from '../db/database';
+import { assessmentFindings } from '../readiness/assessment-findings';
 import * as repo from './formulas-repository';
 
 const iso = (d: Date | null) => (d ? d.toISOString() : null);
@@ -21,7 +22,13 @@ export async function versionView(
   workshopId: string,
   row: repo.VersionRow,
 ): Promise<FormulaVersion> {
+  // One after the other: `db` may be a transaction, which runs one query at a time.
   const lines = await repo.findLines(db, workshopId, row.id);
+  const missingAssessment = await assessmentFindings(db, workshopId, row.formulaId, {
+    id: row.id,
+    number: row.number,
+    markets: row.profile.markets,
+  });
   const totalGrams = lines.reduce((s, l) => s + l.grams, 0);
   return {
     id: row.id,
@@ -41,6 +48,7 @@ export async function versionView(
     evaluatedAt: iso(row.evaluatedAt),
     releasedAt: iso(row.releasedAt),
     overrideReason: row.overrideReason,
+    assessmentFindings: missingAssessment,
     createdAt: row.createdAt.toISOString(),
     updatedAt: row.updatedAt.toISOString(),
   };

@@ -24,6 +24,11 @@ import type { Database } from '../db/database';
 import { evaluateBatch, type EvaluatedBatch } from '../batches/batch-labels';
 import { evaluateLines } from '../formulas/formula-evaluation';
 import * as formulasRepo from '../formulas/formulas-repository';
+import {
+  byFormula,
+  missingAssessmentFindings,
+  signedVersions,
+} from '../readiness/assessment-findings';
 import { findLabelDetails } from '../workshop/workshop-repository';
 import { checkLabelFit, countLabels, type LabelSheetRequest } from './pdf';
 import { findLabelStock } from './label-stocks-repository';
@@ -67,17 +72,42 @@ export function runRecord(row: repo.LabelRunRecordRow): LabelRunRecord {
   };
 }
 
+/**
+ * Runs in the API's shape with what their version lacks in safety assessment for the markets
+ * printed (one query for all of them): labels carry that finding until the version is signed.
+ */
+async function runRecords(
+  db: Database,
+  workshopId: string,
+  rows: readonly repo.LabelRunRecordRow[],
+): Promise<LabelRunRecord[]> {
+  const signed = byFormula(
+    await signedVersions(
+      db,
+      workshopId,
+      rows.map((r) => r.formulaId),
+    ),
+  );
+  return rows.map((row) => ({
+    ...runRecord(row),
+    assessmentFindings: missingAssessmentFindings(
+      { id: row.versionId, number: row.versionNumber, markets: row.markets },
+      signed.get(row.formulaId) ?? [],
+    ),
+  }));
+}
+
 export async function getRun(db: Database, actor: AuthUser, id: string) {
   const row = await repo.findRunRecord(db, actor.workshopId, id);
   if (!row) throw notFound(RUN);
-  return runRecord(row);
+  return (await runRecords(db, actor.workshopId, [row]))[0]!;
 }
 
 export async function listRuns(db: Database, actor: AuthUser, q: LabelRunListQuery) {
   if (q.formulaId && !(await formulasRepo.findFormula(db, actor.workshopId, q.formulaId)))
     throw notFound('That formula');
   const rows = await repo.listRunRecords(db, actor.workshopId, q.formulaId, LABEL_RUN_LIST_MAX);
-  return { items: rows.map(runRecord) };
+  return { items: await runRecords(db, actor.workshopId, rows) };
 }
 
 /** A 400 on one field of the request, like a zod refusal. */

@@ -21,6 +21,7 @@ const recordColumns = {
   id: labelRuns.id,
   formulaId: labelRuns.formulaId,
   formulaName: labelRuns.formulaName,
+  versionId: labelRuns.versionId,
   versionNumber: labelRuns.versionNumber,
   markets: labelRuns.markets,
   stockId: labelRuns.stockId,

@@ -4,6 +4,7 @@ import { lotUnitSchema } from '../lots/lot-schema';
 import { roleSchema } from '../auth/roles';
 import { reportingClockStates } from '../complaints/adverse-event-clock';
 import { recallSeveritySchema } from '../deliveries/recall-schema';
+import { complianceMarketSchema } from '../reference-data/reference-row';
 
 /**
  * Lots expiring within this many days (or already expired) while stock remains show on the home
@@ -135,6 +136,21 @@ export const complaintClockItemSchema = z.object({
   state: z.enum(reportingClockStates).extract(['running', 'overdue']),
 });
 
+/**
+ * A formula whose released version is made for the EU or the UK and has no signed safety
+ * assessment (Regulation (EC) No 1223/2009, Art. 10; UK: the UK Cosmetics Regulation, Art. 10).
+ */
+export const assessmentMissingItemSchema = z.object({
+  kind: z.literal('assessment-missing'),
+  formulaId: z.string(),
+  formulaName: z.string(),
+  versionNumber: z.number().int(),
+  /** The version's markets that need the assessment (EU, UK). */
+  markets: z.array(complianceMarketSchema),
+  /** The newest version of the formula that was assessed, or null when none was. */
+  lastAssessedVersion: z.number().int().nullable(),
+});
+
 /** An invitation sent and not yet accepted (owners only). */
 export const invitationPendingItemSchema = z.object({
   kind: z.literal('invitation-pending'),
@@ -159,6 +175,7 @@ export const attentionItemSchema = z.discriminatedUnion('kind', [
   batchAwaitingReleaseItemSchema,
   batchCuringItemSchema,
   labelsOutOfDateItemSchema,
+  assessmentMissingItemSchema,
   invitationPendingItemSchema,
 ]);
 export type AttentionItem = z.infer<typeof attentionItemSchema>;

@@ -1,5 +1,8 @@
 import * as z from 'zod';
-import { evaluationResultSchema } from '../compliance/evaluation-result-schema';
+import {
+  complianceFindingSchema,
+  evaluationResultSchema,
+} from '../compliance/evaluation-result-schema';
 import { listQuerySchema, pageSchema } from '../lists/list-query-schema';
 import { complianceMarketSchema } from '../reference-data/reference-row';
 import { archivedAtField, includeArchivedSchema } from '../records/housekeeping-schema';
@@ -289,6 +292,12 @@ export const formulaVersionSchema = z.object({
   evaluatedAt: z.string().nullable(),
   releasedAt: z.string().nullable(),
   overrideReason: z.string().nullable(),
+  /**
+   * What the version lacks in safety assessment (`SAFETY_ASSESSMENT_MISSING` per EU or UK market
+   * while it has no signed assessment), worked out when read; never part of `evaluation` or
+   * `counts`. Absent from answers that do not look it up.
+   */
+  assessmentFindings: z.array(complianceFindingSchema).optional(),
 });
 export type FormulaVersion = z.infer<typeof formulaVersionSchema>;
 

@@ -2,6 +2,7 @@ import * as z from 'zod';
 import { isCalendarDay } from '../dates/calendar-day';
 import { complianceMarketSchema } from '../reference-data/reference-row';
 import { recordIdSchema, requiredText } from '../records/record-fields';
+import { complianceFindingSchema } from '../compliance/evaluation-result-schema';
 import { GS1_CSET_82 } from '../compliance/gs1-element-string';
 import { MAX_VERSION_NUMBER } from '../formulas/formula-schema';
 import { LABEL_FIELD_KEYS } from './label-content';
@@ -158,6 +159,11 @@ export const labelRunRecordSchema = z.object({
   createdAt: z.string(),
   /** Who printed it; the id is null once that member has left the workshop. */
   createdBy: z.object({ id: z.uuid().nullable(), name: z.string() }),
+  /**
+   * What the printed version lacks in safety assessment for the run's EU and UK labels
+   * (`SAFETY_ASSESSMENT_MISSING`), as of the answer; empty once the version's assessment is signed.
+   */
+  assessmentFindings: z.array(complianceFindingSchema).optional(),
 });
 export type LabelRunRecord = z.infer<typeof labelRunRecordSchema>;
 

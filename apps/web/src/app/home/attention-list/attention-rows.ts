@@ -181,6 +181,18 @@ const KINDS: {
       text: `${i.formulaName}: the labels printed on ${f.date(i.printedAt)} are of version ${i.printedVersion}; version ${i.releasedVersion} is released. Print new labels.`,
     }),
   },
+  'assessment-missing': {
+    icon: 'health_and_safety',
+    heading: (n) =>
+      `${plural(n, 'product is', 'products are')} made for the EU or UK without a signed safety assessment`,
+    clear: 'every released version sold in the EU or UK has a signed safety assessment',
+    all: { link: '/readiness', label: 'Open market readiness' },
+    row: (i) => ({
+      icon: 'health_and_safety',
+      link: `/formulas/${i.formulaId}/versions/${i.versionNumber}`,
+      text: `${i.formulaName}: version ${i.versionNumber} (${i.markets.join(', ')}) has no signed safety assessment${i.lastAssessedVersion === null ? '' : `; version ${i.lastAssessedVersion} was assessed`}. Share it with a safety assessor before it is sold there.`,
+    }),
+  },
   'invitation-pending': {
     icon: 'mail',
     heading: (n) => `${plural(n, 'invitation is', 'invitations are')} waiting to be accepted`,
