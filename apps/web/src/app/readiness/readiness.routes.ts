@@ -2,11 +2,20 @@ import type { Routes } from '@angular/router';
 import { ROLE_SETS } from '@batchproof/shared';
 import { roleGuard } from '../auth/role-guard';
 
-/** Market readiness per product and market. PLACEHOLDER until the page lands. */
+/**
+ * Market readiness per product and market. Members read; owners and formulators record the
+ * notification and listing references.
+ */
 export default [
   {
     path: '',
     canActivate: [roleGuard(ROLE_SETS.members)],
-    children: [],
+    children: [
+      {
+        path: '',
+        title: 'Readiness · Batchproof',
+        loadComponent: () => import('./readiness-page/readiness-page'),
+      },
+    ],
   },
 ] satisfies Routes;
