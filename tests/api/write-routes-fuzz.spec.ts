@@ -299,6 +299,12 @@ const cases: FuzzCase[] = [
     send: json('post'),
   },
   {
+    route: 'POST /api/auth/workshop',
+    // Switching into the workshop the owner is already in: a valid body that changes nothing.
+    prepare: async () => ({ path: '/api/auth/workshop', valid: { workshopId: w.id } }),
+    send: json('post'),
+  },
+  {
     route: 'POST /api/auth/invitations/accept',
     prepare: async () => ({
       path: '/api/auth/invitations/accept',
@@ -806,6 +812,20 @@ const cases: FuzzCase[] = [
         impurities: '',
         packaging: 'HDPE bottle',
         normalUse: 'Apply to the body once a day',
+      },
+    }),
+    send: json('put'),
+  },
+  {
+    route: 'PUT /api/readiness/:formulaId/records/:kind',
+    prepare: async () => ({
+      path: `/api/readiness/${await released()}/records/ca-notification`,
+      valid: {
+        reference: 'CNF-88213',
+        recordedOn: '2026-11-30',
+        firstSaleOn: '2026-11-25',
+        smallBusinessExempt: null,
+        notes: 'Sent by post',
       },
     }),
     send: json('put'),
