@@ -222,7 +222,12 @@ describe('invitations by e-mail', () => {
     const token = decodeURIComponent(link.split('/accept-invite/')[1]!);
 
     const preview = await request(h.app).get(`/api/auth/invitations/${encodeURIComponent(token)}`);
-    expect(preview.body).toMatchObject({ email, role: 'production', workshopName: w.name });
+    expect(preview.body).toMatchObject({
+      email,
+      role: 'production',
+      workshopName: w.name,
+      existingAccount: false,
+    });
 
     const accepted = await request(h.app)
       .post('/api/auth/invitations/accept')
@@ -242,7 +247,7 @@ describe('invitations by e-mail', () => {
     expect(signIn.body.user.role).toBe('production');
   });
 
-  it('inviting an e-mail that already has an account responds 409 with fieldErrors.email', async () => {
+  it('inviting an e-mail that is already a member of this workshop responds 409 with fieldErrors.email', async () => {
     const w = await buildWorkshop(h.handle.db, TEST_JWT_SECRET, { roles: ['owner', 'viewer'] });
     const res = await request(h.app)
       .post('/api/members/invitations')

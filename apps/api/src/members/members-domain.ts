@@ -147,7 +147,12 @@ const wrongPassword = () =>
  * (that account's password: a membership is added).
  */
 export async function acceptInvitation(db: Database, body: unknown): Promise<SessionUser> {
-  const { token } = parse(z.object({ token: tokenSchema }), body);
+  const tokenOnly = z.object({ token: tokenSchema }).safeParse(body ?? {});
+  // Without a well-formed token the account is unknown: the new-account shape names every bad
+  // field (and throws).
+  const token = tokenOnly.success
+    ? tokenOnly.data.token
+    : parse(acceptInvitationSchema, body).token;
   const invited = await usableInvitation(db, token);
   const account = await findUserByEmail(db, invited.email);
   if (account) {
