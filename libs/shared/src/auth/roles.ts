@@ -11,15 +11,15 @@ export type Role = z.infer<typeof roleSchema>;
  */
 export const ROLE_DESCRIPTIONS: Record<Role, string> = {
   owner:
-    'Everything a formulator does, plus members and their roles, production settings, recalls and the audit log, and releasing a version over blocking findings with a recorded reason.',
+    'Everything a formulator does, plus members and their roles, production settings, recalls and the audit log, releasing a version over blocking findings with a recorded reason, and sharing formula versions with safety assessors.',
   formulator:
-    'Materials, suppliers, documents, lots and formulas: writes them, runs the checks and releases versions that pass; releases and corrects batches; prints labels.',
+    'Materials, suppliers, documents, lots and formulas: writes them, runs the checks and releases versions that pass; releases and corrects batches; prints labels; writes the safety notes an assessor reads and records notification references for each market.',
   production:
     'Records goods-in and corrects stock; starts and records batches from the weigh sheet and prints their labels; records customers, deliveries and complaints; reads formulas, materials and documents.',
   assessor:
-    'Reads the reference lists the checks rest on, and the labels printed (print runs and their PDFs).',
+    'Reads the formula versions shared with them, writes and signs their safety assessments, and reads the reference lists the checks rest on.',
   viewer:
-    'Reads formulas, materials, documents, lots, batches, deliveries, traces, recalls, complaints and members, and changes nothing. For bookkeepers and auditors.',
+    'Reads formulas, materials, documents, lots, batches, deliveries, traces, recalls, complaints, safety assessments, market readiness and members, and changes nothing. For bookkeepers and auditors.',
 };
 
 /** Sets of roles that routes and screens allow; one place so client and server agree. */
