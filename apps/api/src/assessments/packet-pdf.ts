@@ -1,5 +1,6 @@
 import {
   DEFAULT_DERMAL_ABSORPTION_PERCENT,
+  formatMargin,
   MINIMUM_MARGIN_OF_SAFETY,
   PART_A_HEADINGS,
   PART_B_HEADINGS,
@@ -57,10 +58,15 @@ const partA = (index: number) => ({
   style: 'heading',
 });
 const sub = (text: string) => ({ text, style: 'subheading' });
-const notes = (label: string, text: string) => [
-  sub(label),
-  { text: orNone(text, 'Not recorded by the maker.'), margin: [0, 0, 0, 6] },
-];
+/** A heading kept on the same page as the block after it (no heading alone at a page's foot). */
+const keep = (...blocks: object[]) => ({ stack: blocks, unbreakable: true });
+/** Most table rows kept whole on one page with their heading; a longer table may break. */
+const KEEP_ROWS = 15;
+/** The blocks on one page when the table among them is short, else as they come. */
+const together = (rows: number, ...blocks: object[]): object[] =>
+  rows <= KEEP_ROWS ? [keep(...blocks)] : blocks;
+const notes = (label: string, text: string) =>
+  keep(sub(label), { text: orNone(text, 'Not recorded by the maker.'), margin: [0, 0, 0, 6] });
 
 function titleBlock(packet: SafetyPacket, hash: string) {
   const a = packet.assessment;
@@ -112,16 +118,20 @@ function composition(packet: SafetyPacket) {
   ]);
   const fragrances = packet.composition.filter((c) => c.fragrance);
   return [
-    partA(0),
-    table(
-      ['#', 'Material', 'INCI', 'CAS', 'EC', 'Function', '% w/w'],
-      rows,
-      [14, '*', '*', 58, 52, 70, 44],
-      'The version has no lines.',
+    ...together(
+      rows.length,
+      partA(0),
+      table(
+        ['#', 'Material', 'INCI', 'CAS', 'EC', 'Function', '% w/w'],
+        rows,
+        [14, '*', '*', 58, 52, 70, 44],
+        'The version has no lines.',
+      ),
+      { text: `Batch formula total: ${numberText(packet.totalGrams)} g.`, fontSize: 9 },
     ),
-    { text: `Batch formula total: ${numberText(packet.totalGrams)} g.`, fontSize: 9 },
     ...(fragrances.length > 0
-      ? [
+      ? together(
+          fragrances.length,
           sub('Fragrances: supplier and certificate'),
           table(
             ['Fragrance', 'Supplier', 'Code', 'Certificate on file'],
@@ -136,14 +146,14 @@ function composition(packet: SafetyPacket) {
             ['*', '*', 60, '*'],
             '',
           ),
-        ]
+        )
       : []),
   ];
 }
 
 function exposure(packet: SafetyPacket) {
   const e = packet.exposure;
-  if (!e) return [partA(5), { text: 'Not entered by the assessor yet.', italics: true }];
+  if (!e) return [keep(partA(5), { text: 'Not entered by the assessor yet.', italics: true })];
   const rows: [string, string][] = [
     [
       'Chosen as',
@@ -159,12 +169,11 @@ function exposure(packet: SafetyPacket) {
     ['Source', orNone(e.source)],
   ];
   return [
-    partA(5),
-    {
+    keep(partA(5), {
       table: { widths: [150, '*'], body: rows.map(([k, v]) => [{ text: k, bold: true }, v]) },
       layout: 'noBorders',
       margin: [0, 0, 0, 6],
-    },
+    }),
   ];
 }
 
@@ -180,7 +189,8 @@ function substances(packet: SafetyPacket) {
       orNone(s?.from.join(', ')),
     ];
   });
-  return [
+  return together(
+    rows.length,
     partA(6),
     {
       text: `SED = A × C / 100 × DAp / 100 (SCCS Notes of Guidance). Dermal absorption not entered is taken as ${DEFAULT_DERMAL_ABSORPTION_PERCENT} % and marked "default".`,
@@ -193,7 +203,7 @@ function substances(packet: SafetyPacket) {
       ['*', 58, 56, 70, 64, '*'],
       'No substances.',
     ),
-  ];
+  );
 }
 
 function margins(packet: SafetyPacket) {
@@ -206,8 +216,8 @@ function margins(packet: SafetyPacket) {
     m.marginOfSafety === null
       ? '—'
       : m.flagged
-        ? { text: numberText(m.marginOfSafety), bold: true, color: '#b3261e' }
-        : numberText(m.marginOfSafety),
+        ? { text: formatMargin(m.marginOfSafety), bold: true, color: '#b3261e' }
+        : formatMargin(m.marginOfSafety),
     [
       m.flagged ? `Under ${MINIMUM_MARGIN_OF_SAFETY}` : '',
       m.absorptionDefaulted ? 'Absorption default' : '',
@@ -216,17 +226,20 @@ function margins(packet: SafetyPacket) {
       .join('; ') || '—',
   ]);
   return [
-    partA(7),
-    {
-      text: `MoS = PoD_sys / SED; a margin under ${MINIMUM_MARGIN_OF_SAFETY} is flagged (SCCS Notes of Guidance).`,
-      fontSize: 9,
-      margin: [0, 0, 0, 4],
-    },
-    table(
-      ['Substance', 'PoD (mg/kg bw/day)', 'Source of the PoD', 'MoS', 'Flags'],
-      rows,
-      ['*', 70, '*', 44, 90],
-      'No substances.',
+    ...together(
+      rows.length,
+      partA(7),
+      {
+        text: `MoS = PoD_sys / SED; a margin under ${MINIMUM_MARGIN_OF_SAFETY} is flagged (SCCS Notes of Guidance).`,
+        fontSize: 9,
+        margin: [0, 0, 0, 4],
+      },
+      table(
+        ['Substance', 'PoD (mg/kg bw/day)', 'Source of the PoD', 'MoS', 'Flags'],
+        rows,
+        ['*', 70, '*', 44, 90],
+        'No substances.',
+      ),
     ),
     ...(packet.attention.length > 0
       ? [
@@ -238,7 +251,8 @@ function margins(packet: SafetyPacket) {
 }
 
 function undesirableEffects(packet: SafetyPacket) {
-  return [
+  return together(
+    packet.undesirableEffects.length,
     partA(8),
     table(
       ['Received', 'What happened', 'Body area', 'Serious', 'Batch', 'Status'],
@@ -253,72 +267,116 @@ function undesirableEffects(packet: SafetyPacket) {
       [54, '*', 60, 40, 60, 40],
       'No complaints or undesirable effects recorded for this product.',
     ),
+  );
+}
+
+const SEVERITY_WORDS = { block: 'Blocks', warn: 'Check', info: 'Note' } as const;
+
+function marketInformation(m: SafetyPacket['markets'][number]) {
+  return [
+    keep(
+      sub(`Label copy: ${m.market}`),
+      { text: orNone(m.declaration, 'No declaration.'), fontSize: 9, margin: [0, 0, 0, 2] },
+      m.warnings.length > 0
+        ? { ul: m.warnings, fontSize: 9, margin: [0, 0, 0, 4] }
+        : { text: 'No warnings required by the checks.', italics: true, fontSize: 9 },
+    ),
+    ...together(
+      m.colourants.length,
+      sub(`Colourants: ${m.market}`),
+      table(
+        ['Colourant', 'CI', 'Verdict', '%', 'Conditions'],
+        m.colourants.map((c) => [
+          c.subject,
+          orNone(c.colourIndex),
+          c.verdict.replaceAll('-', ' '),
+          percentText(c.totalPercent ?? c.percent),
+          orNone(c.conditions.join('; ')),
+        ]),
+        ['*', 60, 90, 44, '*'],
+        'No colourants.',
+      ),
+    ),
+    ...together(
+      m.allergens.length,
+      sub(`Fragrance allergens: ${m.market}`),
+      table(
+        ['Allergen', '% in product', 'Threshold', 'Named on the label'],
+        m.allergens.map((a) => [
+          a.inci,
+          percentText(a.percent),
+          a.thresholdPercent === null ? 'No rule' : percentText(a.thresholdPercent),
+          a.declared ? 'Yes' : 'No',
+        ]),
+        ['*', 70, 70, 90],
+        'No fragrance allergens.',
+      ),
+    ),
   ];
 }
 
 function productInformation(packet: SafetyPacket) {
-  const perMarket = packet.markets.flatMap((m) => [
-    sub(`Label copy: ${m.market}`),
-    { text: orNone(m.declaration, 'No declaration.'), fontSize: 9, margin: [0, 0, 0, 2] },
-    m.warnings.length > 0
-      ? { ul: m.warnings, fontSize: 9, margin: [0, 0, 0, 4] }
-      : { text: 'No warnings required by the checks.', italics: true, fontSize: 9 },
-    sub(`Colourants: ${m.market}`),
-    table(
-      ['Colourant', 'CI', 'Verdict', '%', 'Conditions'],
-      m.colourants.map((c) => [
-        c.subject,
-        orNone(c.colourIndex),
-        c.verdict,
-        percentText(c.totalPercent ?? c.percent),
-        orNone(c.conditions.join('; ')),
-      ]),
-      ['*', 60, 90, 44, '*'],
-      'No colourants.',
-    ),
-    sub(`Fragrance allergens: ${m.market}`),
-    table(
-      ['Allergen', '% in product', 'Threshold', 'Named on the label'],
-      m.allergens.map((a) => [
-        a.inci,
-        percentText(a.percent),
-        a.thresholdPercent === null ? 'No rule' : percentText(a.thresholdPercent),
-        a.declared ? 'Yes' : 'No',
-      ]),
-      ['*', 70, 70, 90],
-      'No fragrance allergens.',
-    ),
-  ]);
+  const { findings, documentsOnFile, documentsMissing, batches } = packet;
   return [
-    partA(9),
-    ...(packet.markets.length === 0
-      ? [{ text: 'The version has not been checked yet.', italics: true }]
-      : perMarket),
-    sub('Supplier documents on file'),
-    table(
-      ['Material', 'Document', 'Title', 'Issued'],
-      packet.documentsOnFile.map((d) => [d.materialName, d.kind, d.title, orNone(d.issuedOn)]),
-      ['*', 100, '*', 60],
-      'None on file.',
+    keep(
+      partA(9),
+      packet.markets.length === 0
+        ? { text: 'The version has not been checked yet.', italics: true }
+        : {
+            text: `Checked for ${packet.markets.map((m) => m.market).join(', ')}.`,
+            fontSize: 9,
+          },
     ),
-    sub('Supplier documents missing'),
-    table(
-      ['Material', 'Missing'],
-      packet.documentsMissing.map((d) => [d.materialName, d.what]),
-      ['*', '*'],
-      'None missing.',
+    ...packet.markets.flatMap(marketInformation),
+    ...together(
+      findings.length,
+      sub('Findings of the compliance checks'),
+      table(
+        ['', 'Market', 'About', 'Finding'],
+        findings.map((f) => [
+          SEVERITY_WORDS[f.severity],
+          f.market ?? 'All',
+          f.subject,
+          { text: f.message, fontSize: 8 },
+        ]),
+        [40, 40, 90, '*'],
+        'No findings.',
+      ),
     ),
-    sub('Batches made from this version'),
-    table(
-      ['Batch code', 'Made on', 'Units made', 'State'],
-      packet.batches.map((b) => [
-        b.code,
-        b.madeOn,
-        b.unitsMade === null ? '—' : String(b.unitsMade),
-        b.status,
-      ]),
-      ['*', 70, 60, 60],
-      'No batches made yet.',
+    ...together(
+      documentsOnFile.length,
+      sub('Supplier documents on file'),
+      table(
+        ['Material', 'Document', 'Title', 'Issued'],
+        documentsOnFile.map((d) => [d.materialName, d.kind, d.title, orNone(d.issuedOn)]),
+        ['*', 100, '*', 60],
+        'None on file.',
+      ),
+    ),
+    ...together(
+      documentsMissing.length,
+      sub('Supplier documents missing'),
+      table(
+        ['Material', 'Missing'],
+        documentsMissing.map((d) => [d.materialName, d.what]),
+        ['*', '*'],
+        'None missing.',
+      ),
+    ),
+    ...together(
+      batches.length,
+      sub('Batches made from this version'),
+      table(
+        ['Batch code', 'Made on', 'Units made', 'State'],
+        batches.map((b) => [
+          b.code,
+          b.madeOn,
+          b.unitsMade === null ? '—' : String(b.unitsMade),
+          b.status,
+        ]),
+        ['*', 70, 60, 60],
+        'No batches made yet.',
+      ),
     ),
   ];
 }
@@ -339,10 +397,15 @@ function partB(packet: SafetyPacket) {
       pageBreak: 'before',
       margin: [0, 0, 0, 6],
     },
-    ...PART_B_HEADINGS.flatMap((heading, i) => [
-      { text: `${i + 1}. ${heading}`, style: 'heading' },
-      { text: orNone(texts[i], 'Not written yet.'), margin: [0, 0, 0, 6] },
-    ]),
+    ...PART_B_HEADINGS.flatMap((heading, i) => {
+      const text = orNone(texts[i], 'Not written yet.');
+      const blocks = [
+        { text: `${i + 1}. ${heading}`, style: 'heading' },
+        { text, margin: [0, 0, 0, 6] },
+      ];
+      // A short text stays with its heading; a long one may run over pages.
+      return text.length <= 800 ? [keep(...blocks)] : blocks;
+    }),
     a.status === 'signed'
       ? {
           text: `Signed by ${orNone(a.signedByName)}${a.signedAt ? ` on ${when(a.signedAt)}` : ''}. SHA-256 of the content signed: ${orNone(a.contentHash)}`,
@@ -363,6 +426,12 @@ export function packetDocument(packet: SafetyPacket, opts: { draft: boolean; has
     pageSize: 'A4',
     pageMargins: [40, 48, 40, 40],
     defaultStyle: { font: LABEL_FONT_FAMILY, fontSize: 10 },
+    footer: {
+      text: `${packet.formula.name}, version ${packet.version.number} · SHA-256 ${packet.assessment.contentHash ?? opts.hash}`,
+      fontSize: 7,
+      color: '#555555',
+      margin: [40, 12, 40, 0],
+    },
     styles: {
       heading: { fontSize: 13, bold: true, margin: [0, 10, 0, 4] },
       subheading: { fontSize: 10, bold: true, margin: [0, 4, 0, 2] },
@@ -388,16 +457,12 @@ export function packetDocument(packet: SafetyPacket, opts: { draft: boolean; has
         margin: [0, 0, 0, 2],
       },
       ...composition(packet),
-      partA(1),
-      ...notes('Physical and chemical characteristics', n.physicalChemical),
-      ...notes('Stability', n.stability),
-      partA(2),
-      ...notes('Microbiological quality', n.microbiological),
-      partA(3),
-      ...notes('Impurities and traces', n.impurities),
-      ...notes('Packaging material', n.packaging),
-      partA(4),
-      ...notes('Normal and reasonably foreseeable use', n.normalUse),
+      keep(partA(1), notes('Physical and chemical characteristics', n.physicalChemical)),
+      notes('Stability', n.stability),
+      keep(partA(2), notes('Microbiological quality', n.microbiological)),
+      keep(partA(3), notes('Impurities and traces', n.impurities)),
+      notes('Packaging material', n.packaging),
+      keep(partA(4), notes('Normal and reasonably foreseeable use', n.normalUse)),
       ...exposure(packet),
       ...substances(packet),
       ...margins(packet),
