@@ -1,5 +1,13 @@
 import { BreakpointObserver } from '@angular/cdk/layout';
-import { ChangeDetectionStrategy, Component, computed, effect, inject } from '@angular/core';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  computed,
+  effect,
+  inject,
+  linkedSignal,
+  signal,
+} from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { MatButton, MatIconButton } from '@angular/material/button';
 import { MatIcon } from '@angular/material/icon';
@@ -12,6 +20,7 @@ import { Router, RouterLink, RouterLinkActive, RouterOutlet } from '@angular/rou
 import { map } from 'rxjs';
 import { type Role, ROLE_SETS } from '@batchproof/shared';
 import { Session } from '../auth/session';
+import { ApiError, messageOf } from '../http/api-error';
 
 /** One entry of the side navigation; entries without a link are not built yet. */
 interface NavEntry {
@@ -76,6 +85,18 @@ export default class Shell {
   private readonly breakpoints = inject(BreakpointObserver);
 
   protected readonly user = this.session.user;
+  /** Whether a workshop switch is under way (the switcher waits for it). */
+  protected readonly switching = signal(false);
+  /**
+   * The workshop whose pages the outlet shows: a switch rebuilds the page, so nothing read for the
+   * workshop left stays on screen. Signing out keeps it (the shell is on its way to sign-in).
+   */
+  private readonly pageWorkshop = linkedSignal<string | null, string | null>({
+    source: this.session.workshopId,
+    computation: (id, previous) => id ?? previous?.value ?? null,
+  });
+  /** The one page the outlet shows, keyed by its workshop (the template rebuilds it on a change). */
+  protected readonly pages = computed(() => [{ workshopId: this.pageWorkshop() }]);
   /** Whether the window is narrow enough for the overlay navigation. */
   protected readonly narrow = toSignal(
     this.breakpoints.observe(NARROW).pipe(map((state) => state.matches)),
@@ -114,6 +135,21 @@ export default class Shell {
 
   protected closeIfOverlay(sidenav: MatSidenav): void {
     if (this.narrow()) void sidenav.close();
+  }
+
+  /** Moves to another of the person's workshops (the session goes Home and says so). */
+  protected switchTo(workshopId: string): void {
+    if (workshopId === this.session.workshopId() || this.switching()) return;
+    this.switching.set(true);
+    this.session.switchWorkshop(workshopId).subscribe({
+      next: () => this.switching.set(false),
+      error: (err: unknown) => {
+        this.switching.set(false);
+        // A workshop the person no longer belongs to is refused with a field error naming it.
+        const refusal = err instanceof ApiError ? err.fieldErrors['workshopId']?.[0] : undefined;
+        this.snackBar.open(refusal ?? messageOf(err), 'OK', { duration: 6000 });
+      },
+    });
   }
 
   protected signOut(): void {
