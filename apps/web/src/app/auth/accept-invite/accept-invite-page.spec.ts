@@ -45,7 +45,11 @@ const INVITATION = {
   role: 'formulator',
   workshopName: 'Hollowmere Bathworks',
   invitedBy: 'Ada Marsh',
+  existingAccount: false,
 };
+
+/** The same invitation sent to an address that already has an account (in another workshop). */
+const FOR_EXISTING_ACCOUNT = { ...INVITATION, existingAccount: true };
 
 type Opened = Awaited<ReturnType<typeof openInvitation>>;
 
@@ -167,6 +171,9 @@ describe('AcceptInvitePage', () => {
           email: 'tomas@example.com',
           role: 'formulator',
           workshop: { id: 'w1', name: 'Hollowmere Bathworks' },
+          memberships: [
+            { workshopId: 'w1', workshopName: 'Hollowmere Bathworks', role: 'formulator' },
+          ],
         },
       },
       { status: 201, statusText: 'Created' },
@@ -175,5 +182,101 @@ describe('AcceptInvitePage', () => {
 
     expect(TestBed.inject(Router).url).toBe('/');
     expect(TestBed.inject(Session).role()).toBe('formulator');
+  });
+
+  describe('for an address that already has an account', () => {
+    it('asks only for that account’s password and says why', async () => {
+      const page = await openInvitation();
+      page.preview.flush(FOR_EXISTING_ACCOUNT);
+      await page.harness.fixture.whenStable();
+
+      const text = page.harness.routeNativeElement!.textContent!.replace(/\s+/g, ' ');
+      expect(text).toContain(
+        'You already have a Batchproof account with tomas@example.com. Enter its password to join Hollowmere Bathworks.',
+      );
+      const labels = await Promise.all(
+        (await page.loader.getAllHarnesses(MatFormFieldHarness)).map((f) => f.getLabel()),
+      );
+      expect(labels).toEqual(['Your password']);
+      const password = page.harness.routeNativeElement!.querySelector('input[type=password]')!;
+      expect(password.getAttribute('autocomplete')).toBe('current-password');
+      expect(text).toContain('Forgot your password?');
+    });
+
+    it('says the password is required before sending anything', async () => {
+      const page = await openInvitation();
+      page.preview.flush(FOR_EXISTING_ACCOUNT);
+      await page.harness.fixture.whenStable();
+      await (await page.loader.getHarness(MatButtonHarness.with({ text: /^Join/ }))).click();
+
+      const field = await page.loader.getHarness(
+        MatFormFieldHarness.with({ floatingLabelText: 'Your password' }),
+      );
+      expect(await field.getTextErrors()).toEqual(['Password is required.']);
+      page.backend.expectNone('/api/auth/invitations/accept');
+    });
+
+    it('joins with the token and the password, then lands in the invited workshop', async () => {
+      const page = await openInvitation();
+      page.preview.flush(FOR_EXISTING_ACCOUNT);
+      await page.harness.fixture.whenStable();
+
+      const field = await page.loader.getHarness(
+        MatFormFieldHarness.with({ floatingLabelText: 'Your password' }),
+      );
+      await ((await field.getControl()) as MatInputHarness).setValue('the-old-password');
+      await (await page.loader.getHarness(MatButtonHarness.with({ text: /^Join/ }))).click();
+
+      const req = page.backend.expectOne('/api/auth/invitations/accept');
+      expect(req.request.method).toBe('POST');
+      expect(req.request.body).toEqual({ token: TOKEN, password: 'the-old-password' });
+      req.flush({
+        accessToken: 't',
+        expiresIn: 900,
+        user: {
+          id: 'u2',
+          name: 'Tomas Reed',
+          email: 'tomas@example.com',
+          role: 'formulator',
+          workshop: { id: 'w1', name: 'Hollowmere Bathworks' },
+          memberships: [
+            { workshopId: 'w9', workshopName: 'Elder Lane Soaps', role: 'assessor' },
+            { workshopId: 'w1', workshopName: 'Hollowmere Bathworks', role: 'formulator' },
+          ],
+        },
+      });
+      await page.harness.fixture.whenStable();
+
+      expect(TestBed.inject(Router).url).toBe('/');
+      const session = TestBed.inject(Session);
+      expect(session.workshopId()).toBe('w1');
+      expect(session.memberships()).toHaveLength(2);
+    });
+
+    it('puts a refused password back on the field', async () => {
+      const page = await openInvitation();
+      page.preview.flush(FOR_EXISTING_ACCOUNT);
+      await page.harness.fixture.whenStable();
+
+      const field = await page.loader.getHarness(
+        MatFormFieldHarness.with({ floatingLabelText: 'Your password' }),
+      );
+      await ((await field.getControl()) as MatInputHarness).setValue('not-it');
+      await (await page.loader.getHarness(MatButtonHarness.with({ text: /^Join/ }))).click();
+      page.backend.expectOne('/api/auth/invitations/accept').flush(
+        {
+          error: {
+            code: 'validation_failed',
+            message: 'Check the highlighted fields.',
+            fieldErrors: { password: ['That password is not right for this account.'] },
+          },
+        },
+        { status: 400, statusText: 'Bad Request' },
+      );
+      await page.harness.fixture.whenStable();
+
+      expect(await field.getTextErrors()).toEqual(['That password is not right for this account.']);
+      expect(TestBed.inject(Session).signedIn()).toBe(false);
+    });
   });
 });

@@ -6,7 +6,14 @@ import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router, RouterLink } from '@angular/router';
-import { acceptInvitationSchema, type ErrorCode, ROLE_DESCRIPTIONS } from '@batchproof/shared';
+import type { Observable } from 'rxjs';
+import {
+  acceptInvitationExistingSchema,
+  acceptInvitationSchema,
+  type ErrorCode,
+  ROLE_DESCRIPTIONS,
+  type User,
+} from '@batchproof/shared';
 import { errorMessage, showRequestError, validateForm } from '../../forms/form-errors';
 import { ApiError, messageOf } from '../../http/api-error';
 import { AuthApi } from '../auth-api';
@@ -37,7 +44,11 @@ const LINK_REFUSALS: Partial<Record<ErrorCode, { heading: string; advice: string
 const refusalOf = (error: unknown) =>
   error instanceof ApiError ? LINK_REFUSALS[error.code as ErrorCode] : undefined;
 
-/** Where an invitation link lands: shows who invited whom, then takes a name and password. */
+/**
+ * Where an invitation link lands: shows who invited whom, then takes a name and a new password,
+ * or, when the address already has an account, only that account's password (the invitation
+ * then adds a membership to it).
+ */
 @Component({
   selector: 'bp-accept-invite-page',
   imports: [
@@ -83,13 +94,18 @@ export default class AcceptInvitePage {
     undefined,
   );
 
+  /** Whether the invited address already has an account (then only its password is asked). */
+  protected readonly existingAccount = computed(
+    () => this.invitation.hasValue() && this.invitation.value().existingAccount,
+  );
+
   protected submit(): void {
     if (this.submitting()) return;
     this.notice.set('');
-    const value = validateForm(this.form, acceptInvitationSchema.omit({ token: true }));
-    if (!value) return;
+    const accepting = this.existingAccount() ? this.joinWithAccount() : this.joinAsNew();
+    if (!accepting) return;
     this.submitting.set(true);
-    this.session.acceptInvitation({ ...value, token: this.token() }).subscribe({
+    accepting.subscribe({
       next: (user) => {
         this.snackBar.open(`Welcome to ${user.workshop.name}.`, 'OK', { duration: 5000 });
         void this.router.navigateByUrl('/');
@@ -101,5 +117,17 @@ export default class AcceptInvitePage {
         else this.notice.set(showRequestError(this.form, err));
       },
     });
+  }
+
+  /** A new account: a name and a new password. */
+  private joinAsNew(): Observable<User> | undefined {
+    const value = validateForm(this.form, acceptInvitationSchema.omit({ token: true }));
+    return value && this.session.acceptInvitation({ ...value, token: this.token() });
+  }
+
+  /** The account the address already has: its password; the name is already known. */
+  private joinWithAccount(): Observable<User> | undefined {
+    const value = validateForm(this.form, acceptInvitationExistingSchema.omit({ token: true }));
+    return value && this.session.acceptInvitationExisting({ ...value, token: this.token() });
   }
 }
