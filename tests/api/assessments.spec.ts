@@ -7,6 +7,8 @@ import {
   shareListSchema,
   type AssessmentDetail,
 } from '@batchproof/shared';
+import { writeUnlessSigned } from '../../apps/api/src/assessments/assessments-domain';
+import { updateAssessment } from '../../apps/api/src/assessments/assessments-repository';
 import { assessments, auditEvents } from '../../apps/api/src/db/schema';
 import { bearer } from '../support/auth-header';
 import { aSignableUpdate, assessmentWorkspaceForFile } from '../support/assessment-workspace';
@@ -358,5 +360,54 @@ describe('what is refused, with field errors', () => {
     expect(again.status).toBe(400);
     expect(Object.keys(again.body.error.fieldErrors)).toEqual(['partB.credentials']);
     expect((await rowOf(assessment.id)).status).toBe('draft');
+  });
+
+  it('signs once when two signatures race; the other is told it is signed', async () => {
+    const { assessment } = await ws.startedAssessment();
+    expect((await ws.put(assessment.id, aSignableUpdate())).status).toBe(200);
+    const { contentHash } = await ws.detail(assessment.id);
+    const answers = await Promise.all([
+      ws.sign(assessment.id, contentHash),
+      ws.sign(assessment.id, contentHash),
+    ]);
+    expect(answers.map((r) => r.status).sort()).toEqual([200, 409]);
+    expect(answers.find((r) => r.status === 409)!.body.error.code).toBe('assessment_signed');
+  });
+
+  it("maps the database trigger's refusal to 409 assessment_signed", async () => {
+    const { assessment } = await ws.startedAssessment();
+    expect((await ws.put(assessment.id, aSignableUpdate())).status).toBe(200);
+    const { contentHash } = await ws.detail(assessment.id);
+    expect((await ws.sign(assessment.id, contentHash)).status).toBe(200);
+    // Past the route's own check, straight at the row: the trigger refuses, the API says why.
+    await expect(
+      writeUnlessSigned(() =>
+        updateAssessment(ws.h.handle.db, ws.w.id, assessment.id, {
+          partB: {
+            conclusion: 'Changed after signing',
+            labelWarnings: '',
+            reasoning: '',
+            credentials: '',
+          },
+        }),
+      ),
+    ).rejects.toMatchObject({ status: 409, code: 'assessment_signed' });
+    expect((await rowOf(assessment.id)).partB.conclusion).not.toBe('Changed after signing');
+  });
+
+  it('a retried start with the same Idempotency-Key answers the first assessment', async () => {
+    const v = await ws.releasedVersion();
+    const share = await ws.shared(v.versionId);
+    const send = () =>
+      request(ws.h.app)
+        .post('/api/assessments')
+        .set(bearer(ws.w.members.assessor))
+        .set('Idempotency-Key', `start-${share.id}`)
+        .send({ shareId: share.id });
+    const first = await send();
+    const retry = await send();
+    expect([first.status, retry.status]).toEqual([201, 201]);
+    expect(retry.headers['idempotent-replayed']).toBe('true');
+    expect(retry.body.id).toBe(first.body.id);
   });
 });

@@ -38,7 +38,7 @@ function isSignedTrigger(err: unknown): boolean {
  * Runs a write to an assessment row. The routes check the status first; the trigger on
  * `assessments` is the last line of defence, and its refusal answers the same 409.
  */
-async function writeUnlessSigned(work: () => Promise<void>) {
+export async function writeUnlessSigned(work: () => Promise<void>) {
   try {
     await work();
   } catch (err) {
