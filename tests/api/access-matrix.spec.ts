@@ -3,33 +3,41 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ROLES, type Role } from '@batchproof/shared';
 import {
   addMember,
+  buildMemberActiveElsewhere,
   buildWorkshop,
   uniqueEmail,
+  type BuiltMember,
   type BuiltWorkshop,
 } from '../support/workshop-builder';
 import { invitations } from '../../apps/api/src/db/schema';
 import { startApiHarness, TEST_JWT_SECRET, type ApiHarness } from '../support/api-harness';
 import { workspaceAccessCases, type WorkspaceRequest } from './workspace-access-cases';
 
-type Caller = Role | 'other-workshop' | 'anonymous';
-const CALLERS: Caller[] = [...ROLES, 'other-workshop', 'anonymous'];
+/**
+ * `member-of-two` is the owner of workshop A who is also a member of another workshop and works
+ * there now (their token names it): they must meet exactly the answers B's owner meets.
+ */
+type Caller = Role | 'other-workshop' | 'member-of-two' | 'anonymous';
+type ExpectedCaller = Exclude<Caller, 'member-of-two'>;
+const CALLERS: Caller[] = [...ROLES, 'other-workshop', 'member-of-two', 'anonymous'];
 
 interface RouteCase {
   route: string;
   /** Builds the request path (and body) afresh for each caller, so destructive calls don't collide. */
   prepare: () => Promise<WorkspaceRequest>;
-  expected: Record<Caller, number>;
+  expected: Record<ExpectedCaller, number>;
 }
 
 let h: ApiHarness;
 let a: BuiltWorkshop;
 let b: BuiltWorkshop;
+let memberOfTwo: BuiltMember;
 
 const only = (
   allowed: readonly Role[],
   okStatus: number,
   otherWorkshop: number,
-): Record<Caller, number> => ({
+): Record<ExpectedCaller, number> => ({
   ...(Object.fromEntries(ROLES.map((r) => [r, allowed.includes(r) ? okStatus : 403])) as Record<
     Role,
     number
@@ -52,8 +60,8 @@ async function freshInvitation(workshopId: string) {
   return row!.id;
 }
 
-const everyone = (status: number): Record<Caller, number> =>
-  Object.fromEntries(CALLERS.map((c) => [c, status])) as Record<Caller, number>;
+const everyone = (status: number): Record<ExpectedCaller, number> =>
+  Object.fromEntries(CALLERS.map((c) => [c, status])) as Record<ExpectedCaller, number>;
 
 const cases: RouteCase[] = [
   {
@@ -151,6 +159,7 @@ beforeAll(async () => {
   h = await startApiHarness();
   a = await buildWorkshop(h.handle.db, TEST_JWT_SECRET);
   b = await buildWorkshop(h.handle.db, TEST_JWT_SECRET, { roles: ['owner'] });
+  memberOfTwo = await buildMemberActiveElsewhere(h.handle.db, TEST_JWT_SECRET, a.id, 'owner');
 });
 afterAll(() => h.close());
 
@@ -159,7 +168,13 @@ const tokenOf = (caller: Caller) =>
     ? undefined
     : caller === 'other-workshop'
       ? b.members.owner.token
-      : a.members[caller].token;
+      : caller === 'member-of-two'
+        ? memberOfTwo.token
+        : a.members[caller].token;
+
+/** What the caller must be answered: a member of two workshops, active in the other, as B's owner. */
+const expectedFor = (c: RouteCase, caller: Caller) =>
+  c.expected[caller === 'member-of-two' ? 'other-workshop' : caller];
 
 describe('access to every signed-in route, by role and workshop', () => {
   for (const c of cases) {
@@ -176,7 +191,7 @@ describe('access to every signed-in route, by role and workshop', () => {
         }
         const res = await (body ? req.send(body) : req);
         expect(res.status, `${caller} → ${res.status} ${JSON.stringify(res.body)}`).toBe(
-          c.expected[caller],
+          expectedFor(c, caller),
         );
         if (res.status >= 400) expect(res.body.error.code).toEqual(expect.any(String));
       });
@@ -192,6 +207,22 @@ describe('workshop isolation in lists', () => {
     expect(res.status).toBe(200);
     const emails = res.body.items.map((m: { email: string }) => m.email);
     expect(emails).toEqual([b.members.owner.email]);
+  });
+
+  it("a member of A and another workshop, active in the other, lists that workshop's members and none of A's", async () => {
+    const res = await request(h.app)
+      .get('/api/members')
+      .set('Authorization', `Bearer ${memberOfTwo.token}`);
+    expect(res.status).toBe(200);
+    const emails = res.body.items.map((m: { email: string }) => m.email);
+    expect(emails).toEqual([memberOfTwo.email]);
+    // ... while A's own list names them, as its owner.
+    const inA = await request(h.app)
+      .get('/api/members')
+      .set('Authorization', `Bearer ${a.members.owner.token}`);
+    expect(inA.body.items).toContainEqual(
+      expect.objectContaining({ email: memberOfTwo.email, role: 'owner' }),
+    );
   });
 
   it('a token whose workshop claim does not match the user is refused with 401', async () => {
