@@ -125,8 +125,8 @@ describe('GET /api/readiness', () => {
     expect(before.item('assessment')).toMatchObject({
       done: false,
       link: `/formulas/${formulaId}`,
-      source: 'Regulation (EC) No 1223/2009, Art. 10 and Annex I',
     });
+    expect(before.item('assessment').source).toMatch(/^Regulation \(EC\) No 1223\/2009, Art\. 10/);
     expect(before.item('assessment').detail).toMatch(/Version 1 has no signed safety assessment/);
     expect(before.item('labels')).toMatchObject({ done: false, link: '/labels' });
     expect(before.item('notification')).toMatchObject({ done: false, link: '/readiness' });
@@ -183,7 +183,7 @@ describe('GET /api/readiness', () => {
     expect(eu.item('responsible-person').detail).toMatch(/EU responsible person's name/);
     const withoutIdentity = await releasedFormula(h, w, null);
     expect((await marketOf(withoutIdentity, 'UK')).item('responsible-person').detail).toMatch(
-      /product identity/,
+      /product identity/i,
     );
   });
 
@@ -191,7 +191,7 @@ describe('GET /api/readiness', () => {
     const formulaId = await releasedFormula(h, w);
     const untimed = (await marketOf(formulaId, 'CA')).item('notification');
     expect(untimed.done).toBe(false);
-    expect(untimed.source).toBe('Cosmetic Regulations (C.R.C., c. 869), s. 30(1)');
+    expect(untimed.source).toMatch(/^Cosmetic Regulations \(C\.R\.C\., c\. 869\), s\. 30\(1\)/);
 
     const soldOn = addDays(today, -3);
     await saved(formulaId, 'ca-notification', { firstSaleOn: soldOn });
@@ -204,8 +204,9 @@ describe('GET /api/readiness', () => {
     const longAgo = addDays(today, -20);
     await saved(formulaId, 'ca-notification', { firstSaleOn: longAgo });
     const overdue = (await marketOf(formulaId, 'CA')).item('notification');
-    expect(overdue.detail).toBe(
-      `Overdue: was due by ${addDays(longAgo, 10)}, 10 days after the first sale on ${longAgo}`,
+    expect(overdue.detail).toMatch(/^Overdue: /);
+    expect(overdue.detail).toContain(
+      `due by ${addDays(longAgo, 10)}, 10 days after the first sale on ${longAgo}`,
     );
 
     await saved(formulaId, 'ca-notification', { firstSaleOn: longAgo, reference: 'CNF-88213' });
@@ -219,13 +220,12 @@ describe('GET /api/readiness', () => {
     const formulaId = await releasedFormula(h, w);
     expect((await marketOf(formulaId, 'US')).item('listing').done).toBe(false);
     await saved(formulaId, 'us-listing', { smallBusinessExempt: false });
-    expect((await marketOf(formulaId, 'US')).item('listing').done).toBe(false);
+    const notExempt = (await marketOf(formulaId, 'US')).item('listing');
+    expect(notExempt.done).toBe(false);
+    expect(notExempt.detail).toMatch(/listing number/);
     await saved(formulaId, 'us-listing', { smallBusinessExempt: true });
     const exempt = (await marketOf(formulaId, 'US')).item('listing');
-    expect(exempt).toMatchObject({
-      done: true,
-      label: 'Product listing: exempt as a small business',
-    });
+    expect(exempt).toMatchObject({ done: true, detail: null });
     // Without an assessment, a substantiation record on file satisfies substantiation.
     expect((await marketOf(formulaId, 'US')).item('substantiation').done).toBe(false);
     await saved(formulaId, 'us-substantiation', { reference: 'Safety file SF-2026-04' });

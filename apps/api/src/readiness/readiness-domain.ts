@@ -1,6 +1,8 @@
 import {
   complianceMarketSchema,
+  marketReadiness,
   type ComplianceMarket,
+  type MarketReadinessInput,
   type MarketRecord,
   type MarketRecordKind,
   type MarketRecordParsed,
@@ -13,7 +15,6 @@ import type { Database } from '../db/database';
 import { findFormula } from '../formulas/formulas-repository';
 import { findLabelDetails } from '../workshop/workshop-repository';
 import { byFormula, signedVersions } from './assessment-findings';
-import { readinessOf, type ReadinessFacts } from './readiness-facts';
 import * as repo from './readiness-repository';
 
 /** A stored record in the API's shape. */
@@ -69,24 +70,21 @@ export async function listReadiness(
 
   return {
     items: products.map((p) => {
-      const formulaSigned = signedOf.get(p.formulaId) ?? [];
-      const own = formulaSigned.find((s) => s.versionId === p.versionId);
-      // Newest first, as `signedVersions` answers them.
-      const newest = formulaSigned[0];
+      // Newest version first, as `signedVersions` answers them: the latest signed assessment.
+      const newest = (signedOf.get(p.formulaId) ?? [])[0];
       const formulaRecords = (recordsOf.get(p.formulaId) ?? []).map(marketRecord);
-      const facts: ReadinessFacts = {
+      const input: MarketReadinessInput = {
         formulaId: p.formulaId,
-        versionId: p.versionId,
-        versionNumber: p.versionNumber,
         markets: p.profile.markets,
-        signedAssessment: own ? { id: own.assessmentId } : null,
-        lastSigned: newest
+        releasedVersionNumber: p.versionNumber,
+        signedAssessment: newest
           ? { id: newest.assessmentId, versionNumber: newest.versionNumber }
           : null,
-        printedMarkets: (printedOf.get(p.versionId) ?? []).map((r) => r.market).filter(isMarket),
-        records: Object.fromEntries(formulaRecords.map((r) => [r.kind, r])),
+        labelRunMarkets: (printedOf.get(p.versionId) ?? []).map((r) => r.market).filter(isMarket),
+        records: formulaRecords,
         identity: identityOf.get(p.formulaId) ?? null,
-        workshop: { name: workshop?.name ?? null, address: workshop?.address ?? null },
+        // The name and address every label prints (the CA item asks for both).
+        workshopAddressPresent: !!workshop?.name && !!workshop.address,
         today,
       };
       return {
@@ -95,7 +93,7 @@ export async function listReadiness(
         productType: p.productType,
         versionId: p.versionId,
         versionNumber: p.versionNumber,
-        markets: readinessOf(facts),
+        markets: marketReadiness(input),
         records: formulaRecords.sort((a, b) => a.kind.localeCompare(b.kind)),
       };
     }),
