@@ -47,7 +47,7 @@ describe('HomePage', () => {
       'production',
     );
     expect(el.textContent).toContain(ROLE_DESCRIPTIONS.production);
-    // Production's description names its batch work and nothing still to be built (assessments).
+    // Production's description names its batch work; safety assessments are not open to it.
     expect(el.textContent).toMatch(/starts and records batches/);
     expect(el.textContent).not.toMatch(/assessment/i);
   });
@@ -166,11 +166,13 @@ describe('HomePage', () => {
     expect(el.querySelector('[data-testid=attention-empty]')?.textContent).toContain(
       'Nothing needs attention today: no draft or released version has blocking findings',
     );
-    // The role's description says only what is built: production and recall records (batches,
-    // deliveries, traces, recalls, complaints) are; safety assessments (issue 12) are not yet.
+    // The role's description says what the viewer reads: production and recall records
+    // (batches, deliveries, traces, recalls, complaints) and now safety assessments and market
+    // readiness too (issue 12), and that it changes nothing.
     expect(el.textContent).toContain(ROLE_DESCRIPTIONS.viewer);
     expect(ROLE_DESCRIPTIONS.viewer).toMatch(/batches/);
-    expect(el.textContent).not.toMatch(/assessments?\b|safety.assessment/i);
+    expect(ROLE_DESCRIPTIONS.viewer).toMatch(/safety assessments, market readiness/);
+    expect(ROLE_DESCRIPTIONS.viewer).toMatch(/changes nothing/);
   });
 
   it('tells an assessor that nothing tracked here is open to the role', async () => {
@@ -179,5 +181,19 @@ describe('HomePage', () => {
       'open to your role',
     );
     expect(stepLinks(el)).toEqual(['/reference']);
+    // What the assessor does (issue 12): the shared versions and their own signed assessments,
+    // and nothing of the maker's own records.
+    expect(el.textContent).toContain(ROLE_DESCRIPTIONS.assessor);
+    expect(ROLE_DESCRIPTIONS.assessor).toMatch(/formula versions shared with them/);
+    expect(ROLE_DESCRIPTIONS.assessor).toMatch(/writes and signs their safety assessments/);
+    expect(ROLE_DESCRIPTIONS.assessor).not.toMatch(/labels|materials|lots/i);
+  });
+
+  it("names what the owner alone does in issue 12's work: sharing versions with assessors", async () => {
+    const el = await openHomeAs('owner');
+    expect(el.textContent).toContain(ROLE_DESCRIPTIONS.owner);
+    expect(ROLE_DESCRIPTIONS.owner).toMatch(/sharing formula versions with safety assessors/);
+    // Writers record the maker's part: safety notes and notification references.
+    expect(ROLE_DESCRIPTIONS.formulator).toMatch(/safety notes .* notification references/);
   });
 });

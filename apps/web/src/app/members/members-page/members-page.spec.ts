@@ -227,12 +227,13 @@ describe('MembersPage', () => {
 
     const req = page.backend.expectOne({ method: 'POST', url: '/api/members/invitations' });
     expect(req.request.body).toEqual({ email: 'tomas@example.com', role: 'formulator' });
+    // An address with an account elsewhere is welcome; one already in this workshop is refused.
     req.flush(
       {
         error: {
           code: 'conflict',
-          message: 'This e-mail already belongs to a Batchproof account.',
-          fieldErrors: { email: ['This e-mail already belongs to a Batchproof account.'] },
+          message: 'tomas@example.com is already a member of this workshop.',
+          fieldErrors: { email: ['tomas@example.com is already a member of this workshop.'] },
         },
       },
       { status: 409, statusText: 'Conflict' },
@@ -240,8 +241,18 @@ describe('MembersPage', () => {
     await page.harness.fixture.whenStable();
 
     expect(await email.getTextErrors()).toEqual([
-      'This e-mail already belongs to a Batchproof account.',
+      'tomas@example.com is already a member of this workshop.',
     ]);
+  });
+
+  it('tells the owner that someone who already uses Batchproof can be invited', async () => {
+    const page = await openMembersAs('owner');
+    await flushReads(page, []);
+    const form = page.harness.routeNativeElement!.querySelector('bp-invite-form')!;
+    expect(form.textContent).toContain(
+      'Someone who already uses Batchproof joins with their own password.',
+    );
+    expect(form.textContent).not.toMatch(/already belongs|cannot be invited/i);
   });
 
   it('puts the role back and says why when the server refuses to demote the last owner', async () => {

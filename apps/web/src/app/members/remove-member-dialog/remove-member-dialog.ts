@@ -22,8 +22,8 @@ export interface RemoveMemberData {
     <h2 mat-dialog-title>Remove {{ data.name }}?</h2>
     <mat-dialog-content>
       <p>
-        {{ data.name }} will no longer be able to sign in to {{ data.workshopName }}. The records
-        they made stay as they are.
+        {{ data.name }} will no longer be able to work in {{ data.workshopName }}; any other
+        workshops they belong to keep them. The records they made stay as they are.
       </p>
     </mat-dialog-content>
     <mat-dialog-actions align="end">
