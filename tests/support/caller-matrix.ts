@@ -1,16 +1,29 @@
 import request from 'supertest';
 import { expect } from 'vitest';
 import { ROLES, type Role } from '@batchproof/shared';
-import type { ApiHarness } from './api-harness';
-import type { BuiltWorkshop } from './workshop-builder';
+import { TEST_JWT_SECRET, type ApiHarness } from './api-harness';
+import {
+  buildMemberActiveElsewhere,
+  type BuiltMember,
+  type BuiltWorkshop,
+} from './workshop-builder';
 
-/** Who calls a route in a role matrix: each role of workshop A, B's owner, or nobody. */
-export type Caller = Role | 'other-workshop' | 'anonymous';
-export const CALLERS: readonly Caller[] = [...ROLES, 'other-workshop', 'anonymous'];
+/**
+ * Who calls a route in a role matrix: each role of workshop A, B's owner, A's owner who is also
+ * a member of another workshop and works there now (`member-of-two`), or nobody.
+ */
+export type Caller = Role | 'other-workshop' | 'member-of-two' | 'anonymous';
+export const CALLERS: readonly Caller[] = [
+  ...ROLES,
+  'other-workshop',
+  'member-of-two',
+  'anonymous',
+];
 
 /**
  * The statuses a route answers: `okStatus` for the roles allowed, 403 for the others,
- * `otherWorkshop` for workshop B's owner (404 for a record of A) and 401 for no token.
+ * `otherWorkshop` for workshop B's owner and for the member of two workshops active in the other
+ * one (404 for a record of A), and 401 for no token.
  */
 export const onlyRoles = (
   allowed: readonly Role[],
@@ -22,8 +35,18 @@ export const onlyRoles = (
     number
   >),
   'other-workshop': otherWorkshop,
+  'member-of-two': otherWorkshop,
   anonymous: 401,
 });
+
+/** One member of two workshops per workshop A, made when a matrix first calls as them. */
+const activeElsewhere = new Map<string, Promise<BuiltMember>>();
+const memberOfTwo = (h: ApiHarness, a: BuiltWorkshop) => {
+  if (!activeElsewhere.has(a.id)) {
+    activeElsewhere.set(a.id, buildMemberActiveElsewhere(h.handle.db, TEST_JWT_SECRET, a.id));
+  }
+  return activeElsewhere.get(a.id)!;
+};
 
 /** One request of a matrix. */
 export interface MatrixRequest {
@@ -48,7 +71,9 @@ export async function expectStatusAs(
       ? undefined
       : caller === 'other-workshop'
         ? workshops.b.members.owner
-        : workshops.a.members[caller];
+        : caller === 'member-of-two'
+          ? await memberOfTwo(h, workshops.a)
+          : workshops.a.members[caller];
   if (member) req = req.set('Authorization', `Bearer ${member.token}`);
   if (csv !== undefined) req = req.attach('file', Buffer.from(csv), 'deliveries.csv');
   const res = await (body ? req.send(body) : req);
