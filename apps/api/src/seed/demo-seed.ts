@@ -4,6 +4,7 @@ import { demoMembers, demoWorkshop } from './hollowmere';
 import { BCRYPT_COST } from '../auth/auth-domain';
 import type { Database } from '../db/database';
 import { memberships, users, workshops } from '../db/schema';
+import { demoAssessmentEmails, seedDemoAssessments } from './demo-assessment-seed';
 import { seedDemoLabels } from './demo-label-seed';
 import { seedDemoProduction } from './demo-production-seed';
 import { demoOwner, seedDemoWorkspace } from './demo-workspace-seed';
@@ -17,7 +18,7 @@ export async function seedDemo(
   db: Database,
   password: string,
 ): Promise<'created' | 'updated' | 'unchanged'> {
-  const emails = demoMembers.map((m) => m.email);
+  const emails = [...demoMembers.map((m) => m.email), ...demoAssessmentEmails];
   // One row per membership of a demo user; the demo workshop's come first.
   const existing = await db
     .select({
@@ -49,6 +50,7 @@ export async function seedDemo(
     });
     await seedDemoWorkspace(db, workshopId);
     await seedProduction(db, workshopId);
+    await seedDemoAssessments(db, workshopId);
     return 'created';
   }
   // A demo database created before the workspace existed gets its materials and formulas once.
@@ -57,6 +59,8 @@ export async function seedDemo(
   await seedDemoLabels(db, existing[0]!.workshopId);
   // …and its production history once batches exist.
   await seedProduction(db, existing[0]!.workshopId);
+  // …and the safety-assessment story (a second workshop for the assessor) once assessments exist.
+  await seedDemoAssessments(db, existing[0]!.workshopId);
   const owner = existing.find((u) => u.role === 'owner') ?? existing[0]!;
   if (await bcrypt.compare(password, owner.passwordHash)) return 'unchanged';
   const passwordHash = await bcrypt.hash(password, BCRYPT_COST);
