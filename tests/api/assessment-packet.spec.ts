@@ -2,7 +2,7 @@ import { createHash, randomUUID } from 'node:crypto';
 import { and, eq } from 'drizzle-orm';
 import request from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { PART_A_HEADINGS, PART_B_HEADINGS } from '@batchproof/shared';
+import { PART_A_HEADINGS, PART_B_HEADINGS, productIdentitySchema } from '@batchproof/shared';
 import {
   loadSafetyPacket,
   packetHash,
@@ -10,7 +10,13 @@ import {
   type AssessmentForPacket,
 } from '../../apps/api/src/assessments/packet';
 import { DRAFT_MARK } from '../../apps/api/src/assessments/packet-pdf';
-import { complaints, documents, materials, safetyNotes } from '../../apps/api/src/db/schema';
+import {
+  complaints,
+  documents,
+  materials,
+  productIdentities,
+  safetyNotes,
+} from '../../apps/api/src/db/schema';
 import { aDraft } from '../../fixtures/builders/formula-builder';
 import { bearer } from '../support/auth-header';
 import { buildFinishedLot } from '../support/finished-lot-builder';
@@ -252,6 +258,32 @@ describe('the safety packet of a formula version', () => {
       exposure: { ...assessment.exposure!, retentionFactor: 0.1 },
     });
     expect(packetHash(withExposure)).not.toBe(packetHash(changed));
+  });
+
+  it('shows the label identity and its directions, and changes its hash when it is entered', async () => {
+    const before = await load();
+    expect(before.identity).toBeNull();
+    await ws.h.handle.db.insert(productIdentities).values({
+      workshopId: ws.w.id,
+      formulaId,
+      identity: productIdentitySchema.parse({
+        productName: 'Quiet Tide Bath Fizzer',
+        productCode: 'QT-1',
+        gtin: null,
+        shelfLifeMonths: 12,
+        directions: 'Drop one into a warm bath.',
+        euResponsiblePerson: { name: 'Fern Hollow Soaps', address: '1 Mill Lane, Dublin' },
+      }),
+    });
+    const packet = await load();
+    expect(packet.identity).toMatchObject({
+      productName: 'Quiet Tide Bath Fizzer',
+      euResponsiblePerson: 'Fern Hollow Soaps, 1 Mill Lane, Dublin',
+    });
+    expect(packetHash(packet)).not.toBe(packetHash(before));
+    const text = allText(await readPdf(await renderPacketPdf(packet, { draft: true })));
+    expect(text).toContain('Drop one into a warm bath.');
+    expect(text).toContain('Quiet Tide Bath Fizzer');
   });
 
   it('answers 404 for a version of another workshop', async () => {

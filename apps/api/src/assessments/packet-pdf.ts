@@ -315,6 +315,38 @@ function marketInformation(m: SafetyPacket['markets'][number]) {
   ];
 }
 
+const months = (n: number | null) => (n === null ? null : `${n} months`);
+
+/** The label identity as a list of facts; the lines not entered are left out. */
+function identityFacts(packet: SafetyPacket) {
+  const id = packet.identity;
+  if (!id) {
+    return [
+      sub('Label identity'),
+      { text: 'No product identity entered for the labels yet.', italics: true, fontSize: 9 },
+    ];
+  }
+  const facts: [string, string | null][] = [
+    ['Product name on the label', id.productName],
+    ['Shelf life', months(id.shelfLifeMonths)],
+    ['Period after opening', months(id.periodAfterOpeningMonths)],
+    ['EU responsible person', id.euResponsiblePerson],
+    ['UK responsible person', id.ukResponsiblePerson],
+    ['US adverse-event contact', id.usAdverseEventContact],
+  ];
+  return [
+    keep(sub('Label identity'), {
+      table: {
+        widths: [150, '*'],
+        body: facts.map(([label, value]) => [{ text: label, bold: true }, orNone(value)]),
+      },
+      layout: 'noBorders',
+      fontSize: 9,
+      margin: [0, 0, 0, 6],
+    }),
+  ];
+}
+
 function productInformation(packet: SafetyPacket) {
   const { findings, documentsOnFile, documentsMissing, batches } = packet;
   return [
@@ -327,6 +359,7 @@ function productInformation(packet: SafetyPacket) {
             fontSize: 9,
           },
     ),
+    ...identityFacts(packet),
     ...packet.markets.flatMap(marketInformation),
     ...together(
       findings.length,
@@ -397,9 +430,9 @@ function partB(packet: SafetyPacket) {
       pageBreak: 'before',
       margin: [0, 0, 0, 6],
     },
-    ...PART_B_HEADINGS.flatMap((heading, i) => {
+    ...PART_B_HEADINGS.flatMap((heading, i): object[] => {
       const text = orNone(texts[i], 'Not written yet.');
-      const blocks = [
+      const blocks: object[] = [
         { text: `${i + 1}. ${heading}`, style: 'heading' },
         { text, margin: [0, 0, 0, 6] },
       ];
@@ -463,6 +496,7 @@ export function packetDocument(packet: SafetyPacket, opts: { draft: boolean; has
       keep(partA(3), notes('Impurities and traces', n.impurities)),
       notes('Packaging material', n.packaging),
       keep(partA(4), notes('Normal and reasonably foreseeable use', n.normalUse)),
+      notes('Directions for use on the label', packet.identity?.directions ?? ''),
       ...exposure(packet),
       ...substances(packet),
       ...margins(packet),

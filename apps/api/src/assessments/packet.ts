@@ -31,6 +31,7 @@ import { documentInUse } from '../documents/documents-repository';
 import { evaluateLines, gramLines } from '../formulas/formula-evaluation';
 import { findLines } from '../formulas/formulas-repository';
 import { renderDocumentPdf } from '../labels/pdf';
+import { findProductIdentity } from '../labels/product-identity-repository';
 import { findMaterials, type MaterialRow } from '../materials/materials-repository';
 import { packetDocument } from './packet-pdf';
 
@@ -197,14 +198,16 @@ export async function loadSafetyPacket(
   const { version, formula } = found;
   const lines = await findLines(db, workshopId, version.id);
   const materialIds = [...new Set(lines.map((l) => l.materialId))];
-  const [materialRows, docs, complaintRows, batchRows, notes, workshop] = await Promise.all([
-    findMaterials(db, workshopId, materialIds),
-    materialDocuments(db, workshopId, materialIds),
-    complaintsOf(db, workshopId, formula.id),
-    batchesOf(db, workshopId, version.id),
-    notesOf(db, workshopId, version.id),
-    workshopOf(db, workshopId),
-  ]);
+  const [materialRows, docs, complaintRows, batchRows, notes, workshop, identity] =
+    await Promise.all([
+      findMaterials(db, workshopId, materialIds),
+      materialDocuments(db, workshopId, materialIds),
+      complaintsOf(db, workshopId, formula.id),
+      batchesOf(db, workshopId, version.id),
+      notesOf(db, workshopId, version.id),
+      workshopOf(db, workshopId),
+      findProductIdentity(db, workshopId, formula.id),
+    ]);
   const byId = new Map(materialRows.map((m) => [m.id, m]));
   const evaluation =
     version.evaluation ??
@@ -245,6 +248,7 @@ export async function loadSafetyPacket(
     workshop,
     lines: packetLines,
     evaluation,
+    identity: identity?.identity ?? null,
     notes,
     complaints: complaintRows,
     documentsOnFile: onFile,

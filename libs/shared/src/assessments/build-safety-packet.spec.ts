@@ -6,6 +6,7 @@ import {
   type SafetyPacketLineInput,
 } from './build-safety-packet';
 import { DEFAULT_BODY_WEIGHT_KG, EXPOSURE_DEFAULTS } from './exposure-defaults';
+import type { ProductIdentity } from '../labels/product-identity';
 import type { SafetyPacket } from './safety-packet';
 
 const material = (
@@ -81,6 +82,7 @@ function input(): SafetyPacketInput {
       },
     ],
     evaluation: null,
+    identity: null,
     notes: {
       physicalChemical: 'White cream, pH 5.5',
       stability: '',
@@ -121,6 +123,19 @@ function input(): SafetyPacketInput {
     generatedAt: '2026-12-03T08:00:00.000Z',
   };
 }
+
+const anIdentity = (): ProductIdentity => ({
+  productName: 'Quiet Lotion',
+  productCode: 'QL-1',
+  gtin: null,
+  shelfLifeMonths: null,
+  periodAfterOpeningMonths: 12,
+  directions: 'Smooth over the skin after the bath.',
+  usAdverseEventContact: { address: null, phone: '+1 555 0100', website: null },
+  euResponsiblePerson: { name: 'Fern Hollow Soaps', address: '1 Mill Lane' },
+  ukResponsiblePerson: { name: null, address: null },
+  canadianFrench: { productName: null, warnings: null, directions: null },
+});
 
 const hashOf = (i: SafetyPacketInput) => packetHashContent(buildSafetyPacket(i));
 
@@ -193,6 +208,21 @@ describe('buildSafetyPacket', () => {
     expect(m.sedMgPerKgDay).toBeCloseTo(preset.exposureMgPerKgDay * 0.035, 9);
   });
 
+  it('carries the label identity in plain lines', () => {
+    const i = input();
+    i.identity = anIdentity();
+    expect(buildSafetyPacket(i).identity).toEqual({
+      productName: 'Quiet Lotion',
+      directions: 'Smooth over the skin after the bath.',
+      shelfLifeMonths: null,
+      periodAfterOpeningMonths: 12,
+      euResponsiblePerson: 'Fern Hollow Soaps, 1 Mill Lane',
+      ukResponsiblePerson: null,
+      usAdverseEventContact: '+1 555 0100',
+    });
+    expect(buildSafetyPacket(input()).identity).toBeNull();
+  });
+
   it('has no SED or MoS before the exposure is entered, and says so', () => {
     const i = input();
     i.assessment.exposure = null;
@@ -249,6 +279,7 @@ describe('packetHashContent', () => {
         }),
     ],
     ['a missing document', (i) => (i.documentsMissing = [])],
+    ['the label identity', (i) => (i.identity = anIdentity())],
     [
       'a batch',
       (i) =>

@@ -1,4 +1,5 @@
 import type { EvaluationResult } from '../compliance/evaluation-result-schema';
+import type { ProductIdentity } from '../labels/product-identity';
 import type { EvaluationInput } from '../compliance/evaluation-input-schema';
 import { expandFormula } from '../compliance/formula-expansion';
 import { MATERIAL_CATEGORY_LABELS } from '../materials/material-category-labels';
@@ -21,6 +22,7 @@ import type {
   PacketCompositionLine,
   PacketDocument,
   PacketExposure,
+  PacketLabelIdentity,
   PacketMarketInformation,
   PacketMissingDocument,
   PacketSubstance,
@@ -49,6 +51,8 @@ export interface SafetyPacketInput {
   lines: SafetyPacketLineInput[];
   /** The version's stored evaluation (declarations, warnings, colourants, allergens, findings). */
   evaluation: EvaluationResult | null;
+  /** The formula's product identity (label details), or null when none is entered. */
+  identity: ProductIdentity | null;
   notes: SafetyNotes;
   /** Complaints about the formula, newest first. */
   complaints: PacketUndesirableEffect[];
@@ -136,6 +140,23 @@ function packetExposure(input: ExposureInput | null): PacketExposure | null {
   return input ? { input, ...productExposure(input) } : null;
 }
 
+const joined = (...parts: (string | null)[]) => parts.filter(Boolean).join(', ') || null;
+
+/** What the label identity says, for items 5 and 10. */
+function labelIdentity(identity: ProductIdentity | null): PacketLabelIdentity | null {
+  if (!identity) return null;
+  const { euResponsiblePerson: eu, ukResponsiblePerson: uk, usAdverseEventContact: us } = identity;
+  return {
+    productName: identity.productName,
+    directions: identity.directions,
+    shelfLifeMonths: identity.shelfLifeMonths,
+    periodAfterOpeningMonths: identity.periodAfterOpeningMonths,
+    euResponsiblePerson: joined(eu.name, eu.address),
+    ukResponsiblePerson: joined(uk.name, uk.address),
+    usAdverseEventContact: joined(us.address, us.phone, us.website),
+  };
+}
+
 /** Item 10 per market, from the stored evaluation as it is. */
 function marketInformation(evaluation: EvaluationResult | null): PacketMarketInformation[] {
   if (!evaluation) return [];
@@ -194,6 +215,7 @@ export function buildSafetyPacket(input: SafetyPacketInput): SafetyPacket {
     attention: marginAttention(margins, exposure),
     undesirableEffects: input.complaints,
     markets: marketInformation(input.evaluation),
+    identity: labelIdentity(input.identity),
     findings: input.evaluation?.findings ?? [],
     documentsOnFile: input.documentsOnFile,
     documentsMissing: input.documentsMissing,

@@ -145,6 +145,20 @@ export interface PacketBatch {
   status: string;
 }
 
+/**
+ * What the formula's label identity says (item 10, and the directions for item 5), when the maker
+ * entered one; names and addresses joined into one line each.
+ */
+export interface PacketLabelIdentity {
+  productName: string;
+  directions: string | null;
+  shelfLifeMonths: number | null;
+  periodAfterOpeningMonths: number | null;
+  euResponsiblePerson: string | null;
+  ukResponsiblePerson: string | null;
+  usAdverseEventContact: string | null;
+}
+
 /** Everything the packet shows. `generatedAt` is the only field the hash leaves out. */
 export interface SafetyPacket {
   formula: { id: string; name: string; productType: string };
@@ -160,6 +174,8 @@ export interface SafetyPacket {
   attention: string[];
   undesirableEffects: PacketUndesirableEffect[];
   markets: PacketMarketInformation[];
+  /** The label identity of the formula; null when none is entered (absent in older packets). */
+  identity?: PacketLabelIdentity | null;
   findings: ComplianceFinding[];
   documentsOnFile: PacketDocument[];
   documentsMissing: PacketMissingDocument[];
