@@ -358,6 +358,60 @@ describe('the demo safety-assessment story', () => {
     );
   });
 
+  it('turns the lotion’s EU readiness complete but for the notification once version 2 is signed, as the journey does', async () => {
+    const person = async (email: string) =>
+      (await db().select().from(users).where(eq(users.email, email)))[0]!;
+    const owner = bearer({
+      token: tokenFor(
+        TEST_JWT_SECRET,
+        await person('owner@hollowmere.example'),
+        hollowmereId,
+        'owner',
+      ),
+    });
+    const assessorRow = await person(DEMO_ASSESSOR_EMAIL);
+    const assessor = bearer({
+      token: tokenFor(TEST_JWT_SECRET, assessorRow, hollowmereId, 'assessor'),
+    });
+    const v2 = (await lotionVersions()).find((v) => v.number === 2)!;
+    const share = await request(h.app)
+      .post('/api/assessment-shares')
+      .set(owner)
+      .send({ versionId: v2.id, assessorId: assessorRow.id });
+    expect(share.status, JSON.stringify(share.body)).toBe(201);
+    const started = await request(h.app)
+      .post('/api/assessments')
+      .set(assessor)
+      .send({ shareId: share.body.id });
+    expect(started.status, JSON.stringify(started.body)).toBe(201);
+    const id = started.body.id as string;
+    const saved = await request(h.app)
+      .put(`/api/assessments/${id}`)
+      .set(assessor)
+      .send({
+        exposure: {
+          presetKey: 'body-lotion',
+          dailyAmountGrams: 7.82,
+          retentionFactor: 1,
+          bodyWeightKg: 60,
+          source: '',
+        },
+        substances: [],
+        partB: { conclusion: 'Safe as used (test).', credentials: 'Test credentials.' },
+      });
+    expect(saved.status, JSON.stringify(saved.body)).toBe(200);
+    const signed = await request(h.app)
+      .post(`/api/assessments/${id}/sign`)
+      .set(assessor)
+      .send({ contentHash: saved.body.contentHash, confirm: true });
+    expect(signed.status, JSON.stringify(signed.body)).toBe(200);
+
+    const res = await request(h.app).get('/api/readiness').set(owner);
+    const lotion = readinessListSchema.parse(res.body).items.find((p) => p.formulaName === LOTION)!;
+    const eu = lotion.markets.find((m) => m.market === 'EU')!;
+    expect(eu.items.filter((i) => !i.done).map((i) => i.key)).toEqual(['notification']);
+  });
+
   it('changes nothing when seeded again', async () => {
     const before = await tallies();
     await seedDemo(db(), PASSWORD);
@@ -403,5 +457,9 @@ describe('the demo safety-assessment story', () => {
       auditEvents: before['auditEvents']! + 2,
     });
     expect(await seedDemoAssessments(db(), w.id)).toBe('already-seeded');
+    // The demo assessor leaves this test workshop again, so the story's memberships stay two.
+    await db()
+      .delete(memberships)
+      .where(and(eq(memberships.workshopId, w.id), eq(memberships.userId, assessor!.id)));
   });
 });
