@@ -41,6 +41,7 @@ import { LabelRunsApi } from '../label-runs-api';
 import { BARCODE_NAMES, LAYOUT_NAMES } from '../label-run-words';
 import { LabelStocksApi } from '../label-stocks-api';
 import { createPrintForm, MOVABLE_FIELDS, type PrintForm, printBody } from './print-form';
+import { AssessmentFindings } from '../../formulas/live-checks/assessment-findings';
 import { RunPreview } from './run-preview';
 import { RunRefusal } from './run-refusal';
 import { StartPositionGrid } from './start-position-grid';
@@ -58,6 +59,7 @@ const MARKET_NAMES = new Map(MARKETS.map((m) => [m.code, m.name]));
 @Component({
   selector: 'bp-print-page',
   imports: [
+    AssessmentFindings,
     ReactiveFormsModule,
     RouterLink,
     MatButton,
