@@ -186,7 +186,7 @@ describe('the demo seed on a later start', () => {
     } finally {
       hash.mockRestore();
     }
-  });
+  }, 60_000); // the first call seeds the whole demo (workspace, production, assessments, a labels PDF)
 });
 
 describe('the demo safety-assessment story', () => {
