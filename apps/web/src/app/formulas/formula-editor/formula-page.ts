@@ -11,9 +11,11 @@ import { toObservable, toSignal } from '@angular/core/rxjs-interop';
 import { NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatAnchor, MatButton } from '@angular/material/button';
 import { MatError, MatFormField, MatLabel } from '@angular/material/form-field';
+import { MatDialog } from '@angular/material/dialog';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
+import { MatSnackBar } from '@angular/material/snack-bar';
 import { RouterLink } from '@angular/router';
 import { map, of, startWith, switchMap } from 'rxjs';
 import { type Material, ROLE_SETS, todayIso } from '@batchproof/shared';
@@ -94,6 +96,8 @@ export default class FormulaPage implements LeavesSafely {
   private readonly api = inject(FormulasApi);
   private readonly session = inject(Session);
   private readonly fb = inject(NonNullableFormBuilder);
+  private readonly dialog = inject(MatDialog);
+  private readonly snackBar = inject(MatSnackBar);
   protected readonly errorMessage = errorMessage;
   protected readonly severities = SEVERITIES;
   /** The shared calendar day the server also checks against when saving. */
@@ -227,6 +231,26 @@ export default class FormulaPage implements LeavesSafely {
   /** Saves the draft on the way out of the editor. */
   saveChanges(): Promise<boolean> {
     return this.actions.save();
+  }
+
+  /** The owner shares the version on screen with an assessor member (the dialog loads lazily). */
+  protected async shareWithAssessor(): Promise<void> {
+    const v = this.version.hasValue() ? this.version.value() : undefined;
+    const name = this.formula.hasValue() ? this.formula.value().name : '';
+    if (!v) return;
+    const { ShareDialog } = await import('../../assessments/share-dialog/share-dialog');
+    this.dialog
+      .open(ShareDialog, {
+        data: { versionId: v.id, formulaName: name, versionNumber: v.number },
+        width: '32rem',
+      })
+      .afterClosed()
+      .subscribe((share) => {
+        if (share)
+          this.snackBar.open(`Version ${v.number} is shared with ${share.assessorName}.`, 'OK', {
+            duration: 5000,
+          });
+      });
   }
 
   protected saveShortcut(event: Event): void {
