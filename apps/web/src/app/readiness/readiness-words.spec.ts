@@ -29,15 +29,17 @@ describe('canadaClock', () => {
 
 describe('recordKindOfItem', () => {
   it('opens the record its key names when the item is done on the readiness page', () => {
-    expect(recordKindOfItem(item('us-listing', '/readiness'), 'US')).toBe('us-listing');
-    expect(recordKindOfItem(item('us-substantiation', '/readiness'), 'US')).toBe(
-      'us-substantiation',
-    );
+    // The keys marketReadiness gives.
+    expect(recordKindOfItem(item('listing', '/readiness'), 'US')).toBe('us-listing');
+    expect(recordKindOfItem(item('substantiation', '/readiness'), 'US')).toBe('us-substantiation');
     expect(recordKindOfItem(item('notification', '/readiness'), 'CA')).toBe('ca-notification');
+    expect(recordKindOfItem(item('notification', '/readiness'), 'UK')).toBe('uk-notification');
+    expect(recordKindOfItem(item('us-listing', '/readiness'), 'US')).toBe('us-listing');
   });
 
   it('leaves items done elsewhere to their links', () => {
-    expect(recordKindOfItem(item('eu-notification', '/labels'), 'EU')).toBeNull();
+    expect(recordKindOfItem(item('notification', '/labels'), 'EU')).toBeNull();
+    expect(recordKindOfItem(item('substantiation', '/assessments/a1'), 'US')).toBeNull();
     expect(recordKindOfItem(item('safety', '/readiness'), 'US')).toBeNull();
   });
 });

@@ -1,5 +1,5 @@
 import {
-  addDays,
+  canadaNotificationDue,
   type ComplianceMarket,
   daysBetween,
   MARKET_RECORD_KINDS,
@@ -38,8 +38,8 @@ export function recordKindsOf(market: ComplianceMarket): MarketRecordKind[] {
 
 /**
  * The record an item asks for, when the place it is done is this page's own dialog (its link is
- * `/readiness`): the market's kind its key names (`eu-notification`, or `listing` for
- * `us-listing`), else the market's only kind.
+ * `/readiness`): the market's kind its key names (`notification`, `listing`, `substantiation`,
+ * as `marketReadiness` keys them, or the whole kind), else the market's only kind.
  */
 export function recordKindOfItem(
   item: ReadinessItem,
@@ -67,10 +67,11 @@ export const CANADA_CLOCK_SOURCE = 'Cosmetic Regulations (C.R.C., c. 869), s. 30
 
 /**
  * Canada's notification clock: the form is due "at the latest 10 days after the manufacturer or
- * importer first sells a cosmetic" (Cosmetic Regulations (C.R.C., c. 869), s. 30(1)).
+ * importer first sells a cosmetic" (Cosmetic Regulations (C.R.C., c. 869), s. 30(1)); the due day
+ * is the shared rule's, so the dialog and the readiness item agree.
  */
 export function canadaClock(firstSaleOn: string, today: string): CanadaClock {
-  const dueOn = addDays(firstSaleOn, 10);
+  const dueOn = canadaNotificationDue(firstSaleOn);
   const daysLeft = daysBetween(today, dueOn);
   return { dueOn, daysLeft, overdue: daysLeft < 0 };
 }

@@ -32,10 +32,10 @@ const LOTION: ProductReadiness = {
       market: 'EU',
       complete: false,
       items: [
-        item('eu-assessment', 'Safety assessment signed for version 2', {
+        item('assessment', 'Safety assessment signed for version 2', {
           link: '/assessments/a1',
         }),
-        item('eu-notification', 'Notification reference recorded', {
+        item('notification', 'Notification reference recorded', {
           done: false,
           detail: 'No EU notification reference recorded',
           link: '/readiness',
@@ -46,7 +46,7 @@ const LOTION: ProductReadiness = {
     {
       market: 'UK',
       complete: true,
-      items: [item('uk-assessment', 'Safety assessment signed for version 2')],
+      items: [item('assessment', 'Safety assessment signed for version 2')],
     },
   ],
   records: [],
@@ -63,20 +63,26 @@ const FIZZER: ProductReadiness = {
       market: 'US',
       complete: false,
       items: [
-        item('us-labels', 'Labels printed from version 3', {
+        item('labels', 'Labels printed from version 3', {
           done: false,
           detail: 'The last labels were printed from version 2',
           link: '/labels?formulaId=f-fizzer',
           source: '21 CFR 701.3',
         }),
-        item('us-listing', 'Product listed with FDA', { source: 'FD&C Act §607' }),
+        item('listing', 'Product listed with FDA', { source: 'FD&C Act §607' }),
       ],
     },
     {
       market: 'CA',
       complete: false,
       items: [
-        item('ca-label-address', 'Name and address on the label', {
+        item('notification', 'Canadian notification recorded', {
+          done: false,
+          detail: 'Due by 2026-12-11: 10 days after the first sale on 2026-12-01',
+          link: '/readiness',
+          source: 'Cosmetic Regulations (C.R.C., c. 869), s. 30(1)',
+        }),
+        item('name-address', 'Name and address on the label', {
           done: false,
           detail: 'The label has no address',
           link: '/formulas/f-fizzer/identity',
@@ -92,7 +98,7 @@ const FIZZER: ProductReadiness = {
       recordedOn: '2026-11-02',
       firstSaleOn: null,
       smallBusinessExempt: true,
-      notes: null,
+      notes: 'Owner checked US sales for 2023-2025',
       updatedAt: '2026-11-02T10:00:00.000Z',
     },
     {
@@ -114,7 +120,7 @@ const SALTS: ProductReadiness = {
   versionId: 'v-salts-1',
   versionNumber: 1,
   markets: [
-    { market: 'US', complete: true, items: [item('us-labels', 'Labels printed from version 1')] },
+    { market: 'US', complete: true, items: [item('labels', 'Labels printed from version 1')] },
   ],
   records: [],
 };
@@ -169,8 +175,8 @@ describe('ReadinessPage', { timeout: 20_000 }, () => {
     const eu = page.market('f-lotion', 'EU');
     expect(eu.querySelector('h3')?.textContent).toContain('European Union');
     expect(eu.textContent).toContain('Incomplete: 1 missing');
-    expect(eu.querySelector('[data-item="eu-assessment"]')?.textContent).toContain('Done:');
-    const missing = eu.querySelector('[data-item="eu-notification"]')!;
+    expect(eu.querySelector('[data-item="assessment"]')?.textContent).toContain('Done:');
+    const missing = eu.querySelector('[data-item="notification"]')!;
     expect(missing.textContent).toContain('Missing:');
     expect(missing.textContent).toContain('No EU notification reference recorded');
     expect(missing.textContent).toContain('Source: Regulation (EC) No 1223/2009, Art. 13');
@@ -189,6 +195,7 @@ describe('ReadinessPage', { timeout: 20_000 }, () => {
     // The listing is recorded as exempt by the owner's answer; Canada's first sale is shown.
     const listing = page.market('f-fizzer', 'US').querySelector('[data-record="us-listing"]')!;
     expect(listing.textContent).toContain('Exempt as a small business');
+    expect(listing.textContent).toContain('Owner checked US sales for 2023-2025');
     const ca = page.market('f-fizzer', 'CA').querySelector('[data-record="ca-notification"]')!;
     expect(ca.textContent).toContain('first sale Dec 1, 2026');
   });
@@ -200,10 +207,16 @@ describe('ReadinessPage', { timeout: 20_000 }, () => {
       a.getAttribute('href'),
     ]);
     expect(links).toEqual([
-      ['us-labels', '/labels?formulaId=f-fizzer'],
-      ['ca-label-address', '/formulas/f-fizzer/identity'],
+      ['labels', '/labels?formulaId=f-fizzer'],
+      ['name-address', '/formulas/f-fizzer/identity'],
     ]);
-    expect(page.el().querySelector('[data-item="eu-assessment"] a')).toBeNull();
+    expect(page.el().querySelector('[data-item="assessment"] a')).toBeNull();
+    // A reference recorded on this page is not a link back to it; a viewer only reads what is due.
+    const caNotification = page
+      .market('f-fizzer', 'CA')
+      .querySelector('[data-item="notification"]');
+    expect(caNotification?.textContent).toContain('Due by 2026-12-11');
+    expect(caNotification?.querySelector('a, button')).toBeNull();
   });
 
   it('filters by product name and to the incomplete products only', async () => {
@@ -298,15 +311,15 @@ describe('ReadinessPage', { timeout: 20_000 }, () => {
     expect(await dialog.getContentText()).toContain('FD&C Act §612');
     const answer = await dialog.getHarness(MatRadioGroupHarness);
     expect(await answer.getCheckedValue()).toBe('yes');
-    await answer.checkRadioButton({ label: 'Not answered' });
+    await answer.checkRadioButton({ label: 'No, we list' });
     await (
       await dialog.getHarness(MatInputHarness.with({ selector: '[formControlName=reference]' }))
     ).setValue('LST-0042');
     await (await dialog.getHarness(MatButtonHarness.with({ text: 'Save' }))).click();
     const put = await sent(page.backend, (r) => r.method === 'PUT');
     expect(put.request.url).toBe('/api/readiness/f-fizzer/records/us-listing');
-    expect(put.request.body).toMatchObject({ reference: 'LST-0042', smallBusinessExempt: null });
-    put.flush({ ...FIZZER.records[0], reference: 'LST-0042', smallBusinessExempt: null });
+    expect(put.request.body).toMatchObject({ reference: 'LST-0042', smallBusinessExempt: false });
+    put.flush({ ...FIZZER.records[0], reference: 'LST-0042', smallBusinessExempt: false });
     (await sent(page.backend, (r) => r.url === '/api/readiness')).flush(LIST);
     await page.harness.fixture.whenStable();
 
