@@ -81,6 +81,9 @@ describe('Shell workshop switcher', () => {
     const menu = await loader.getHarness(MatMenuHarness.with({ selector: '.workshop-switch' }));
     await menu.open();
     expect(await menu.getItems()).toHaveLength(2);
+    expect(document.querySelector('[role=menu]')?.getAttribute('aria-label')).toBe(
+      'Your workshops',
+    );
     const options = Array.from(document.querySelectorAll('.workshop-option'));
     const line = (o: Element, part: string) =>
       o.querySelector(part)?.textContent?.replace(/\s+/g, ' ').trim();
