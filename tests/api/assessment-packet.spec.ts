@@ -2,7 +2,13 @@ import { createHash, randomUUID } from 'node:crypto';
 import { and, eq } from 'drizzle-orm';
 import request from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { PART_A_HEADINGS, PART_B_HEADINGS, productIdentitySchema } from '@batchproof/shared';
+import {
+  buildSafetyPacket,
+  PART_A_HEADINGS,
+  PART_B_HEADINGS,
+  productIdentitySchema,
+  type SafetyPacketLineInput,
+} from '@batchproof/shared';
 import {
   loadSafetyPacket,
   packetHash,
@@ -290,5 +296,76 @@ describe('the safety packet of a formula version', () => {
     await expect(
       loadSafetyPacket(ws.h.handle.db, randomUUID(), assessment, NOW),
     ).rejects.toMatchObject({ status: 404 });
+  });
+});
+
+describe('a long packet', () => {
+  const material = (i: number): SafetyPacketLineInput['material'] => ({
+    tradeName: `Material ${i}`,
+    inci: `Substance ${i}`,
+    usName: null,
+    cas: null,
+    ec: null,
+    category: 'base',
+    functions: [],
+    colourIndex: null,
+    nano: false,
+    components: [],
+    ifraCertificate: null,
+    allergenDeclaration: null,
+    supplierName: null,
+  });
+  const words = (prefix: string, n: number) =>
+    Array.from({ length: n }, (_, i) => `${prefix}${i}`).join(' ');
+
+  it('runs over pages without losing a heading, a line or the end of a long text', async () => {
+    const packet = buildSafetyPacket({
+      formula: { id: randomUUID(), name: 'Long Lotion', productType: 'lotion' },
+      version: { id: randomUUID(), number: 3, state: 'released', releasedAt: null },
+      workshop: { name: 'Test Works', address: null },
+      lines: Array.from({ length: 60 }, (_, i) => ({
+        position: i + 1,
+        grams: i + 1,
+        material: material(i),
+        certificate: null,
+      })),
+      evaluation: null,
+      identity: null,
+      notes: {
+        physicalChemical: words('pc', 1300),
+        stability: words('st', 1300),
+        microbiological: '',
+        impurities: '',
+        packaging: '',
+        normalUse: '',
+      },
+      complaints: [],
+      documentsOnFile: [],
+      documentsMissing: [],
+      batches: [],
+      assessment: {
+        id: randomUUID(),
+        status: 'draft',
+        assessorName: 'Ada Assessor',
+        exposure: null,
+        substances: [],
+        partB: {
+          conclusion: words('c', 1300),
+          labelWarnings: '',
+          reasoning: words('r', 3000),
+          credentials: 'BSc',
+        },
+        signedAt: null,
+        signedByName: null,
+        contentHash: null,
+      },
+      generatedAt: NOW.toISOString(),
+    });
+    const text = allText(await readPdf(await renderPacketPdf(packet, { draft: true })));
+    PART_A_HEADINGS.forEach((heading, i) => expect(text).toContain(`${i + 1}. ${heading}`));
+    PART_B_HEADINGS.forEach((heading, i) => expect(text).toContain(`${i + 1}. ${heading}`));
+    for (const end of ['pc1299', 'st1299', 'c1299', 'r2999', 'Material 59 Substance 59']) {
+      expect(text).toContain(end);
+    }
   });
 });

@@ -60,13 +60,39 @@ const partA = (index: number) => ({
 const sub = (text: string) => ({ text, style: 'subheading' });
 /** A heading kept on the same page as the block after it (no heading alone at a page's foot). */
 const keep = (...blocks: object[]) => ({ stack: blocks, unbreakable: true });
-/** Most table rows kept whole on one page with their heading; a longer table may break. */
-const KEEP_ROWS = 15;
-/** The blocks on one page when the table among them is short, else as they come. */
-const together = (rows: number, ...blocks: object[]): object[] =>
-  rows <= KEEP_ROWS ? [keep(...blocks)] : blocks;
+/**
+ * A rough count of the lines a block takes (a wide text ~90 characters a line, a table cell ~24),
+ * enough to tell a block that surely fits on a page from one that may not: pdfmake drops an
+ * unbreakable block taller than a page, so only short ones are kept together.
+ */
+function linesOf(node: unknown, width = 90): number {
+  if (typeof node === 'string') return Math.max(1, Math.ceil(node.length / width));
+  if (Array.isArray(node)) return node.reduce((n: number, x) => n + linesOf(x, width), 0);
+  if (node && typeof node === 'object') {
+    const o = node as {
+      table?: { body: unknown[][] };
+      stack?: unknown;
+      ul?: unknown;
+      text?: unknown;
+    };
+    if (o.table)
+      return o.table.body.reduce(
+        (n: number, row) => n + Math.max(1, ...row.map((c) => linesOf(c, 24))),
+        0,
+      );
+    if (o.stack) return linesOf(o.stack, width);
+    if (o.ul) return linesOf(o.ul, width);
+    if (typeof o.text === 'string') return linesOf(o.text, width) + 1;
+  }
+  return 1;
+}
+/** Most lines kept whole on one page with their heading (an A4 page holds about 50). */
+const KEEP_LINES = 30;
+/** The blocks on one page when they are surely short enough, else as they come. */
+const together = (...blocks: object[]): object[] =>
+  linesOf(blocks) <= KEEP_LINES ? [keep(...blocks)] : blocks;
 const notes = (label: string, text: string) =>
-  keep(sub(label), { text: orNone(text, 'Not recorded by the maker.'), margin: [0, 0, 0, 6] });
+  together(sub(label), { text: orNone(text, 'Not recorded by the maker.'), margin: [0, 0, 0, 6] });
 
 function titleBlock(packet: SafetyPacket, hash: string) {
   const a = packet.assessment;
@@ -119,7 +145,6 @@ function composition(packet: SafetyPacket) {
   const fragrances = packet.composition.filter((c) => c.fragrance);
   return [
     ...together(
-      rows.length,
       partA(0),
       table(
         ['#', 'Material', 'INCI', 'CAS', 'EC', 'Function', '% w/w'],
@@ -131,7 +156,6 @@ function composition(packet: SafetyPacket) {
     ),
     ...(fragrances.length > 0
       ? together(
-          fragrances.length,
           sub('Fragrances: supplier and certificate'),
           table(
             ['Fragrance', 'Supplier', 'Code', 'Certificate on file'],
@@ -190,7 +214,6 @@ function substances(packet: SafetyPacket) {
     ];
   });
   return together(
-    rows.length,
     partA(6),
     {
       text: `SED = A × C / 100 × DAp / 100 (SCCS Notes of Guidance). Dermal absorption not entered is taken as ${DEFAULT_DERMAL_ABSORPTION_PERCENT} % and marked "default".`,
@@ -227,7 +250,6 @@ function margins(packet: SafetyPacket) {
   ]);
   return [
     ...together(
-      rows.length,
       partA(7),
       {
         text: `MoS = PoD_sys / SED; a margin under ${MINIMUM_MARGIN_OF_SAFETY} is flagged (SCCS Notes of Guidance).`,
@@ -252,7 +274,6 @@ function margins(packet: SafetyPacket) {
 
 function undesirableEffects(packet: SafetyPacket) {
   return together(
-    packet.undesirableEffects.length,
     partA(8),
     table(
       ['Received', 'What happened', 'Body area', 'Serious', 'Batch', 'Status'],
@@ -274,7 +295,7 @@ const SEVERITY_WORDS = { block: 'Blocks', warn: 'Check', info: 'Note' } as const
 
 function marketInformation(m: SafetyPacket['markets'][number]) {
   return [
-    keep(
+    ...together(
       sub(`Label copy: ${m.market}`),
       { text: orNone(m.declaration, 'No declaration.'), fontSize: 9, margin: [0, 0, 0, 2] },
       m.warnings.length > 0
@@ -282,7 +303,6 @@ function marketInformation(m: SafetyPacket['markets'][number]) {
         : { text: 'No warnings required by the checks.', italics: true, fontSize: 9 },
     ),
     ...together(
-      m.colourants.length,
       sub(`Colourants: ${m.market}`),
       table(
         ['Colourant', 'CI', 'Verdict', '%', 'Conditions'],
@@ -298,7 +318,6 @@ function marketInformation(m: SafetyPacket['markets'][number]) {
       ),
     ),
     ...together(
-      m.allergens.length,
       sub(`Fragrance allergens: ${m.market}`),
       table(
         ['Allergen', '% in product', 'Threshold', 'Named on the label'],
@@ -362,7 +381,6 @@ function productInformation(packet: SafetyPacket) {
     ...identityFacts(packet),
     ...packet.markets.flatMap(marketInformation),
     ...together(
-      findings.length,
       sub('Findings of the compliance checks'),
       table(
         ['', 'Market', 'About', 'Finding'],
@@ -377,7 +395,6 @@ function productInformation(packet: SafetyPacket) {
       ),
     ),
     ...together(
-      documentsOnFile.length,
       sub('Supplier documents on file'),
       table(
         ['Material', 'Document', 'Title', 'Issued'],
@@ -387,7 +404,6 @@ function productInformation(packet: SafetyPacket) {
       ),
     ),
     ...together(
-      documentsMissing.length,
       sub('Supplier documents missing'),
       table(
         ['Material', 'Missing'],
@@ -397,7 +413,6 @@ function productInformation(packet: SafetyPacket) {
       ),
     ),
     ...together(
-      batches.length,
       sub('Batches made from this version'),
       table(
         ['Batch code', 'Made on', 'Units made', 'State'],
@@ -437,7 +452,7 @@ function partB(packet: SafetyPacket) {
         { text, margin: [0, 0, 0, 6] },
       ];
       // A short text stays with its heading; a long one may run over pages.
-      return text.length <= 800 ? [keep(...blocks)] : blocks;
+      return together(...blocks);
     }),
     a.status === 'signed'
       ? {
@@ -490,13 +505,13 @@ export function packetDocument(packet: SafetyPacket, opts: { draft: boolean; has
         margin: [0, 0, 0, 2],
       },
       ...composition(packet),
-      keep(partA(1), notes('Physical and chemical characteristics', n.physicalChemical)),
-      notes('Stability', n.stability),
-      keep(partA(2), notes('Microbiological quality', n.microbiological)),
-      keep(partA(3), notes('Impurities and traces', n.impurities)),
-      notes('Packaging material', n.packaging),
-      keep(partA(4), notes('Normal and reasonably foreseeable use', n.normalUse)),
-      notes('Directions for use on the label', packet.identity?.directions ?? ''),
+      ...together(partA(1), ...notes('Physical and chemical characteristics', n.physicalChemical)),
+      ...notes('Stability', n.stability),
+      ...together(partA(2), ...notes('Microbiological quality', n.microbiological)),
+      ...together(partA(3), ...notes('Impurities and traces', n.impurities)),
+      ...notes('Packaging material', n.packaging),
+      ...together(partA(4), ...notes('Normal and reasonably foreseeable use', n.normalUse)),
+      ...notes('Directions for use on the label', packet.identity?.directions ?? ''),
       ...exposure(packet),
       ...substances(packet),
       ...margins(packet),
