@@ -473,6 +473,21 @@ export function workspaceAccessCases(ctx: () => { h: ApiHarness; a: BuiltWorksho
       expected: write(200, 404),
     },
     {
+      route: 'GET /api/readiness',
+      prepare: async () => ({ method: 'get', path: '/api/readiness' }),
+      // Another workshop's owner reads their own workshop's readiness.
+      expected: read(200, 200),
+    },
+    {
+      route: 'PUT /api/readiness/:formulaId/records/:kind',
+      prepare: async () => ({
+        method: 'put',
+        path: `/api/readiness/${await formula()}/records/eu-notification`,
+        body: { reference: 'CPNP-1', recordedOn: '2026-11-30' },
+      }),
+      expected: write(200, 404),
+    },
+    {
       // Production prints from batches, which do not exist yet.
       route: 'POST /api/label-runs (a released formula of workshop A)',
       prepare: async () => ({
