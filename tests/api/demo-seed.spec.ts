@@ -373,11 +373,16 @@ describe('the demo safety-assessment story', () => {
     const assessor = bearer({
       token: tokenFor(TEST_JWT_SECRET, assessorRow, hollowmereId, 'assessor'),
     });
-    const v2 = (await lotionVersions()).find((v) => v.number === 2)!;
+    const [v1, v2] = await lotionVersions();
+    // The same exposure as version 1's signed assessment.
+    const [{ exposure: signedExposure }] = (await db()
+      .select({ exposure: assessments.exposure })
+      .from(assessments)
+      .where(eq(assessments.versionId, v1!.id))) as [{ exposure: unknown }];
     const share = await request(h.app)
       .post('/api/assessment-shares')
       .set(owner)
-      .send({ versionId: v2.id, assessorId: assessorRow.id });
+      .send({ versionId: v2!.id, assessorId: assessorRow.id });
     expect(share.status, JSON.stringify(share.body)).toBe(201);
     const started = await request(h.app)
       .post('/api/assessments')
@@ -389,13 +394,7 @@ describe('the demo safety-assessment story', () => {
       .put(`/api/assessments/${id}`)
       .set(assessor)
       .send({
-        exposure: {
-          presetKey: 'body-lotion',
-          dailyAmountGrams: 7.82,
-          retentionFactor: 1,
-          bodyWeightKg: 60,
-          source: '',
-        },
+        exposure: signedExposure,
         substances: [],
         partB: { conclusion: 'Safe as used (test).', credentials: 'Test credentials.' },
       });

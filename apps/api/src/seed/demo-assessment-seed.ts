@@ -2,6 +2,7 @@ import { and, asc, count, eq, inArray } from 'drizzle-orm';
 import {
   addDays,
   assessmentUpdateSchema,
+  DEFAULT_BODY_WEIGHT_KG,
   findExposureDefault,
   formulaCreateSchema,
   labelRunCreateSchema,
@@ -183,7 +184,7 @@ function presetExposure(key: string): ExposureInput {
     presetKey: preset.key,
     dailyAmountGrams: preset.dailyAmountGrams,
     retentionFactor: preset.retentionFactor,
-    bodyWeightKg: 60, // SCCS Notes of Guidance default adult body weight (see DEFAULT_BODY_WEIGHT_KG)
+    bodyWeightKg: DEFAULT_BODY_WEIGHT_KG,
     source: preset.source,
   };
 }
