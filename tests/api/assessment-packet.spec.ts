@@ -173,6 +173,7 @@ describe('the safety packet of a formula version', () => {
     expect(text).toContain('65.57 %');
     expect(text).toContain('32.79 %');
     expect(text).toContain('Scent Supply Co');
+    expect(text).toContain('18.67 g/day');
     expect(text).toContain('The product is safe as labelled.');
     expect(text).toContain(packetHash(packet));
     expect(pages.length).toBeGreaterThan(1);

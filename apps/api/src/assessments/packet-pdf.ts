@@ -34,6 +34,8 @@ export function numberText(value: number): string {
   return value >= 100 ? Math.round(value).toString() : Number(value.toPrecision(3)).toString();
 }
 
+/** A value the assessor typed, as typed (float noise trimmed). */
+const entered = (value: number) => String(Number(value.toPrecision(8)));
 const orNone = (text: string | null | undefined, none = '—') => (text && text.trim() ? text : none);
 const when = (iso: string) => `${iso.slice(0, 10)} ${iso.slice(11, 16)} UTC`;
 
@@ -183,9 +185,9 @@ function exposure(packet: SafetyPacket) {
       'Chosen as',
       e.presetLabel ? `${e.presetLabel} (shipped default)` : "The assessor's own values",
     ],
-    ['Daily amount', `${numberText(e.input.dailyAmountGrams)} g/day`],
-    ['Retention factor', numberText(e.input.retentionFactor)],
-    ['Body weight', `${numberText(e.input.bodyWeightKg)} kg`],
+    ['Daily amount', `${entered(e.input.dailyAmountGrams)} g/day`],
+    ['Retention factor', entered(e.input.retentionFactor)],
+    ['Body weight', `${entered(e.input.bodyWeightKg)} kg`],
     [
       'A (exposure to the product)',
       `${numberText(e.exposureMgPerKgDay)} mg/kg bw/day${e.defaulted ? ' (default)' : ''}`,
