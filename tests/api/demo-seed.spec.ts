@@ -331,6 +331,30 @@ describe('the demo safety-assessment story', () => {
       .from(labelRuns)
       .where(eq(labelRuns.versionId, versions[1]!.id));
     expect(runs).toEqual([{ status: 'ready', markets: ['EU'] }]);
+
+    // Version 2 shows that its assessment is missing, naming the version that was assessed.
+    const [owner] = await db()
+      .select({ id: users.id })
+      .from(users)
+      .where(eq(users.email, 'owner@hollowmere.example'));
+    const [{ formulaId }] = (await db()
+      .select({ formulaId: formulaVersions.formulaId })
+      .from(formulaVersions)
+      .where(eq(formulaVersions.id, versions[1]!.id))) as [{ formulaId: string }];
+    const view = await request(h.app)
+      .get(`/api/formulas/${formulaId}/versions/2`)
+      .set(bearer({ token: tokenFor(TEST_JWT_SECRET, owner!, hollowmereId, 'owner') }));
+    expect(view.status).toBe(200);
+    const missing = view.body.assessmentFindings as {
+      code: string;
+      market: string;
+      message: string;
+    }[];
+    expect(missing.map((f) => [f.code, f.market]).sort()).toEqual([
+      ['SAFETY_ASSESSMENT_MISSING', 'EU'],
+      ['SAFETY_ASSESSMENT_MISSING', 'UK'],
+    ]);
+    expect(missing[0]!.message).toMatch(/version 1 was assessed/i);
   });
 
   it('shows the lotion’s EU readiness missing only the assessment and the notification; another product’s notification is done', async () => {
