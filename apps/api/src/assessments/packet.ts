@@ -198,16 +198,15 @@ export async function loadSafetyPacket(
   const { version, formula } = found;
   const lines = await findLines(db, workshopId, version.id);
   const materialIds = [...new Set(lines.map((l) => l.materialId))];
-  const [materialRows, docs, complaintRows, batchRows, notes, workshop, identity] =
-    await Promise.all([
-      findMaterials(db, workshopId, materialIds),
-      materialDocuments(db, workshopId, materialIds),
-      complaintsOf(db, workshopId, formula.id),
-      batchesOf(db, workshopId, version.id),
-      notesOf(db, workshopId, version.id),
-      workshopOf(db, workshopId),
-      findProductIdentity(db, workshopId, formula.id),
-    ]);
+  // One after another: `db` may be a transaction, whose single client must not run queries
+  // concurrently (node-postgres warns now and will refuse in its next major version).
+  const materialRows = await findMaterials(db, workshopId, materialIds);
+  const docs = await materialDocuments(db, workshopId, materialIds);
+  const complaintRows = await complaintsOf(db, workshopId, formula.id);
+  const batchRows = await batchesOf(db, workshopId, version.id);
+  const notes = await notesOf(db, workshopId, version.id);
+  const workshop = await workshopOf(db, workshopId);
+  const identity = await findProductIdentity(db, workshopId, formula.id);
   const byId = new Map(materialRows.map((m) => [m.id, m]));
   const evaluation =
     version.evaluation ??
