@@ -26,15 +26,15 @@ const squash = (t: string | null | undefined) => (t ?? '').replace(/\s+/g, ' ').
 const isCreate = (r: HttpRequest<unknown>) => r.method === 'POST' && r.url === '/api/label-runs';
 
 /** Opens the print page for version 1 and answers its reads: formula, version, stocks. */
-async function openPrint(role: Role = 'formulator') {
+async function openPrint(role: Role = 'formulator', version = RELEASED) {
   const page = await openAs(
     role,
     ROUTES,
     `/labels/print?formula=${FORMULA_ID}&version=1`,
     PrintPage,
   );
-  page.backend.expectOne(`/api/formulas/${FORMULA_ID}`).flush(aFormula([RELEASED]));
-  page.backend.expectOne(`/api/formulas/${FORMULA_ID}/versions/1`).flush(RELEASED);
+  page.backend.expectOne(`/api/formulas/${FORMULA_ID}`).flush(aFormula([version]));
+  page.backend.expectOne(`/api/formulas/${FORMULA_ID}/versions/1`).flush(version);
   (await nextRequest(page.backend, (r) => r.url === '/api/label-stocks')).flush({
     items: [LETTER_30, ROLL_2X1],
   });
@@ -128,6 +128,38 @@ describe('PrintPage', () => {
       outerPackConfirmed: false,
     });
     expect(req.request.headers.has('Idempotency-Key')).toBe(true);
+  });
+
+  it('warns that the version has no signed safety assessment, naming the one that was, with the safety caution', async () => {
+    const unassessed = {
+      ...RELEASED,
+      assessmentFindings: [
+        {
+          code: 'SAFETY_ASSESSMENT_MISSING' as const,
+          severity: 'warn' as const,
+          market: 'EU' as const,
+          subject: 'Version 1',
+          message:
+            'Version 1 has no signed safety assessment; version 2 was assessed. A qualified safety assessor must assess and sign this version before it is sold in the EU.',
+          source: 'Regulation (EC) No 1223/2009, Art. 10 and Annex I',
+          status: 'C' as const,
+          lines: [],
+        },
+      ],
+    };
+    const page = await openPrint('formulator', unassessed);
+    const section = page.el.querySelector('bp-assessment-findings');
+    expect(squash(section?.textContent)).toContain('version 2 was assessed');
+    expect(squash(section?.querySelector('[role="note"]')?.textContent)).toContain(
+      'Do not sell this version in these markets until its assessment is signed',
+    );
+    // Printing stays open: the warning informs, it does not block.
+    expect(page.el.querySelector('form.print')).not.toBeNull();
+  });
+
+  it('shows no assessment warning for a version whose assessment is signed', async () => {
+    const page = await openPrint('formulator', { ...RELEASED, assessmentFindings: [] });
+    expect(squash(page.el.querySelector('bp-assessment-findings')?.textContent)).toBe('');
   });
 
   it('moves the start position with the arrow keys', async () => {
