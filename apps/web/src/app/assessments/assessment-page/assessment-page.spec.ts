@@ -10,11 +10,15 @@ import { MatSelectHarness } from '@angular/material/select/testing';
 import { RouterTestingHarness } from '@angular/router/testing';
 import {
   type AssessmentDetail,
+  type AssessmentUpdate,
+  exposureDefaultsFor,
   PART_A_HEADINGS,
   PART_B_HEADINGS,
   type Role,
 } from '@batchproof/shared';
 import { signedInAs } from '../../auth/signed-in-as';
+import { unsavedChangesGuard } from '../../forms/unsaved-changes';
+import { chooseOnLeaving, Elsewhere, leave } from '../../forms/unsaved-changes-testing';
 import { ASSESSMENT_ID, aPacket, anAssessment, HASH } from '../assessments-testing';
 import AssessmentPage, { PACKET_CHANGED_NOTICE } from './assessment-page';
 
@@ -26,7 +30,8 @@ const sent = (backend: HttpTestingController, match: (r: HttpRequest<unknown>) =
 async function open(role: Role, detail: AssessmentDetail) {
   const backend = await signedInAs(role, [
     { path: 'assessments', children: [] },
-    { path: 'assessments/:id', component: AssessmentPage },
+    { path: 'assessments/:id', component: AssessmentPage, canDeactivate: [unsavedChangesGuard] },
+    { path: 'elsewhere', component: Elsewhere },
   ]);
   const harness = await RouterTestingHarness.create();
   await harness.navigateByUrl(`/assessments/${ASSESSMENT_ID}`);
@@ -160,7 +165,10 @@ describe('AssessmentPage', { timeout: 30_000 }, () => {
     await exposure!.open();
     // The defaults for a lotion come first, in their own group.
     const groups = await exposure!.getOptionGroups();
-    if (groups.length > 1) expect(await groups[0]!.getLabelText()).toBe('For this product type');
+    expect(await Promise.all(groups.map((g) => g.getLabelText()))).toEqual([
+      'For this product type',
+      'Other product types',
+    ]);
     await exposure!.clickOptions({ text: 'My own values' });
     await page.type('Daily amount', '7.82');
     await page.type('Retention factor', '1');
@@ -233,6 +241,33 @@ describe('AssessmentPage', { timeout: 30_000 }, () => {
     expect(page.el().querySelector('[role=alert]')?.textContent).toContain(
       'Check the highlighted fields.',
     );
+  });
+
+  it('takes a shipped default for the product type as published, with its source', async () => {
+    const preset = exposureDefaultsFor('lotion')[0]!;
+    const page = await open('assessor', anAssessment());
+    const exposure = await (
+      await page.field('Exposure to the product')
+    ).getControl(MatSelectHarness);
+    await exposure!.open();
+    await exposure!.clickOptions({ text: preset.label });
+    expect(page.el().querySelector('[data-testid=preset]')?.textContent).toContain(preset.source);
+    expect(page.el().querySelector('[data-testid=exposure-a]')?.textContent).toContain(
+      `A = ${preset.exposureMgPerKgDay}`,
+    );
+    const saving = (
+      await page.loader.getHarness(MatButtonHarness.with({ text: /^save\s*Save$/ }))
+    ).click();
+    const put = await sent(page.backend, (r) => r.url === URL && r.method === 'PUT');
+    expect((put.request.body as AssessmentUpdate).exposure).toEqual({
+      presetKey: preset.key,
+      dailyAmountGrams: preset.dailyAmountGrams,
+      retentionFactor: preset.retentionFactor,
+      bodyWeightKg: 60,
+      source: preset.source,
+    });
+    put.flush(anAssessment());
+    await saving;
   });
 
   it('refuses in the browser own values without a source, beside the field, sending nothing', async () => {
@@ -314,5 +349,17 @@ describe('AssessmentPage', { timeout: 30_000 }, () => {
       PACKET_CHANGED_NOTICE,
     );
     expect(page.el().querySelector('[data-testid=signed-note]')).toBeNull();
+  });
+
+  it('asks before leaving with unsaved changes and stays when asked, saving nothing', async () => {
+    const page = await open('assessor', anAssessment());
+    await page.type('Assessment conclusion', 'Safe as labelled.');
+    const leaving = leave();
+    await chooseOnLeaving(
+      TestbedHarnessEnvironment.documentRootLoader(page.harness.fixture),
+      /Stay on this page/,
+    );
+    expect(await leaving).toBe(false);
+    page.backend.expectNone((r) => r.method === 'PUT');
   });
 });
