@@ -1,6 +1,6 @@
 import jwt from 'jsonwebtoken';
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { startApiHarness, TEST_JWT_SECRET, type ApiHarness } from '../support/api-harness';
 import { bearer } from '../support/auth-header';
 import { firstLink } from '../support/mail-catcher';
@@ -202,6 +202,24 @@ describe('removing one membership', () => {
   });
 });
 
+describe('a password reset for a person in two workshops', () => {
+  it('is sent, sets the new password and ends the sessions of both workshops', async () => {
+    const { inAlder, inBirch } = await twoWorkshops();
+    await request(h.app).post('/api/auth/password-reset/request').send({ email: inAlder.email });
+    const resetMail = () =>
+      h.mail.received.find((m) => m.to.includes(inAlder.email) && /reset your/i.test(m.subject));
+    await vi.waitFor(() => expect(resetMail()).toBeDefined(), { timeout: 10_000 });
+    const token = decodeURIComponent(firstLink(resetMail()!).split('/reset-password/')[1]!);
+    const done = await request(h.app)
+      .post('/api/auth/password-reset/complete')
+      .send({ token, password: 'a-brand-new-pass' });
+    expect(done.status).toBe(204);
+    expect((await me(inAlder.token)).status).toBe(401);
+    expect((await me(inBirch.token)).status).toBe(401);
+    expect((await signIn(inAlder.email, 'a-brand-new-pass')).status).toBe(200);
+  });
+});
+
 describe('inviting an address that already has an account', () => {
   async function invite(owner: BuiltMember, email: string, role = 'assessor') {
     const res = await request(h.app)
@@ -289,5 +307,23 @@ describe('inviting an address that already has an account', () => {
     expect(
       (await request(h.app).get(`/api/auth/invitations/${encodeURIComponent(token)}`)).status,
     ).toBe(200);
+  });
+});
+
+describe('rate limit of switching', () => {
+  it('counts switches with refreshes per address, and answers 429 past the limit', async () => {
+    const limited = await startApiHarness({ rateLimits: { refreshPerAddress: 2 } });
+    try {
+      const { alder, birch, inBirch } = await twoWorkshops();
+      const send = (workshopId: string) =>
+        request(limited.app).post('/api/auth/workshop').set(bearer(inBirch)).send({ workshopId });
+      expect((await send(alder.id)).status).toBe(200);
+      expect((await send(birch.id)).status).toBe(200);
+      const third = await send(alder.id);
+      expect(third.status).toBe(429);
+      expect(third.body.error.code).toBe('rate_limited');
+    } finally {
+      await limited.close();
+    }
   });
 });
