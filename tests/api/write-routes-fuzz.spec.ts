@@ -299,6 +299,12 @@ const cases: FuzzCase[] = [
     send: json('post'),
   },
   {
+    route: 'POST /api/auth/workshop',
+    // Switching into the workshop the owner is already in: a valid body that changes nothing.
+    prepare: async () => ({ path: '/api/auth/workshop', valid: { workshopId: w.id } }),
+    send: json('post'),
+  },
+  {
     route: 'POST /api/auth/invitations/accept',
     prepare: async () => ({
       path: '/api/auth/invitations/accept',
