@@ -242,7 +242,7 @@ describe('ReadinessPage', { timeout: 20_000 }, () => {
   it('records a notification: PUTs the form, shows the field errors, then reads the readiness again', async () => {
     const page = await openAs('owner');
     await (
-      await page.root.getHarness(MatButtonHarness.with({ text: /Record the EU notification/ }))
+      await page.root.getHarness(MatButtonHarness.with({ text: /Record it: EU notification/ }))
     ).click();
     const dialog = await page.root.getHarness(MatDialogHarness);
     expect(await dialog.getTitleText()).toBe('EU notification · Everyday Body Lotion');
