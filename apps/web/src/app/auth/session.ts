@@ -4,6 +4,7 @@ import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router } from '@angular/router';
 import {
   catchError,
+  defer,
   finalize,
   firstValueFrom,
   from,
@@ -105,8 +106,9 @@ export class Session {
    * "Now working in …" when done. A refusal (not one of their workshops) errors as ApiError.
    */
   switchWorkshop(workshopId: string): Observable<User | null> {
-    const home = this.atHome() ? Promise.resolve(true) : this.router.navigateByUrl('/');
-    return from(home).pipe(
+    // Nothing happens until subscribed, like every other call here.
+    const home = defer(() => (this.atHome() ? of(true) : from(this.router.navigateByUrl('/'))));
+    return home.pipe(
       switchMap((left) => {
         if (!left) return of(null);
         const body: SwitchWorkshop = { workshopId };
