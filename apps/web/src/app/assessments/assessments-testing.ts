@@ -129,7 +129,27 @@ export function aPacket(overrides: Partial<SafetyPacket> = {}): SafetyPacket {
         ],
       },
     ],
-    findings: [],
+    identity: {
+      productName: 'Everyday Body Lotion',
+      directions: 'Smooth onto clean skin.',
+      shelfLifeMonths: 12,
+      periodAfterOpeningMonths: 6,
+      euResponsiblePerson: 'Hollowmere Bathworks, 1 Mill Lane',
+      ukResponsiblePerson: null,
+      usAdverseEventContact: null,
+    },
+    findings: [
+      {
+        code: 'SAFETY_ASSESSMENT_MISSING',
+        severity: 'warn',
+        market: 'EU',
+        subject: 'Everyday Body Lotion',
+        message: 'Version 2 has no signed safety assessment.',
+        source: 'Regulation (EC) No 1223/2009, Article 10',
+        status: 'C',
+        lines: [],
+      },
+    ],
     documentsOnFile: [
       {
         materialName: 'Meadow fragrance oil',

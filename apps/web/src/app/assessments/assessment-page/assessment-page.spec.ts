@@ -114,6 +114,9 @@ describe('AssessmentPage', { timeout: 30_000 }, () => {
     expect(text).toContain('Avoid contact with eyes.');
     expect(text).toContain('Safety data sheet');
     expect(text).toContain('261101-EBL-1');
+    expect(text).toContain('Smooth onto clean skin.');
+    expect(text).toContain('Hollowmere Bathworks, 1 Mill Lane');
+    expect(text).toContain('Version 2 has no signed safety assessment.');
     expect(text).toContain('the qualified safety assessor judges and signs');
     // Nothing to type into, and only the PDF to act on.
     expect(page.el().querySelectorAll('input, textarea, mat-select').length).toBe(0);

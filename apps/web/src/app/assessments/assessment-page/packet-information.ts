@@ -3,6 +3,7 @@ import { ChangeDetectionStrategy, Component, input } from '@angular/core';
 import { MatIcon } from '@angular/material/icon';
 import type { ColourantVerdict, SafetyPacket } from '@batchproof/shared';
 import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
+import { SeverityLabel } from '../../formulas/severity/severity-label';
 
 const VERDICT_WORDS: Record<ColourantVerdict['verdict'], { word: string; icon: string }> = {
   permitted: { word: 'Permitted', icon: 'check_circle' },
@@ -19,9 +20,33 @@ const VERDICT_WORDS: Record<ColourantVerdict['verdict'], { word: string; icon: s
  */
 @Component({
   selector: 'bp-packet-information',
-  imports: [CalendarDayPipe, DecimalPipe, MatIcon],
+  imports: [CalendarDayPipe, DecimalPipe, MatIcon, SeverityLabel],
   template: `
     @let p = packet();
+    @if (p.identity; as id) {
+      <dl class="identity" aria-label="Product identity">
+        <dt>Product name</dt>
+        <dd>{{ id.productName }}</dd>
+        <dt>Shelf life</dt>
+        <dd>{{ id.shelfLifeMonths !== null ? id.shelfLifeMonths + ' months' : 'Not given' }}</dd>
+        <dt>Period after opening</dt>
+        <dd>
+          {{
+            id.periodAfterOpeningMonths !== null
+              ? id.periodAfterOpeningMonths + ' months'
+              : 'Not given'
+          }}
+        </dd>
+        <dt>EU responsible person</dt>
+        <dd>{{ id.euResponsiblePerson ?? 'Not named' }}</dd>
+        <dt>UK responsible person</dt>
+        <dd>{{ id.ukResponsiblePerson ?? 'Not named' }}</dd>
+        <dt>US adverse event contact</dt>
+        <dd>{{ id.usAdverseEventContact ?? 'Not named' }}</dd>
+      </dl>
+    } @else {
+      <p class="muted">No product identity entered for the label yet.</p>
+    }
     @for (m of p.markets; track m.market) {
       <section class="market" [attr.aria-label]="'Label information for ' + m.market">
         <h4>{{ m.market }}</h4>
@@ -104,6 +129,18 @@ const VERDICT_WORDS: Record<ColourantVerdict['verdict'], { word: string; icon: s
       <p class="muted">No market chosen for this version.</p>
     }
 
+    @if (p.findings.length > 0) {
+      <h4>Compliance checks of this version</h4>
+      <ul aria-label="Compliance checks">
+        @for (f of p.findings; track $index) {
+          <li>
+            <bp-severity-label [severity]="f.severity" />
+            {{ f.market ?? 'Every market' }} · {{ f.subject }}: {{ f.message }}
+            <span class="source">{{ f.source }}</span>
+          </li>
+        }
+      </ul>
+    }
     <h4>Supplier documents on file</h4>
     @if (p.documentsOnFile.length > 0) {
       <ul aria-label="Documents on file">
@@ -205,6 +242,19 @@ const VERDICT_WORDS: Record<ColourantVerdict['verdict'], { word: string; icon: s
       height: 18px;
       font-size: 18px;
       vertical-align: text-bottom;
+    }
+    .identity {
+      display: grid;
+      grid-template-columns: minmax(0, auto) minmax(0, 1fr);
+      gap: 4px 16px;
+      margin: 0 0 8px;
+    }
+    .identity dt {
+      font-weight: 600;
+    }
+    .identity dd {
+      margin: 0;
+      overflow-wrap: anywhere;
     }
     .condition {
       display: block;
