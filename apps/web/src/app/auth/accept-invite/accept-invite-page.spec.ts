@@ -263,19 +263,24 @@ describe('AcceptInvitePage', () => {
       );
       await ((await field.getControl()) as MatInputHarness).setValue('not-it');
       await (await page.loader.getHarness(MatButtonHarness.with({ text: /^Join/ }))).click();
+      // As the API answers a wrong password: 401 with the message on the password field, and
+      // no refresh attempted (the invitation route is a signed-out one).
       page.backend.expectOne('/api/auth/invitations/accept').flush(
         {
           error: {
-            code: 'validation_failed',
-            message: 'Check the highlighted fields.',
-            fieldErrors: { password: ['That password is not right for this account.'] },
+            code: 'unauthenticated',
+            message: 'That password does not match the invited account.',
+            fieldErrors: { password: ['That password does not match the invited account.'] },
           },
         },
-        { status: 400, statusText: 'Bad Request' },
+        { status: 401, statusText: 'Unauthorized' },
       );
       await page.harness.fixture.whenStable();
 
-      expect(await field.getTextErrors()).toEqual(['That password is not right for this account.']);
+      expect(await field.getTextErrors()).toEqual([
+        'That password does not match the invited account.',
+      ]);
+      page.backend.expectNone('/api/auth/refresh');
       expect(TestBed.inject(Session).signedIn()).toBe(false);
     });
   });

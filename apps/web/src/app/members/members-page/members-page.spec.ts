@@ -232,8 +232,8 @@ describe('MembersPage', () => {
       {
         error: {
           code: 'conflict',
-          message: 'tomas@example.com is already a member of this workshop.',
-          fieldErrors: { email: ['tomas@example.com is already a member of this workshop.'] },
+          message: 'This e-mail already belongs to a member of this workshop.',
+          fieldErrors: { email: ['This e-mail already belongs to a member of this workshop.'] },
         },
       },
       { status: 409, statusText: 'Conflict' },
@@ -241,7 +241,7 @@ describe('MembersPage', () => {
     await page.harness.fixture.whenStable();
 
     expect(await email.getTextErrors()).toEqual([
-      'tomas@example.com is already a member of this workshop.',
+      'This e-mail already belongs to a member of this workshop.',
     ]);
   });
 
