@@ -67,6 +67,10 @@ async function announce() {
     production@hollowmere.example   assessor@hollowmere.example
     viewer@hollowmere.example
 
+  The assessor also assesses for a second workshop, Tidewrack Soap Co., and opens it on
+  sign-in (switch workshop from the toolbar). Its owner, same password:
+    owner@tidewrack.example
+
   E-mails the app sends (invitations, password resets) go to the local fake mail
   server on 127.0.0.1:${smtpPort}; read them with:  npm run mail
 
