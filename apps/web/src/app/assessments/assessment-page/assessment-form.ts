@@ -105,9 +105,15 @@ export function updateBody(
   };
 }
 
-/** Where the contract's paths live in the form: a missing exposure is the picker's message. */
-export const assessmentPath = (path: string) =>
-  path === 'exposure' || path === 'exposure.presetKey' ? 'exposure.choice' : path;
+/**
+ * Where the contract's paths live in the form: a missing exposure is the picker's message; a
+ * substance the packet no longer holds has no field of its own, so its message goes above the form.
+ */
+export const assessmentPath = (path: string) => {
+  if (path === 'exposure' || path === 'exposure.presetKey') return 'exposure.choice';
+  if (/^substances\.\d+\.substanceKey$/.test(path)) return 'no field';
+  return path;
+};
 
 /** A (mg/kg bw/day) for what the form holds, or null while it is not chosen or not valid. */
 export function liveExposure(value: AssessmentFormValue, detail: AssessmentDetail): number | null {

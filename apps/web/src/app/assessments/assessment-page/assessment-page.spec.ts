@@ -365,4 +365,37 @@ describe('AssessmentPage', { timeout: 30_000 }, () => {
     expect(await leaving).toBe(false);
     page.backend.expectNone((r) => r.method === 'PUT');
   });
+
+  it("puts a refused signature's reasons beside the exposure picker and the conclusion", async () => {
+    const page = await open('assessor', anAssessment());
+    const signing = (
+      await page.loader.getHarness(MatButtonHarness.with({ text: /Sign…/ }))
+    ).click();
+    const root = TestbedHarnessEnvironment.documentRootLoader(page.harness.fixture);
+    const dialog = await vi.waitFor(() => root.getHarness(MatDialogHarness));
+    await (await dialog.getHarness(MatCheckboxHarness)).check();
+    await (await dialog.getHarness(MatButtonHarness.with({ text: /^verified\s*Sign$/ }))).click();
+    (await sent(page.backend, (r) => r.url === `${URL}/sign`)).flush(
+      {
+        error: {
+          code: 'validation_failed',
+          message: 'Some fields need attention.',
+          fieldErrors: {
+            exposure: ['Enter the exposure to the product before signing'],
+            'partB.conclusion': ['Write the assessment conclusion before signing'],
+          },
+        },
+      },
+      { status: 400, statusText: 'Bad Request' },
+    );
+    await signing;
+    await page.harness.fixture.whenStable();
+    expect(await (await page.field('Exposure to the product')).getTextErrors()).toEqual([
+      'Enter the exposure to the product before signing',
+    ]);
+    expect(await (await page.field('Assessment conclusion')).getTextErrors()).toEqual([
+      'Write the assessment conclusion before signing',
+    ]);
+    expect(page.el().querySelector('[data-testid=signed-note]')).toBeNull();
+  });
 });
