@@ -199,8 +199,7 @@ const VERDICT_WORDS: Record<ColourantVerdict['verdict'], { word: string; icon: s
       font: var(--mat-sys-title-small);
     }
     .declaration,
-    li,
-    .source {
+    li {
       overflow-wrap: anywhere;
     }
     .label {

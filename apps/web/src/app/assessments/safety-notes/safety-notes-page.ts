@@ -123,7 +123,7 @@ const FIELDS: readonly { key: keyof SafetyNotes; label: string; item: number; hi
         aria-label="Safety notes"
       >
         @for (field of fields; track field.key) {
-          <mat-form-field>
+          <mat-form-field subscriptSizing="dynamic">
             <mat-label>{{ field.item }}. {{ field.label }}</mat-label>
             <textarea matInput [formControlName]="field.key" rows="3"></textarea>
             <mat-hint>{{ field.hint }}</mat-hint>
