@@ -1,6 +1,5 @@
 import { HttpClient } from '@angular/common/http';
 import { computed, inject, Injectable, signal } from '@angular/core';
-import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router } from '@angular/router';
 import {
   catchError,
@@ -43,7 +42,6 @@ const SIGNED_IN_HINT = 'batchproof.signed-in';
 export class Session {
   private readonly http = inject(HttpClient);
   private readonly router = inject(Router);
-  private readonly snackBar = inject(MatSnackBar);
   private readonly current = signal<SessionBody | null>(null);
   private refreshing: Observable<string | null> | null = null;
   private restoring: Promise<void> | null = null;
@@ -102,8 +100,9 @@ export class Session {
    * can still ask (and the member can stay: then nothing is switched and the result is null), and
    * so no page of the workshop left stays open; then `POST /api/auth/workshop` answers a new
    * session (access token, refresh cookie, user) for that workshop, which replaces this one.
-   * Everything kept per workshop follows {@link workshopId}; the shell rebuilds the page. Says
-   * "Now working in …" when done. A refusal (not one of their workshops) errors as ApiError.
+   * Everything kept per workshop follows {@link workshopId}; the shell rebuilds the page and says
+   * "Now working in …" (not this service: the snack bar would join the initial bundle). A refusal
+   * (not one of their workshops) errors as ApiError.
    */
   switchWorkshop(workshopId: string): Observable<User | null> {
     // Nothing happens until subscribed, like every other call here.
@@ -116,11 +115,6 @@ export class Session {
           // The refresh cookie (path /api/auth, same origin) comes along as it does for refresh:
           // the API revokes it and sets a new one for the new workshop.
           this.http.post<unknown>('/api/auth/workshop', body),
-        ).pipe(
-          map((user) => {
-            this.snackBar.open(`Now working in ${user.workshop.name}.`, 'OK', { duration: 5000 });
-            return user;
-          }),
         );
       }),
     );

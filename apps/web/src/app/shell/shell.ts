@@ -142,7 +142,11 @@ export default class Shell {
     if (workshopId === this.session.workshopId() || this.switching()) return;
     this.switching.set(true);
     this.session.switchWorkshop(workshopId).subscribe({
-      next: () => this.switching.set(false),
+      next: (user) => {
+        this.switching.set(false);
+        if (user)
+          this.snackBar.open(`Now working in ${user.workshop.name}.`, 'OK', { duration: 5000 });
+      },
       error: (err: unknown) => {
         this.switching.set(false);
         // A workshop the person no longer belongs to is refused with a field error naming it.
