@@ -53,6 +53,16 @@ async function open(role: Role, detail: AssessmentDetail) {
   };
 }
 
+/** Opens the Sign dialog, confirms and signs; the page's click and the sign request it sent. */
+async function signConfirmed(page: Awaited<ReturnType<typeof open>>) {
+  const signing = (await page.loader.getHarness(MatButtonHarness.with({ text: /Sign…/ }))).click();
+  const root = TestbedHarnessEnvironment.documentRootLoader(page.harness.fixture);
+  const dialog = await vi.waitFor(() => root.getHarness(MatDialogHarness));
+  await (await dialog.getHarness(MatCheckboxHarness)).check();
+  await (await dialog.getHarness(MatButtonHarness.with({ text: /^verified\s*Sign$/ }))).click();
+  return { signing, post: await sent(page.backend, (r) => r.url === `${URL}/sign`) };
+}
+
 /** The lotion with own exposure values and points of departure: linalool's margin is under 100. */
 function aFilledIn(overrides: Partial<AssessmentDetail> = {}): AssessmentDetail {
   return anAssessment({
@@ -333,14 +343,8 @@ describe('AssessmentPage', { timeout: 30_000 }, () => {
 
   it('says the packet changed and reloads it when signing is refused with packet_changed', async () => {
     const page = await open('assessor', aFilledIn());
-    const signing = (
-      await page.loader.getHarness(MatButtonHarness.with({ text: /Sign…/ }))
-    ).click();
-    const root = TestbedHarnessEnvironment.documentRootLoader(page.harness.fixture);
-    const dialog = await vi.waitFor(() => root.getHarness(MatDialogHarness));
-    await (await dialog.getHarness(MatCheckboxHarness)).check();
-    await (await dialog.getHarness(MatButtonHarness.with({ text: /^verified\s*Sign$/ }))).click();
-    (await sent(page.backend, (r) => r.url === `${URL}/sign`)).flush(
+    const { signing, post } = await signConfirmed(page);
+    post.flush(
       { error: { code: 'packet_changed', message: 'The packet has changed since it was read.' } },
       { status: 409, statusText: 'Conflict' },
     );
@@ -368,14 +372,8 @@ describe('AssessmentPage', { timeout: 30_000 }, () => {
 
   it("puts a refused signature's reasons beside the exposure picker and the conclusion", async () => {
     const page = await open('assessor', anAssessment());
-    const signing = (
-      await page.loader.getHarness(MatButtonHarness.with({ text: /Sign…/ }))
-    ).click();
-    const root = TestbedHarnessEnvironment.documentRootLoader(page.harness.fixture);
-    const dialog = await vi.waitFor(() => root.getHarness(MatDialogHarness));
-    await (await dialog.getHarness(MatCheckboxHarness)).check();
-    await (await dialog.getHarness(MatButtonHarness.with({ text: /^verified\s*Sign$/ }))).click();
-    (await sent(page.backend, (r) => r.url === `${URL}/sign`)).flush(
+    const { signing, post } = await signConfirmed(page);
+    post.flush(
       {
         error: {
           code: 'validation_failed',

@@ -51,8 +51,6 @@ async function openDialog(members: ReturnType<typeof member>[]) {
 }
 
 describe('ShareDialog', { timeout: 20_000 }, () => {
-  afterEach(() => TestBed.inject(MatDialog).closeAll());
-
   it('lists only the assessor members and shares the version with the one chosen', async () => {
     const { backend, dialog, closed } = await openDialog([
       member('u1', 'Ada Marsh', 'owner'),
