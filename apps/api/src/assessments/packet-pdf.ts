@@ -7,6 +7,11 @@ import {
   type SafetyPacket,
 } from '@batchproof/shared';
 import { LABEL_FONT_FAMILY } from '../labels/pdf';
+import {
+  dataTable as table,
+  type DocumentCell as Cell,
+  utcMinute,
+} from '../labels/pdf/document-blocks';
 
 /**
  * The pdfmake definition of a safety-assessment packet: a title block, the ten headings of Annex I
@@ -37,23 +42,7 @@ export function numberText(value: number): string {
 /** A value the assessor typed, as typed (float noise trimmed). */
 const entered = (value: number) => String(Number(value.toPrecision(8)));
 const orNone = (text: string | null | undefined, none = '—') => (text && text.trim() ? text : none);
-const when = (iso: string) => `${iso.slice(0, 10)} ${iso.slice(11, 16)} UTC`;
-
-type Cell = string | { text: string; bold?: boolean; color?: string; italics?: boolean };
-
-function table(headers: string[], rows: Cell[][], widths: (string | number)[], empty: string) {
-  if (rows.length === 0) return { text: empty, italics: true, margin: [0, 0, 0, 6] };
-  return {
-    table: {
-      headerRows: 1,
-      widths,
-      body: [headers.map((h) => ({ text: h, bold: true })), ...rows],
-    },
-    layout: 'lightHorizontalLines',
-    fontSize: 9,
-    margin: [0, 0, 0, 6],
-  };
-}
+const when = utcMinute;
 
 const partA = (index: number) => ({
   text: `${index + 1}. ${PART_A_HEADINGS[index]}`,

@@ -5,6 +5,7 @@ import {
   type Recall,
 } from '@batchproof/shared';
 import { LABEL_FONT_FAMILY, renderDocumentPdf } from '../labels/pdf';
+import { dataTable as table, utcMinute } from '../labels/pdf/document-blocks';
 
 /** What the summary needs beyond the recall itself. */
 export interface RecallSummaryContext {
@@ -22,24 +23,9 @@ const NOTICE_WORDS = {
   drill: 'Drill: not sent',
 } as const;
 
-/** A timestamp as day and minute in UTC, the same whoever prints it. */
-const when = (iso: string) => `${iso.slice(0, 10)} ${iso.slice(11, 16)} UTC`;
+const when = utcMinute;
 
 const heading = (text: string) => ({ text, style: 'heading' });
-
-function table(headers: string[], rows: string[][], widths: (string | number)[]) {
-  if (rows.length === 0) return { text: 'None.', italics: true, margin: [0, 0, 0, 6] };
-  return {
-    table: {
-      headerRows: 1,
-      widths,
-      body: [headers.map((h) => ({ text: h, bold: true })), ...rows],
-    },
-    layout: 'lightHorizontalLines',
-    fontSize: 9,
-    margin: [0, 0, 0, 6],
-  };
-}
 
 function timeline(recall: Recall, ctx: RecallSummaryContext, names: Map<string, string>) {
   const events: [string, string][] = [
