@@ -9,7 +9,6 @@ import {
   signal,
   untracked,
 } from '@angular/core';
-import { toObservable, toSignal } from '@angular/core/rxjs-interop';
 import { httpResource } from '@angular/common/http';
 import { NonNullableFormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
@@ -22,7 +21,7 @@ import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { RouterLink } from '@angular/router';
-import { map, of, startWith, switchMap } from 'rxjs';
+import { formValue } from '../../forms/form-value';
 import {
   batchSchema,
   type ComplianceMarket,
@@ -167,18 +166,7 @@ export default class PrintPage {
     return untracked(() => createPrintForm(this.fb, markets, first, lot));
   });
   /** The form's value as it changes, for the parts of the page that follow it. */
-  protected readonly value = toSignal(
-    toObservable(this.form).pipe(
-      switchMap((f) =>
-        f
-          ? f.valueChanges.pipe(
-              startWith(null),
-              map(() => f.getRawValue()),
-            )
-          : of(undefined),
-      ),
-    ),
-  );
+  protected readonly value = formValue(this.form);
   protected readonly stock = computed(() => {
     const id = this.value()?.stockId;
     const all = this.stocks.hasValue() ? this.stocks.value() : [];
