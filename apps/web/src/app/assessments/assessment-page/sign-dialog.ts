@@ -91,6 +91,10 @@ export interface SignDialogData {
       gap: 8px;
       align-items: flex-start;
     }
+    .statement mat-icon {
+      /* Kept whole beside a long statement at phone width (it shrank to a sliver). */
+      flex: none;
+    }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
