@@ -42,6 +42,13 @@ export async function listShares(
   return { items: rows.map((r) => toShareRecord(r, actor)) };
 }
 
+/** What the audit log keeps of a share given or taken back. */
+const shareDetail = (row: repo.ShareRow) => ({
+  formulaName: row.formulaName,
+  versionNumber: row.versionNumber,
+  assessorName: row.assessorName,
+});
+
 const refuse = (fieldErrors: Record<string, string[]>) =>
   new AppError(400, 'validation_failed', 'Some fields need attention.', fieldErrors);
 
@@ -87,11 +94,7 @@ export async function shareVersion(
       action: 'assessment.shared',
       subjectType: 'assessment_share',
       subjectId: id,
-      detail: {
-        formulaName: row.formulaName,
-        versionNumber: row.versionNumber,
-        assessorName: row.assessorName,
-      },
+      detail: shareDetail(row),
     });
     const mail = versionSharedMail({
       to: assessor!.email,
@@ -120,11 +123,7 @@ export async function unshareVersion(db: Database, actor: AuthUser, id: string) 
       action: 'assessment.unshared',
       subjectType: 'assessment_share',
       subjectId: id,
-      detail: {
-        formulaName: row.formulaName,
-        versionNumber: row.versionNumber,
-        assessorName: row.assessorName,
-      },
+      detail: shareDetail(row),
     });
   });
 }
