@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DEMO_PASSWORD, openFromNav, signIn } from './demo-steps';
+import { DEMO_PASSWORD, openFromNav, SECOND_WORKSHOP, signIn, switchWorkshop } from './demo-steps';
 import { type JourneyHarness, startJourneyHarness } from './journey-harness';
 
 describe('journey: every page of the demo workshop at phone, tablet and laptop widths', () => {
@@ -14,7 +14,7 @@ describe('journey: every page of the demo workshop at phone, tablet and laptop w
     await h?.close();
   });
 
-  // Some 25 pages at three widths each: about a minute on two idle cores, more on a busy machine.
+  // Some 30 pages at three widths each: about a minute on two idle cores, more on a busy machine.
   it('lays out the pages of a workshop in use with nothing sticking out sideways and no clipped text', async () => {
     const page = await h.newPage();
 
@@ -136,13 +136,53 @@ describe('journey: every page of the demo workshop at phone, tablet and laptop w
     await page.getByRole('columnheader', { name: 'How sure' }).waitFor();
     await h.screenshot(page, 'every-20-reference-list');
 
-    // An assessor reads the reference lists only: a formula page says why it does not open.
+    // Safety assessments: the list, the lotion's signed version 1, its safety notes, readiness.
+    await openFromNav(page, 'Assessments');
+    const signedRow = page
+      .getByRole('table', { name: 'Assessments' })
+      .getByRole('row')
+      .filter({ hasText: 'Everyday Body Lotion' })
+      .filter({ has: page.getByRole('cell', { name: '1', exact: true }) });
+    await signedRow.waitFor();
+    await h.screenshot(page, 'every-22-assessments');
+    await signedRow.getByRole('link', { name: 'Everyday Body Lotion' }).click();
+    await page
+      .getByRole('heading', { name: 'Everyday Body Lotion · version 1', level: 1 })
+      .waitFor();
+    await page.getByTestId('signed-note').waitFor();
+    await h.screenshot(page, 'every-23-assessment-signed');
+    await openFromNav(page, 'Formulas');
+    await page.getByRole('link', { name: 'Everyday Body Lotion' }).click();
+    await page.getByText('Version 2 · released').waitFor();
+    await page.getByRole('link', { name: 'Safety notes' }).click();
+    await page.getByRole('heading', { level: 1 }).waitFor();
+    await page.getByRole('textbox').first().waitFor();
+    await h.screenshot(page, 'every-24-safety-notes');
+    await openFromNav(page, 'Readiness');
+    await page
+      .getByRole('region', { name: 'Everyday Body Lotion' })
+      .getByRole('article', { name: 'European Union' })
+      .waitFor();
+    await h.screenshot(page, 'every-25-readiness');
+
+    // An assessor signs in to the other workshop they assess for (where they worked last), and
+    // reads the reference lists only: a formula page says why it does not open.
     const assessor = await h.newPage();
-    await signIn(h, assessor, 'assessor@hollowmere.example');
+    await signIn(h, assessor, 'assessor@hollowmere.example', null);
+    await switchWorkshop(assessor, SECOND_WORKSHOP);
     await assessor.goto('/formulas');
     await assessor.getByRole('heading', { name: /is not open to your role/ }).waitFor();
     await h.screenshot(assessor, 'every-21-not-open');
+    // Their assessments there: a shared version waiting, a draft with its inputs to fill.
+    await openFromNav(assessor, 'Assessments');
+    await assessor
+      .getByRole('button', { name: /^Start assessment of Driftwood Salt Soak/ })
+      .waitFor();
+    await h.screenshot(assessor, 'every-26-assessments-assessor');
+    await assessor.getByRole('link', { name: 'Low Tide Body Butter' }).click();
+    await assessor.getByRole('textbox', { name: 'Assessment conclusion' }).waitFor();
+    await h.screenshot(assessor, 'every-27-assessment-draft');
 
     expect(h.problems).toEqual([]);
-  }, 180_000);
+  }, 240_000);
 });
