@@ -21,7 +21,7 @@ import { messageOf } from '../../http/api-error';
 import { SubmissionKey } from '../../http/submission-key';
 import { ListCard } from '../../lists/list-card';
 import { AssessmentsApi } from '../assessments-api';
-import { UnshareDialog } from './unshare-dialog';
+import { confirmFirst } from '../../forms/confirm-dialog';
 
 type SortKey = 'formulaName' | 'versionNumber' | 'status' | 'assessorName' | 'signedAt';
 
@@ -147,28 +147,37 @@ export default class AssessmentList {
 
   /** The owner takes a share back, after saying yes. */
   protected unshare(share: ShareRecord): void {
-    this.dialog
-      .open<UnshareDialog, ShareRecord, boolean>(UnshareDialog, { data: share, width: '28rem' })
-      .afterClosed()
-      .subscribe((yes) => {
-        if (!yes) return;
-        this.busy.set(share.id);
-        this.api.unshare(share.id).subscribe({
-          next: () => {
-            this.busy.set(null);
-            this.snackBar.open(
-              `${share.formulaName} version ${share.versionNumber} is no longer shared with ${share.assessorName}.`,
-              'OK',
-              { duration: 5000 },
-            );
-            this.shares.reload();
-            this.result.reload();
-          },
-          error: (err: unknown) => {
-            this.busy.set(null);
-            this.snackBar.open(messageOf(err), 'OK', { duration: 8000 });
-          },
-        });
+    confirmFirst(
+      this.dialog,
+      {
+        title: `Stop sharing with ${share.assessorName}?`,
+        message:
+          `${share.assessorName} will no longer see ${share.formulaName} version ` +
+          `${share.versionNumber} or the assessment written from it. What they wrote is kept; ` +
+          'share the version again to give it back.',
+        keep: 'Keep sharing',
+        confirm: 'Unshare',
+      },
+      { width: '28rem' },
+    ).subscribe((yes) => {
+      if (!yes) return;
+      this.busy.set(share.id);
+      this.api.unshare(share.id).subscribe({
+        next: () => {
+          this.busy.set(null);
+          this.snackBar.open(
+            `${share.formulaName} version ${share.versionNumber} is no longer shared with ${share.assessorName}.`,
+            'OK',
+            { duration: 5000 },
+          );
+          this.shares.reload();
+          this.result.reload();
+        },
+        error: (err: unknown) => {
+          this.busy.set(null);
+          this.snackBar.open(messageOf(err), 'OK', { duration: 8000 });
+        },
       });
+    });
   }
 }

@@ -23,7 +23,7 @@ import { LotForm } from '../lot-form/lot-form';
 import { StockMovements } from '../stock-movements/stock-movements';
 import { EXPIRY_FLAGS, expiryState } from '../lot-expiry';
 import { LotsApi } from '../lots-api';
-import { DeleteLotDialog, type DeleteLotData } from './delete-lot-dialog';
+import { confirmFirst } from '../../forms/confirm-dialog';
 import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
 
 /**
@@ -117,15 +117,16 @@ export default class LotPage implements LeavesSafely {
 
   protected confirmDelete(lot: Lot): void {
     this.notice.set('');
-    this.dialog
-      .open<DeleteLotDialog, DeleteLotData, boolean>(DeleteLotDialog, {
-        data: { supplierLotNumber: lot.supplierLotNumber, materialName: lot.materialName },
-        autoFocus: 'dialog',
-      })
-      .afterClosed()
-      .subscribe((confirmed) => {
-        if (confirmed) this.delete(lot);
-      });
+    confirmFirst(this.dialog, {
+      title: `Delete lot ${lot.supplierLotNumber}?`,
+      message:
+        `The record of this delivery of ${lot.materialName} and its stock on hand go away. A lot ` +
+        'that a batch has used cannot be deleted, so batch records stay traceable.',
+      keep: 'Keep',
+      confirm: 'Delete lot',
+    }).subscribe((confirmed) => {
+      if (confirmed) this.delete(lot);
+    });
   }
 
   private delete(lot: Lot): void {

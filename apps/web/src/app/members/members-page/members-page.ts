@@ -34,10 +34,7 @@ import { messageOf } from '../../http/api-error';
 import { InvitationList } from '../invitation-list/invitation-list';
 import { InviteForm } from '../invite-form/invite-form';
 import { MembersApi } from '../members-api';
-import {
-  RemoveMemberDialog,
-  type RemoveMemberData,
-} from '../remove-member-dialog/remove-member-dialog';
+import { confirmFirst } from '../../forms/confirm-dialog';
 import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
 import { ProductionSettingsCard } from '../production-settings/production-settings';
 import { WorkshopLabelDetails } from '../workshop-label-details/workshop-label-details';
@@ -139,19 +136,17 @@ export default class MembersPage {
   }
 
   protected confirmRemoval(member: Member): void {
-    const data: RemoveMemberData = {
-      name: member.name,
-      workshopName: this.me()?.workshop.name ?? 'the workshop',
-    };
-    this.dialog
-      .open<RemoveMemberDialog, RemoveMemberData, boolean>(RemoveMemberDialog, {
-        data,
-        autoFocus: 'dialog',
-      })
-      .afterClosed()
-      .subscribe((confirmed) => {
-        if (confirmed) this.remove(member);
-      });
+    const workshopName = this.me()?.workshop.name ?? 'the workshop';
+    confirmFirst(this.dialog, {
+      title: `Remove ${member.name}?`,
+      message:
+        `${member.name} will no longer be able to work in ${workshopName}; any other ` +
+        'workshops they belong to keep them. The records they made stay as they are.',
+      keep: 'Keep',
+      confirm: 'Remove',
+    }).subscribe((confirmed) => {
+      if (confirmed) this.remove(member);
+    });
   }
 
   protected revoke(invitation: Invitation): void {

@@ -44,7 +44,7 @@ import { LotChoices } from '../lot-choices';
 import { AmendmentForm } from './amendment-form';
 import { batchForm, type BatchForm, readUnitWeights, recordBody, recordPath } from './batch-form';
 import { BatchRecordView } from './batch-record-view';
-import { DeleteBatchDialog } from './delete-batch-dialog';
+import { confirmFirst } from '../../forms/confirm-dialog';
 import { WeighSheet } from './weigh-sheet';
 
 /**
@@ -248,28 +248,29 @@ export default class BatchPage implements LeavesSafely {
 
   protected confirmDelete(b: Batch): void {
     this.notice.set('');
-    this.dialog
-      .open<DeleteBatchDialog, { batchCode: string }, boolean>(DeleteBatchDialog, {
-        data: { batchCode: b.batchCode },
-        autoFocus: 'dialog',
-      })
-      .afterClosed()
-      .subscribe((confirmed) => {
-        if (!confirmed) return;
-        this.sending.set(true);
-        this.api.remove(b.id).subscribe({
-          next: () => {
-            this.sending.set(false);
-            this.deleted = true;
-            this.snackBar.open(`Draft batch ${b.batchCode} is deleted.`, 'OK', { duration: 5000 });
-            void this.router.navigateByUrl('/production');
-          },
-          error: (err: unknown) => {
-            this.sending.set(false);
-            this.notice.set(messageOf(err));
-          },
-        });
+    confirmFirst(this.dialog, {
+      title: `Delete draft batch ${b.batchCode}?`,
+      message:
+        'Its weigh sheet and everything recorded on it go away. No stock was taken yet: lots are ' +
+        'drawn down only when a batch is released.',
+      keep: 'Keep',
+      confirm: 'Delete draft',
+    }).subscribe((confirmed) => {
+      if (!confirmed) return;
+      this.sending.set(true);
+      this.api.remove(b.id).subscribe({
+        next: () => {
+          this.sending.set(false);
+          this.deleted = true;
+          this.snackBar.open(`Draft batch ${b.batchCode} is deleted.`, 'OK', { duration: 5000 });
+          void this.router.navigateByUrl('/production');
+        },
+        error: (err: unknown) => {
+          this.sending.set(false);
+          this.notice.set(messageOf(err));
+        },
       });
+    });
   }
 
   protected downloadSheet(b: Batch): void {
