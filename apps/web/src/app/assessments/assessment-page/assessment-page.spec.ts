@@ -122,6 +122,13 @@ describe('AssessmentPage', { timeout: 30_000 }, () => {
     expect(text).toContain('Itchy forearms after use');
     expect(text).toContain('Ingredients: Aqua, Glycerin, Parfum, Linalool.');
     expect(text).toContain('Avoid contact with eyes.');
+    // The market's allergens in the formula's own allergen table, with the threshold used.
+    const allergens = page.el().querySelector('table[aria-label="Fragrance allergens, EU"]')!;
+    expect(allergens.querySelector('thead')?.textContent).toContain('EU');
+    const linalool = allergens.querySelector('tbody tr')!.textContent!.replace(/\s+/g, ' ');
+    expect(linalool).toContain('Linalool');
+    expect(linalool).toContain('Named');
+    expect(linalool).toContain('over 0.001 %');
     expect(text).toContain('Safety data sheet');
     expect(text).toContain('261101-EBL-1');
     expect(text).toContain('Smooth onto clean skin.');

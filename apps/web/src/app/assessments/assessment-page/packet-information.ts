@@ -3,6 +3,7 @@ import { ChangeDetectionStrategy, Component, input } from '@angular/core';
 import { MatIcon } from '@angular/material/icon';
 import type { ColourantVerdict, SafetyPacket } from '@batchproof/shared';
 import { CalendarDayPipe } from '../../dates/calendar-day-pipe';
+import { AllergenTable } from '../../formulas/live-checks/allergen-table';
 import { SeverityLabel } from '../../formulas/severity/severity-label';
 
 const VERDICT_WORDS: Record<ColourantVerdict['verdict'], { word: string; icon: string }> = {
@@ -20,7 +21,7 @@ const VERDICT_WORDS: Record<ColourantVerdict['verdict'], { word: string; icon: s
  */
 @Component({
   selector: 'bp-packet-information',
-  imports: [CalendarDayPipe, DecimalPipe, MatIcon, SeverityLabel],
+  imports: [AllergenTable, CalendarDayPipe, DecimalPipe, MatIcon, SeverityLabel],
   template: `
     @let p = packet();
     @if (p.identity; as id) {
@@ -95,35 +96,7 @@ const VERDICT_WORDS: Record<ColourantVerdict['verdict'], { word: string; icon: s
             </table>
           </div>
         }
-        @if (m.allergens.length > 0) {
-          <div class="scroller">
-            <table [attr.aria-label]="'Fragrance allergens, ' + m.market">
-              <thead>
-                <tr>
-                  <th scope="col">Allergen</th>
-                  <th scope="col" class="num">In product</th>
-                  <th scope="col">On the label</th>
-                </tr>
-              </thead>
-              <tbody>
-                @for (a of m.allergens; track a.inci) {
-                  <tr>
-                    <th scope="row">{{ a.inci }}</th>
-                    <td class="num">{{ a.percent | number: '1.3-4' }} %</td>
-                    <td>
-                      {{ a.declared ? 'Named' : 'Not named' }}
-                      @if (a.thresholdPercent !== null) {
-                        <span class="muted">(over {{ a.thresholdPercent }} %)</span>
-                      }
-                    </td>
-                  </tr>
-                }
-              </tbody>
-            </table>
-          </div>
-        } @else {
-          <p class="muted">No fragrance allergens declared by the suppliers.</p>
-        }
+        <bp-allergen-table [byMarket]="[m]" [label]="'Fragrance allergens, ' + m.market" />
       </section>
     } @empty {
       <p class="muted">No market chosen for this version.</p>

@@ -1,7 +1,13 @@
 import { DecimalPipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import { MatIcon } from '@angular/material/icon';
-import type { AllergenResult, ComplianceMarket, EvaluationResult } from '@batchproof/shared';
+import type { AllergenResult, ComplianceMarket } from '@batchproof/shared';
+
+/** One market's allergens, as the live evaluation and the safety packet both hold them. */
+export interface MarketAllergens {
+  market: ComplianceMarket;
+  allergens: readonly AllergenResult[];
+}
 
 interface AllergenRow {
   inci: string;
@@ -12,6 +18,7 @@ interface AllergenRow {
 /**
  * Fragrance allergens in the product: the percent of the finished product, and per market
  * whether the label must name it and the threshold used (0.001 % leave-on, 0.01 % rinse-off).
+ * Shown in the formula's live checks (every market) and in the safety packet (one market each).
  */
 @Component({
   selector: 'bp-allergen-table',
@@ -21,7 +28,7 @@ interface AllergenRow {
       <p class="none">No fragrance allergens declared by the suppliers of these materials.</p>
     } @else {
       <div class="scroller">
-        <table aria-label="Fragrance allergens">
+        <table [attr.aria-label]="label()">
           <thead>
             <tr>
               <th scope="col">Allergen</th>
@@ -120,21 +127,24 @@ interface AllergenRow {
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class AllergenTable {
-  readonly result = input.required<EvaluationResult>();
+  /** The markets, in column order, each with its allergens. */
+  readonly byMarket = input.required<readonly MarketAllergens[]>();
+  /** The table's accessible name. */
+  readonly label = input('Fragrance allergens');
 
-  protected readonly markets = computed(() => this.result().markets);
+  protected readonly markets = computed(() => this.byMarket().map((m) => m.market));
   protected readonly rows = computed<AllergenRow[]>(() => {
-    const { allergens, markets } = this.result();
+    const byMarket = this.byMarket();
     const names = new Map<string, number>();
-    for (const m of markets) for (const a of allergens[m] ?? []) names.set(a.inci, a.percent);
+    for (const m of byMarket) for (const a of m.allergens) names.set(a.inci, a.percent);
     return [...names.entries()]
       .sort((a, b) => b[1] - a[1])
       .map(([inci, percent]) => ({
         inci,
         percent,
-        byMarket: markets.map((market) => ({
+        byMarket: byMarket.map(({ market, allergens }) => ({
           market,
-          result: allergens[market]?.find((a) => a.inci === inci),
+          result: allergens.find((a) => a.inci === inci),
         })),
       }));
   });

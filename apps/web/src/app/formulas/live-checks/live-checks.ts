@@ -84,7 +84,7 @@ const MARKET_NAMES = new Map(MARKETS.map((m) => [m.code, m.name]));
       </section>
       <section aria-labelledby="live-allergens">
         <h3 id="live-allergens">Fragrance allergens</h3>
-        <bp-allergen-table [result]="result" />
+        <bp-allergen-table [byMarket]="allergens()" />
       </section>
     }
     @if (live.fizz; as fizz) {
@@ -190,6 +190,14 @@ export class LiveChecks {
       warn: findings.filter((f) => f.severity === 'warn').length,
       info: findings.filter((f) => f.severity === 'info').length,
     };
+  });
+  /** The allergens of each market checked, for the allergen table. */
+  protected readonly allergens = computed(() => {
+    const result = this.evaluation().result;
+    return (result?.markets ?? []).map((market) => ({
+      market,
+      allergens: result?.allergens[market] ?? [],
+    }));
   });
   /** Each approved substitute checked, and what it adds to the formula's own findings. */
   protected readonly substitutesChecked = computed(() => {
