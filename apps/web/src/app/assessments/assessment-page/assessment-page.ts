@@ -1,4 +1,4 @@
-import { DecimalPipe } from '@angular/common';
+import { DecimalPipe, NgTemplateOutlet } from '@angular/common';
 import {
   ChangeDetectionStrategy,
   Component,
@@ -81,6 +81,7 @@ export const PACKET_CHANGED_NOTICE =
     MatProgressBar,
     MatSelect,
     MatSuffix,
+    NgTemplateOutlet,
     PacketInformation,
     ReactiveFormsModule,
     RouterLink,
