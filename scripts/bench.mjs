@@ -12,6 +12,7 @@ const benches = [
   'apps/api/bench/list-bench.ts',
   'apps/api/bench/import-bench.ts',
   'apps/api/bench/label-pdf-bench.ts',
+  'apps/api/bench/packet-bench.ts',
   'apps/api/bench/public-page-bench.ts',
   'apps/api/bench/trace-bench.ts',
   'scripts/initial-bundle-check.mjs',

@@ -4,6 +4,7 @@ import { execFileSync } from 'node:child_process';
 import type { AddressInfo } from 'node:net';
 import path from 'node:path';
 import { sql } from 'drizzle-orm';
+import type { Role } from '@batchproof/shared';
 import { buildWorkshop } from '../../../tests/support/workshop-builder';
 import { createApp } from '../src/app';
 import { applyMigrations, openDatabase } from '../src/db/database';
@@ -13,10 +14,10 @@ const root = path.resolve(import.meta.dirname, '../../..');
 
 /**
  * Opens TEST_DATABASE_URL (else the project's test database) with a pool of `poolSize`, applies
- * the migrations, builds a workshop named `name` and serves the app. `close` stops the server,
- * deletes the workshop and closes the pool.
+ * the migrations, builds a workshop named `name` with an owner (and a member of each of `roles`)
+ * and serves the app. `close` stops the server, deletes the workshop and closes the pool.
  */
-export async function startBench(name: string, poolSize: number) {
+export async function startBench(name: string, poolSize: number, roles: readonly Role[] = []) {
   const url =
     process.env['TEST_DATABASE_URL'] ??
     execFileSync('node', [path.join(root, 'scripts/test-db-url.mjs')], {
@@ -25,7 +26,7 @@ export async function startBench(name: string, poolSize: number) {
   const handle = openDatabase(url, poolSize);
   await applyMigrations(handle.db, path.join(root, 'drizzle'));
   const { db } = handle;
-  const w = await buildWorkshop(db, SECRET, { name, roles: ['owner'] });
+  const w = await buildWorkshop(db, SECRET, { name, roles: ['owner', ...roles] });
   const app = createApp({
     db,
     mailer: { send: async () => undefined, close: () => undefined },
@@ -36,19 +37,18 @@ export async function startBench(name: string, poolSize: number) {
   const server = app.listen(0, '127.0.0.1');
   await new Promise((resolve) => server.once('listening', resolve));
   const base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
-  const headers = {
-    Authorization: `Bearer ${w.members.owner.token}`,
-    'Content-Type': 'application/json',
-  };
   return {
     db,
     w,
     base,
-    /** A JSON request as the workshop's owner; throws with the answer unless it is 2xx. */
-    async call(method: string, route: string, body?: unknown) {
+    /**
+     * A JSON request as the workshop's owner (or the member `as`); throws with the answer unless
+     * it is 2xx.
+     */
+    async call(method: string, route: string, body?: unknown, as = w.members.owner) {
       const res = await fetch(base + route, {
         method,
-        headers,
+        headers: { Authorization: `Bearer ${as.token}`, 'Content-Type': 'application/json' },
         body: body && JSON.stringify(body),
       });
       const text = await res.text();
