@@ -99,13 +99,17 @@ const lotionMaterials = (): [MaterialCreate, number][] => [
 
 /**
  * Inserts the lotion's 40 materials, each with a safety data sheet on file, into a workshop and
- * answers the body that creates the formula (leave-on, IFRA category 5A, four markets) and a
- * product identity for it.
+ * answers its lines, the body that creates the formula (leave-on, IFRA category 5A, four
+ * markets) and a product identity for it.
  */
 export async function buildLargeLotion(
   db: Database,
   workshopId: string,
-): Promise<{ formula: FormulaCreate; identity: ProductIdentityInput }> {
+): Promise<{
+  lines: { materialId: string; grams: number }[];
+  formula: FormulaCreate;
+  identity: ProductIdentityInput;
+}> {
   const lines: { materialId: string; grams: number }[] = [];
   for (const [body, grams] of lotionMaterials()) {
     const material = await buildMaterial(db, workshopId, body);
@@ -133,6 +137,7 @@ export async function buildLargeLotion(
     netQuantity: { amount: 200, unit: 'mL' },
   });
   return {
+    lines,
     formula: aFormula(lines, {
       name: 'Rich Body Lotion',
       productType: 'lotion',

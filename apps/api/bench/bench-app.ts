@@ -49,7 +49,7 @@ export async function startBench(name: string, poolSize: number, roles: readonly
       const res = await fetch(base + route, {
         method,
         headers: { Authorization: `Bearer ${as.token}`, 'Content-Type': 'application/json' },
-        body: body && JSON.stringify(body),
+        body: body === undefined ? undefined : JSON.stringify(body),
       });
       const text = await res.text();
       if (!res.ok) throw new Error(`${method} ${route} → ${res.status} ${text.slice(0, 300)}`);
