@@ -9,7 +9,7 @@
 //   GET /api/assessments/:id/packet.pdf (drawn in the PDF worker)         target median < 2,000 ms
 //     and the main thread's longest stall meanwhile (as label-pdf-bench)  target < 100 ms
 //   POST /api/assessments/:id/sign (once: packet rebuilt, hashed, stored) target < 300 ms
-//   GET /api/assessments/:id once signed (the stored packet)               target p95 < 300 ms
+//   GET /api/assessments/:id once signed (the stored packet)              target p95 < 300 ms
 // The targets are ours, with no published source: a screen action a maker feels as instant
 // (under about 300 ms), a document download that does not feel stuck (a couple of seconds), and a
 // server whose other requests never wait a noticeable 100 ms behind a PDF. Prints the numbers
