@@ -51,9 +51,10 @@ describe('journey: printing the demo foaming fizzer on a part-used 30-up sheet',
     await page.getByRole('radio', { name: 'Small item with QR code' }).click();
     await page.getByRole('checkbox', { name: /The outer pack, a tag or a card carries/ }).click();
     await page.getByRole('radio', { name: /^Position 7,/ }).click();
-    expect(
-      await page.getByRole('radio', { name: /^Position 7,/ }).getAttribute('aria-checked'),
-    ).toBe('true');
+    // The page redraws after the click has returned: wait for it rather than read at once.
+    await expect
+      .poll(() => page.getByRole('radio', { name: /^Position 7,/ }).getAttribute('aria-checked'))
+      .toBe('true');
     await page.getByLabel('Copies per market').fill('3');
     await page.getByLabel('Lot code').fill(LOT);
     await h.screenshot(page, 'labels-01-print-form');

@@ -61,7 +61,15 @@ describe('journey: a safety assessment from share to signature, and the market r
     await finding
       .getByText(/Version 2 has no signed safety assessment; version 1 was assessed/)
       .first()
-      .waitFor();
+      .waitFor()
+      .catch(async (error: unknown) => {
+        // Say what the page showed instead, so a failure here can be read from the log alone.
+        const live = await owner
+          .locator('aside.consequences')
+          .innerText()
+          .catch(() => '(none)');
+        throw new Error(`${String(error)}\nThe live checks panel showed:\n${live}`);
+      });
     await h.screenshot(owner, 'safety-01-formula-assessment-missing');
 
     // …and shares it with the demo assessor.
