@@ -34,11 +34,21 @@ const { chosen, needs } = selection;
 ensureNodeModules();
 const env = { ...process.env, FORCE_COLOR: '0' };
 if (needs.has('chromium')) env.CHROMIUM_PATH = ensureChromium();
+/**
+ * Each suite that needs a database gets a fresh one of its own (`batchproof_test_<suite>`): the
+ * API specs change the demo workshop (one signs the lotion's version 2), and the journeys must
+ * start from the demo as seeded, whatever ran before them.
+ */
+const databaseUrls = new Map();
 if (needs.has('database')) {
   const cluster = ensureCluster(dbPort);
   // Every way this script ends, Ctrl-C included, stops the cluster if this script started it.
   stopClusterOnExit(cluster);
-  env.TEST_DATABASE_URL = ensureDatabase(cluster, 'batchproof_test', { fresh: true });
+  for (const suite of chosen.filter((s) => s.needs.includes('database')))
+    databaseUrls.set(
+      suite.name,
+      ensureDatabase(cluster, `batchproof_test_${suite.name}`, { fresh: true }),
+    );
 }
 if (needs.has('webBuild')) ensureWebBuilt();
 rmSync(outDir, { recursive: true, force: true });
@@ -68,7 +78,10 @@ function runSuite(suite) {
         '--reporter=json',
         `--outputFile.json=${path.join(outDir, `${suite.name}.json`)}`,
       ];
-  const child = spawn('npx', args, { cwd: root, env, stdio: 'inherit' });
+  const suiteEnv = databaseUrls.has(suite.name)
+    ? { ...env, TEST_DATABASE_URL: databaseUrls.get(suite.name) }
+    : env;
+  const child = spawn('npx', args, { cwd: root, env: suiteEnv, stdio: 'inherit' });
   current = { name: suite.name, child };
   return new Promise((resolve) => {
     child.once('error', () => resolve(1));
