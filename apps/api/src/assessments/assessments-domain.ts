@@ -111,8 +111,9 @@ async function toDetail(
   db: Database,
   actor: AuthUser,
   row: repo.AssessmentRow,
+  built?: { packet: SafetyPacket; contentHash: string },
 ): Promise<AssessmentDetail> {
-  const { packet, contentHash } = await packetOf(db, actor, row);
+  const { packet, contentHash } = built ?? (await packetOf(db, actor, row));
   return {
     id: row.id,
     status: row.status,
@@ -198,7 +199,14 @@ export async function updateAssessment(
   input: AssessmentUpdate,
 ) {
   return db.transaction(async (tx) => {
-    const row = await ownAssessmentForChange(tx, actor, id);
+    const found = await ownAssessmentForChange(tx, actor, id);
+    // One packet, built with the new inputs: it checks the substance keys and is the answer.
+    const row = {
+      ...found,
+      exposure: input.exposure,
+      substances: input.substances,
+      partB: input.partB,
+    };
     const packet = await loadSafetyPacket(tx, actor.workshopId, forPacket(row));
     const fieldErrors = unknownSubstances(packet, input);
     if (Object.keys(fieldErrors).length > 0) {
@@ -217,7 +225,7 @@ export async function updateAssessment(
       subjectId: id,
       detail: { formulaName: row.formulaName, versionNumber: row.versionNumber },
     });
-    return getAssessment(tx, actor, id);
+    return toDetail(tx, actor, row, { packet, contentHash: packetHash(packet) });
   });
 }
 
