@@ -124,3 +124,11 @@ describe('Shell workshop switcher', () => {
     backend.expectNone('/api/auth/workshop');
   });
 });
+
+describe('Shell navigation', () => {
+  it('has no "Coming soon" heading once every entry has its page', async () => {
+    const { root } = await openShell([]);
+    expect(root.querySelector('nav a[href="/assessments"]')).not.toBeNull();
+    expect(root.querySelector('#soon-heading')).toBeNull();
+  });
+});
